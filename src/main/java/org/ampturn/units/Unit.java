@@ -1,0 +1,66 @@
+package org.ampturn.units;
+
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
+
+/**
+ * A unit of measure: a symbol, a factor to SI, an offset (only the degree Celsius has one) and a
+ * dimension. Units are read from the text engineers type: {@code mH}, {@code kohm}, {@code kΩ},
+ * {@code A/mm^2}, {@code W/(m²·K)}, {@code degC}.
+ */
+public final class Unit {
+    private static final Map<String, Unit> CACHE = new ConcurrentHashMap<>();
+
+    private final String symbol;
+    private final double factor;
+    private final double offset;
+    private final Dimension dimension;
+
+    Unit(String symbol, double factor, double offset, Dimension dimension) {
+        this.symbol = symbol;
+        this.factor = factor;
+        this.offset = offset;
+        this.dimension = dimension;
+    }
+
+    /** Reads a unit expression; fails with a message that names the text and the position. */
+    public static Unit parse(String text) {
+        Unit u = CACHE.get(text);
+        if (u == null) {
+            u = new UnitParser(text).parse();
+            if (CACHE.size() < 10_000) CACHE.put(text, u);
+        }
+        return u;
+    }
+
+    public String symbol() {
+        return symbol;
+    }
+
+    /** Multiply a value in this unit by this to get SI (ignoring any offset). */
+    public double factor() {
+        return factor;
+    }
+
+    public Dimension dimension() {
+        return dimension;
+    }
+
+    /** True for the degree Celsius, whose zero is not the SI zero. */
+    public boolean isOffset() {
+        return offset != 0;
+    }
+
+    public double toSi(double value) {
+        return value * factor + offset;
+    }
+
+    public double fromSi(double si) {
+        return (si - offset) / factor;
+    }
+
+    @Override
+    public String toString() {
+        return symbol;
+    }
+}
