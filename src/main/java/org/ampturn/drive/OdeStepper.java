@@ -41,7 +41,8 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         scale[VC] = sv.vs + Math.max(sv.v0, 0);
         scale[X] = sv.moves ? sv.load.stroke() : 1;
         scale[V] = sv.moves ? sv.load.stroke() / sv.tEnd : 1;
-        for (int k = ESUP; k <= EMECH; k++) scale[k] = eRef;
+        // the energy integrals start at zero and grow; a loose absolute floor would let their error pass unseen
+        for (int k = ESUP; k <= EMECH; k++) scale[k] = 1e-6 * eRef;
         scale[Q] = iRef * sv.tEnd;
         double[] abs = new double[DIM];
         double[] rel = new double[DIM];

@@ -27,6 +27,9 @@ final class Solver {
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
             O_F = 8, O_DVC = 9, O_ACC = 10, O_N = 11;
 
+    /** A current beyond this (A) on an accepted step is taken as a diverging solution. */
+    static final double DIVERGED_AMPS = 1e7;
+
     final Circuit circuit;
     final Drive drive;
     final Load load;
@@ -141,9 +144,9 @@ final class Solver {
     void eval(Elec e, Mech m, double[] s, double[] o) {
         double lam = s[LAM], x = s[X], v = s[V];
         double i = e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
-        if (!Double.isFinite(i) || Math.abs(i) > 1e7) {
-            throw new SolveException("the coil current is " + (Double.isFinite(i) ? amp(i) : "not finite") + " at flux linkage "
-                    + q(lam, Dimension.FLUX) + " near t = " + sec(t) + ": the solution diverges (check the resistance and the core's saturation)");
+        if (!Double.isFinite(i)) {
+            throw new SolveException("the coil current is not finite at flux linkage " + q(lam, Dimension.FLUX) + " near t = " + sec(t)
+                    + ": the core model gave no current there, so the solution diverges (check the resistance and the core's saturation)");
         }
         double vsw, dl, psup = 0, pdrv = 0, pcl = 0, dvc = 0;
         switch (e) {
@@ -270,6 +273,10 @@ final class Solver {
 
     private void observe(double tt, double[] s, double[] o, double stored) {
         double vsw = o[O_VSW], i = o[O_I];
+        if (Math.abs(i) > DIVERGED_AMPS) {
+            throw new SolveException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
+                    + q(s[LAM], Dimension.FLUX) + "): the solution diverges (check the resistance and the core's saturation)");
+        }
         if (vsw > peakSw) { peakSw = vsw; peakSwT = tt; }
         if (i > peakI) { peakI = i; peakIT = tt; }
         if (stored > peakStored) { peakStored = stored; peakStoredT = tt; }
