@@ -113,7 +113,12 @@ public final class Solve {
         return y;
     }
 
+    /** A number to 6 significant digits without trailing zeros: 100, 412.37, 1.5e-9. */
     private static String num(double v) {
-        return Column.number(v, 6);
+        String s = Column.number(v, 6);
+        int e = s.indexOf('e');
+        String mant = e < 0 ? s : s.substring(0, e);
+        if (mant.contains(".")) mant = mant.replaceFirst("0+$", "").replaceFirst("\\.$", "");
+        return e < 0 ? mant : mant + s.substring(e);
     }
 }
