@@ -54,6 +54,11 @@ public final class Workspace implements Closeable {
         return w;
     }
 
+    /** A workspace without a journal (when none can be written). */
+    public static Workspace unjournaled(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust) {
+        return new Workspace(evaluator, fresh, trust, null, null);
+    }
+
     /** A workspace with the user's trust store and journal directory ({@link AmpturnHome}). */
     public static Workspace forUser(Evaluator evaluator, Supplier<Evaluator> fresh) throws IOException {
         return of(evaluator, fresh, TrustStore.user(), AmpturnHome.journals());
@@ -66,6 +71,11 @@ public final class Workspace implements Closeable {
     /** The file the worksheet was opened from or saved to, or null. */
     public Path file() {
         return file;
+    }
+
+    /** Names the file a new worksheet will be saved to ({@code ampturn new.atw} on a file not yet written). */
+    public void useFile(Path f) {
+        file = f;
     }
 
     /** True when there is work that is not in the file. */
@@ -143,6 +153,8 @@ public final class Workspace implements Closeable {
 
     /** Adds a prose note. */
     public void note(String text) {
+        List<Block> b = sheet.blocks();
+        if (!b.isEmpty() && b.get(b.size() - 1) instanceof Block.Entry) sheet = sheet.with(new Block.Blank());
         for (String line : text.split("\n")) {
             Block.Note n = new Block.Note(line.strip());
             sheet = sheet.with(n);
