@@ -76,4 +76,11 @@ public final class Ampturn {
 
     /** A quantity from text: {@code q("4.7 mH")}, {@code q("2.5 A/mm^2")}. */
     public static Quantity q(String text) { return Quantity.parse(text); }
+
+    // ---- wire ----
+    /** An AWG copper magnet wire, heavy build (ASTM B258): {@code awg(24)}, {@code awg(24.5)}. */
+    public static org.ampturn.wire.Wire awg(double gauge) { return org.ampturn.wire.Wire.awg(gauge); }
+
+    /** An AWG wire from text: {@code awg("4/0")}, {@code awg("00")}. */
+    public static org.ampturn.wire.Wire awg(String gauge) { return org.ampturn.wire.Wire.awg(gauge); }
 }

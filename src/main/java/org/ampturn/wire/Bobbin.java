@@ -107,6 +107,15 @@ public final class Bobbin {
     }
 
     @Override
+    public boolean equals(Object o) {
+        return o instanceof Bobbin b && b.width == width && b.depth == depth && Double.compare(b.innerDiameter, innerDiameter) == 0
+                && Double.compare(b.sideA, sideA) == 0 && Double.compare(b.sideB, sideB) == 0;
+    }
+
+    @Override
+    public int hashCode() { return java.util.Objects.hash(width, depth, innerDiameter, sideA, sideB); }
+
+    @Override
     public String toString() {
         String tube = isRound() ? "Ø" + innerDiameter() + " tube" : tubeSideA() + " × " + tubeSideB() + " tube";
         return "bobbin " + width() + " wide, " + depth() + " deep on a " + tube;

@@ -181,7 +181,7 @@ public final class Winding {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof Winding w && w.turns == turns && w.wire.equals(wire) && w.bobbin == bobbin && w.packing == packing;
+        return o instanceof Winding w && w.turns == turns && w.wire.equals(wire) && w.bobbin.equals(bobbin) && w.packing == packing;
     }
 
     @Override
