@@ -196,8 +196,21 @@ public final class Winding {
      * MMF portion (a single winding whose field rises from zero at the tube to the outside), at 20 °C.
      */
     public double acResistanceFactor(Quantity frequency) {
+        return acFactorAt(Require.positive("frequency", frequency, Dimension.FREQUENCY), Conductor.T20);
+    }
+
+    /**
+     * AC resistance at a frequency and temperature: R_dc(T) × F_R (Dowell, with the skin depth of the
+     * conductor at T), for a sinusoidal current of that frequency.
+     */
+    public Quantity acResistance(Quantity frequency, Quantity temperature) {
         double f = Require.positive("frequency", frequency, Dimension.FREQUENCY);
-        double delta = SkinEffect.depthAt(wire.conductor().rho20(), f);
+        double k = Wire.kelvin(temperature);
+        return Quantity.of(resistanceAt(k) * acFactorAt(f, k), Dimension.RESISTANCE);
+    }
+
+    private double acFactorAt(double f, double kelvin) {
+        double delta = SkinEffect.depthAt(wire.conductor().resistivityAt(kelvin), f);
         double pitch = bobbin.widthM() / turnsPerLayer();
         double dd = Dowell.deltaOfRoundWire(wire.bareDiameterM(), pitch, delta);
         return Dowell.factorAt(dd, layers());

@@ -183,8 +183,9 @@ public final class Session implements AutoCloseable {
                 rest = remaining;
             }
             if (failed) kind = Kind.ERROR;
-            if (!added.isEmpty()) entries.add(added);
-            return new Outcome(entrySource, kind, results, interrupted);
+            boolean kept = added.stream().anyMatch(sn -> shell.status(sn).isActive());
+            if (kept) entries.add(added);
+            return new Outcome(entrySource, kind, results, interrupted, kept);
         }
     }
 
