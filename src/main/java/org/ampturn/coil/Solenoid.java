@@ -159,8 +159,8 @@ public final class Solenoid implements AirCoil {
 
     /** Current-sheet inductance (H) of N turns over length l (m) at mean diameter D (m). */
     public static double inductanceAt(double turns, double length, double diameter) {
-        double h = Math.hypot(diameter, length);
-        double kn = Elliptic.nagaoka(diameter / h, length / h);
+        double inv = 1 / Math.sqrt(diameter * diameter + length * length);
+        double kn = Elliptic.nagaoka(diameter * inv, length * inv);
         return Elliptic.MU0 * turns * turns * Math.PI * diameter * diameter / (4 * length) * kn;
     }
 
@@ -173,7 +173,9 @@ public final class Solenoid implements AirCoil {
     /** Wheeler 1982 (H). */
     public static double wheeler1982At(double turns, double length, double diameter) {
         double a = diameter / 2, r = length / a;
-        return Elliptic.MU0 * turns * turns * a * (Math.log(1 + Math.PI * a / length) + 1 / (2.3 + 1.6 * r + 0.44 * r * r));
+        double q = 2.3 + r * (1.6 + 0.44 * r);
+        // ln(1 + π/r) + 1/q = (q·ln((r + π)/r) + 1)/q: one division for both terms' ratio
+        return Elliptic.MU0 * turns * turns * a * (Math.log((r + Math.PI) / r) + 1 / q);
     }
 
     /** Rosa's correction μ0·a·N·(A + B) in H. */
