@@ -172,10 +172,12 @@ public final class Solenoid implements AirCoil {
 
     /** Wheeler 1982 (H). */
     public static double wheeler1982At(double turns, double length, double diameter) {
-        double a = diameter / 2, r = length / a;
-        double q = 2.3 + r * (1.6 + 0.44 * r);
-        // ln(1 + π/r) + 1/q = (q·ln((r + π)/r) + 1)/q: one division for both terms' ratio
-        return Elliptic.MU0 * turns * turns * a * (Math.log((r + Math.PI) / r) + 1 / q);
+        double a = diameter / 2, l = length;
+        // ln(1 + πa/l) + 1/(2.3 + 1.6 l/a + 0.44 (l/a)²), the second term as a²/(2.3a² + 1.6al + 0.44l²):
+        // two independent divisions, which the processor overlaps
+        double u = a / l;
+        double t2 = a * a / (a * (2.3 * a + 1.6 * l) + 0.44 * l * l);
+        return Elliptic.MU0 * turns * turns * a * (Math.log(1 + Math.PI * u) + t2);
     }
 
     /** Rosa's correction μ0·a·N·(A + B) in H. */
