@@ -30,6 +30,14 @@ final class Solver {
     /** A current beyond this (A) on an accepted step is taken as a diverging solution. */
     static final double DIVERGED_AMPS = 1e7;
 
+    /** Last flux linkage at which the coil model gave a non-finite current (NaN if never). */
+    double nonFiniteLambda = Double.NaN;
+
+    String noCurrentMessage() {
+        return "the coil current is not finite at flux linkage " + q(nonFiniteLambda, Dimension.FLUX) + " near t = " + sec(t)
+                + ": the core model gives no current there, so the solution diverges (check the resistance and the core's saturation)";
+    }
+
     final Circuit circuit;
     final Drive drive;
     final Load load;
@@ -145,8 +153,9 @@ final class Solver {
         double lam = s[LAM], x = s[X], v = s[V];
         double i = e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
         if (!Double.isFinite(i)) {
-            throw new SolveException("the coil current is not finite at flux linkage " + q(lam, Dimension.FLUX) + " near t = " + sec(t)
-                    + ": the core model gave no current there, so the solution diverges (check the resistance and the core's saturation)");
+            // a trial stage beyond the core model's range: a huge current makes the integrator reject the step
+            nonFiniteLambda = lam;
+            i = Math.copySign(1e150, lam);
         }
         double vsw, dl, psup = 0, pdrv = 0, pcl = 0, dvc = 0;
         switch (e) {
@@ -273,7 +282,8 @@ final class Solver {
 
     private void observe(double tt, double[] s, double[] o, double stored) {
         double vsw = o[O_VSW], i = o[O_I];
-        if (Math.abs(i) > DIVERGED_AMPS) {
+        if (!(Math.abs(i) <= DIVERGED_AMPS)) {
+            if (Math.abs(i) >= 1e150) throw new SolveException(noCurrentMessage());
             throw new SolveException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
                     + q(s[LAM], Dimension.FLUX) + "): the solution diverges (check the resistance and the core's saturation)");
         }
@@ -488,7 +498,10 @@ final class Solver {
                     pullIn = t;
                     markers.add(new Marker("pull-in", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
                 }
-                if (netForce() < 0) mech = Mech.FREE;
+                if (netForce() < 0) {
+                    mech = Mech.FREE;
+                    markers.add(new Marker("release", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
+                }
                 break;
             case RELEASE_OPEN:
                 mech = Mech.FREE;
@@ -499,6 +512,7 @@ final class Solver {
                 break;
             case RELEASE_CLOSED:
                 mech = Mech.FREE;
+                markers.add(new Marker("release", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
                 break;
             default:
                 throw new IllegalStateException(ev.act.toString());
