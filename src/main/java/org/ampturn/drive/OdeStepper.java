@@ -28,6 +28,9 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     private final AdaptiveStepsizeIntegrator integrator;
     private final double minStep;
     private long evaluations;
+    private final Sampler sampler = new Sampler();
+    private final double[] lastStep = new double[Elec.values().length];
+    private long steps;
 
     OdeStepper(Solver sv, double rtol) {
         this.sv = sv;
@@ -53,6 +56,12 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         this.minStep = 1e-14 * sv.tEnd;
         this.integrator = new DormandPrince853Integrator(minStep, sv.tEnd, abs, rel);
     }
+
+    private int mode() { return sv.elec.ordinal(); }
+
+    long evaluations() { return evaluations; }
+
+    long steps() { return steps; }
 
     String describe() {
         return "Dormand-Prince 8(5,3), relative tolerance " + rtol;
@@ -80,7 +89,9 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         integrator.clearEventHandlers();
         integrator.clearStepHandlers();
         integrator.setMaxEvaluations((int) Math.max(1000, MAX_EVALUATIONS - evaluations));
-        integrator.addStepHandler(new Sampler());
+        integrator.addStepHandler(sampler);
+        // start from the last accepted step (segments of a switching drive are alike), else let the integrator estimate one
+        integrator.setInitialStepSize(lastStep[mode()] > 0 ? Math.min(lastStep[mode()], t1 - t0) : -1);
         Handler[] hs = new Handler[evs.size()];
         double maxCheck = (t1 - t0) / 8;
         double convergence = Math.max(1e-12 * sv.tEnd, 4 * Math.ulp(t1));
@@ -121,6 +132,8 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         @Override
         public void handleStep(StepInterpolator in, boolean isLast) {
             double tEnd = in.getCurrentTime();
+            if (!isLast) lastStep[mode()] = tEnd - in.getPreviousTime();
+            steps++;
             for (int k = sv.nextSample(); k < sv.n && sv.sampleTime(k) <= tEnd; k++) {
                 in.setInterpolatedTime(sv.sampleTime(k));
                 sv.record(k, in.getInterpolatedState());

@@ -250,7 +250,12 @@ final class Solver {
         switch (ev.kind) {
             case CURRENT: return load.currentAt(s[LAM], s[X]) - ev.level;
             case POSITION: return s[X] - ev.level;
-            default: return load.forceAt(s[LAM], s[X]) - load.restoringForceAt(s[X], 0);
+            default:
+                // the magnetic force grows as λ², so F − Fr can dip below zero and back within one step as λ
+                // swings through zero; ±√F − √Fr changes sign once, where F − Fr does
+                double f = load.forceAt(s[LAM], s[X]), fr = load.restoringForceAt(s[X], 0);
+                if (fr < 0 || f < 0) return f - fr;
+                return Math.copySign(Math.sqrt(f), s[LAM]) - Math.sqrt(fr);
         }
     }
 
@@ -564,6 +569,10 @@ final class Solver {
             }
         }
         while (nextSample < n) record(nextSample, y);
+        if (stepper instanceof OdeStepper) {
+            OdeStepper o = (OdeStepper) stepper;
+            notes.add(o.steps() + " accepted steps, " + o.evaluations() + " derivative evaluations");
+        }
         return Transient.of(this);
     }
 
