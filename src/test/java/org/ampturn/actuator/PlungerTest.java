@@ -115,6 +115,14 @@ class PlungerTest {
     }
 
     @Test
+    void tableSteelFromTheMaterialLibraryBalances() {
+        Plunger p = demo().withIron(mm(60), org.ampturn.material.Materials.LOW_CARBON_STEEL).withParasiticGap(mm(0.05), cm2(1));
+        Transient run = Drive.dc(V(12)).into(p).offAt(ms(10), Clamp.zener(V(24))).simulate(ms(25));
+        assertTrue(run.energy().relativeBalanceError() < 1e-6, run.energy().toString());
+        assertTrue(run.pullInTime().si() > 0 && run.dropOutTime().si() > 0, run.toString());
+    }
+
+    @Test
     void hotCoilPullsInLater() {
         Transient cold = Drive.dc(V(12)).into(demo()).simulate(ms(15));
         Transient hot = Drive.dc(V(12)).into(demo()).at(degC(120)).simulate(ms(15));
