@@ -103,13 +103,13 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         try {
             tStop = integrator.integrate(this, t0, y, t1, y);
         } catch (MaxCountExceededException ex) {
-            if (!Double.isNaN(sv.nonFiniteLambda)) throw new SolveException(sv.noCurrentMessage(), ex);
-            throw new SolveException("the solve needed more than " + MAX_EVALUATIONS + " derivative evaluations and stopped near t = "
+            if (!Double.isNaN(sv.nonFiniteLambda)) throw new TransientException(sv.noCurrentMessage(), ex);
+            throw new TransientException("the solve needed more than " + MAX_EVALUATIONS + " derivative evaluations and stopped near t = "
                     + Quantity.of(sv.t, Dimension.TIME) + ": the circuit is stiff (very different time constants, e.g. a small snubber "
                     + "capacitor with a large coil) or the tolerance is too tight; loosen .tolerance(..) or change the snubber", ex);
         } catch (NumberIsTooSmallException ex) {
-            if (!Double.isNaN(sv.nonFiniteLambda)) throw new SolveException(sv.noCurrentMessage(), ex);
-            throw new SolveException("the step size fell below " + Quantity.of(minStep, Dimension.TIME) + " near t = "
+            if (!Double.isNaN(sv.nonFiniteLambda)) throw new TransientException(sv.noCurrentMessage(), ex);
+            throw new TransientException("the step size fell below " + Quantity.of(minStep, Dimension.TIME) + " near t = "
                     + Quantity.of(sv.t, Dimension.TIME) + " (current " + Quantity.of(sv.load.currentAt(y[LAM], y[X]), Dimension.CURRENT)
                     + "): the circuit is stiff or the solution diverges", ex);
         } finally {

@@ -288,8 +288,8 @@ final class Solver {
     private void observe(double tt, double[] s, double[] o, double stored) {
         double vsw = o[O_VSW], i = o[O_I];
         if (!(Math.abs(i) <= DIVERGED_AMPS)) {
-            if (Math.abs(i) >= 1e150) throw new SolveException(noCurrentMessage());
-            throw new SolveException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
+            if (Math.abs(i) >= 1e150) throw new TransientException(noCurrentMessage());
+            throw new TransientException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
                     + q(s[LAM], Dimension.FLUX) + "): the solution diverges (check the resistance and the core's saturation)");
         }
         if (vsw > peakSw) { peakSw = vsw; peakSwT = tt; }
@@ -560,7 +560,7 @@ final class Solver {
             observe(t, y);
             if (t == lastT) {
                 if (++stuck > 200) {
-                    throw new SolveException("the switching chatters at t = " + sec(t) + " (current " + amp(currentNow())
+                    throw new TransientException("the switching chatters at t = " + sec(t) + " (current " + amp(currentNow())
                             + "): events repeat without time advancing; widen the hysteresis band or lower the PWM frequency");
                 }
             } else {
