@@ -3,6 +3,7 @@ package org.ampturn.drive;
 import static org.ampturn.drive.Solver.*;
 
 import java.util.List;
+import java.util.concurrent.CancellationException;
 import org.apache.commons.math3.exception.MaxCountExceededException;
 import org.apache.commons.math3.exception.NumberIsTooSmallException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
@@ -31,6 +32,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     private final Sampler sampler = new Sampler();
     private final double[] lastStep = new double[Elec.values().length];
     private long steps;
+    private long calls;
 
     OdeStepper(Solver sv, double rtol) {
         this.sv = sv;
@@ -75,6 +77,10 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     @Override
     public void computeDerivatives(double t, double[] y, double[] yDot) {
         sv.t = t;
+        // rejected steps never reach the step handler, so a struggling solve polls here too
+        if ((++calls & 255) == 0 && Thread.currentThread().isInterrupted()) {
+            throw new CancellationException("transient stopped near t = " + Quantity.of(t, Dimension.TIME) + ": the thread was interrupted");
+        }
         sv.derivatives(y, yDot);
     }
 
