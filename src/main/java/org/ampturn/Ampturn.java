@@ -166,4 +166,56 @@ public final class Ampturn {
     public static org.ampturn.study.Outputs outputs(Object... namesAndValues) {
         return org.ampturn.study.Outputs.of(namesAndValues);
     }
+
+    // ---- charts ----
+    // Each helper hands over to org.ampturn.chart on first use, so the chart library and AWT load
+    // only when something is plotted, never when the console starts.
+
+    /**
+     * A figure of a transient (stacked current, voltage and energy panels sharing the time axis,
+     * key values marked), a table (columns against the first), a magnetic material (its B-H
+     * curve) or a {@code double[]}. Opens a window when a display exists; otherwise writes
+     * {@code NN-name.png} next to the worksheet and prints its path and a one-line preview.
+     * {@code .save("file.png")} or {@code .save("file.svg", 1600, 1000)} writes a file.
+     */
+    public static org.ampturn.chart.Figure plot(Object x) { return org.ampturn.chart.Plots.plot(x); }
+
+    /** As {@link #plot(Object)} under a name; plotting again under that name updates its window. */
+    public static org.ampturn.chart.Figure plot(String name, Object x) { return org.ampturn.chart.Plots.plot(name, x); }
+
+    /** Columns {@code y} of a sweep table against column {@code x} (every other column when none is named). */
+    public static org.ampturn.chart.Figure plot(Object table, String x, String... y) {
+        return org.ampturn.chart.Plots.plot(table, x, y);
+    }
+
+    /** A heat map of column {@code z} over the two swept columns {@code x} and {@code y}. */
+    public static org.ampturn.chart.Figure heatmap(Object table, String x, String y, String z) {
+        return org.ampturn.chart.Plots.heatmap(table, x, y, z);
+    }
+
+    /** The current of several transients overlaid on one panel. */
+    public static org.ampturn.chart.Figure overlay(Object... transients) { return org.ampturn.chart.Plots.overlay(transients); }
+
+    /** One signal ("switch voltage", or a quantity such as "current") of several transients overlaid. */
+    public static org.ampturn.chart.Figure overlay(String signal, Object... transients) {
+        return org.ampturn.chart.Plots.overlay(signal, transients);
+    }
+
+    /** A histogram of one output of a tolerance run (or a table column), with its limits drawn. */
+    public static org.ampturn.chart.Figure histogram(Object result, String output) {
+        return org.ampturn.chart.Plots.histogram(result, output);
+    }
+
+    /** The B-H curve of a material. */
+    public static org.ampturn.chart.Figure plotBH(org.ampturn.material.MagneticMaterial material) {
+        return org.ampturn.chart.Plots.bh(material, null);
+    }
+
+    /** The B-H curve of a material with the operating point at a flux density (T) or a field strength (A/m). */
+    public static org.ampturn.chart.Figure plotBH(org.ampturn.material.MagneticMaterial material, Quantity operatingPoint) {
+        return org.ampturn.chart.Plots.bh(material, operatingPoint);
+    }
+
+    /** The figures made so far with their files, one a line. */
+    public static String figures() { return org.ampturn.chart.Figures.listing(); }
 }

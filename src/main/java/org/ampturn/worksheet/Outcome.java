@@ -16,8 +16,12 @@ import java.util.List;
  * @param kind        the entry's kind; {@link Kind#ERROR} when any part of it failed
  * @param results     one result per part that shows something, in order
  * @param interrupted true when the entry was stopped by {@link Session#stop()}
+ * @param kept        true when the entry left something in the session (a value, a definition,
+ *                    a statement that ran), so it counts as an entry of the worksheet and
+ *                    {@link Session#undoLast()} takes it back; false when the compiler rejected all
+ *                    of it or it was empty
  */
-public record Outcome(String source, Kind kind, List<Result> results, boolean interrupted) {
+public record Outcome(String source, Kind kind, List<Result> results, boolean interrupted, boolean kept) {
 
     /** What an entry (or one result of it) is. */
     public enum Kind {

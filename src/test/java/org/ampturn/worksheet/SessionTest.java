@@ -51,6 +51,10 @@ class SessionTest {
         assertTrue(o.failed());
         assertEquals(List.of("  ! cannot find symbol: variable turnz", "    mm(25).times(turnz)", "                 ^"), o.lines());
         assertFalse(String.join("\n", o.lines()).contains("$JShell"), o.toString());
+        assertFalse(o.kept(), "a rejected entry is not a worksheet entry");
+        int before = session.entryCount();
+        assertTrue(session.eval("mm(2)").kept());
+        assertEquals(before + 1, session.entryCount());
     }
 
     @Test

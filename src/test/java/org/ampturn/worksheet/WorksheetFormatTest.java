@@ -49,7 +49,7 @@ class WorksheetFormatTest {
         // the method is one entry of three lines, with its record
         Block.Entry method = w.entries().get(3);
         assertTrue(method.source().startsWith("double hot(") && method.source().endsWith("}"), method.source());
-        assertEquals(List.of("hot(double,double) defined"), method.results());
+        assertEquals(List.of("defined method hot(double,double)"), method.results());
     }
 
     @Test
