@@ -32,6 +32,12 @@ public final class Plots {
         return Figures.show(Figure.of(name, data(x)));
     }
 
+    /** What {@link #plot(Object)} would draw for {@code x}, without showing it. */
+    public static FigureData dataOf(Object x) {
+        if (x == null) throw new IllegalArgumentException("nothing to plot (null)");
+        return data(x);
+    }
+
     static FigureData data(Object x) {
         if (x instanceof Figure f) return f.data();
         if (x instanceof FigureData d) return d;
