@@ -1,0 +1,488 @@
+package org.ampturn.worksheet;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.HashSet;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+import java.util.stream.Collectors;
+import jdk.jshell.Diag;
+import jdk.jshell.ExpressionSnippet;
+import jdk.jshell.ImportSnippet;
+import jdk.jshell.JShell;
+import jdk.jshell.JShellException;
+import jdk.jshell.MethodSnippet;
+import jdk.jshell.Snippet;
+import jdk.jshell.SnippetEvent;
+import jdk.jshell.SourceCodeAnalysis;
+import jdk.jshell.SourceCodeAnalysis.Completeness;
+import jdk.jshell.SourceCodeAnalysis.CompletionInfo;
+import jdk.jshell.TypeDeclSnippet;
+import jdk.jshell.UnresolvedReferenceException;
+import jdk.jshell.VarSnippet;
+import org.ampturn.worksheet.Outcome.Kind;
+import org.ampturn.worksheet.Outcome.Result;
+
+/**
+ * A running worksheet session: an embedded JShell that runs entries in this JVM, with the
+ * library preloaded ({@code import static org.ampturn.Ampturn.*} and {@code import org.ampturn.<pkg>.*}
+ * for every library package that has classes).
+ *
+ * <p>Entries run in-process (the JDK's local engine), which is about five times quicker per entry
+ * than JShell's default remote engine and lets library objects and chart windows live in the same
+ * JVM. Two consequences are handled here:
+ * <ul>
+ *   <li>A call to {@code System.exit}, {@code Runtime.exit} or {@code Runtime.halt} in an entry is
+ *       redirected before the entry's classes load (see {@link SessionEngine}); reaching it fails the
+ *       entry with the message {@value #EXIT_BLOCKED}, and the session goes on.</li>
+ *   <li>{@link #stop()} interrupts the running entry. On Java 17 the JDK stops the entry's thread,
+ *       wherever it is. On Java 21 and newer it stops loops in entry code only: a long loop inside a
+ *       library method must poll {@link Thread#interrupted()} and throw, or it runs on. An
+ *       interrupted entry shows {@value #INTERRUPTED} and the session stays usable.</li>
+ * </ul>
+ *
+ * <p>Output that an entry prints with {@code System.out} goes straight to this JVM's standard
+ * output. Methods other than {@link #stop()} are meant to be called from one thread at a time.
+ */
+public final class Session implements AutoCloseable {
+    /** The error text of an entry stopped by {@link #stop()}. */
+    public static final String INTERRUPTED = "interrupted";
+    /** The error text of an entry that reached System.exit, Runtime.exit or Runtime.halt. */
+    public static final String EXIT_BLOCKED = "System.exit and Runtime.halt do not run in a worksheet (they would end the console); use #quit";
+
+    /** A name defined in the session, for {@code #names}. */
+    public record Name(String kind, String name, String type, String value) {}
+
+    /** One entry of a worksheet's text and the 1-based line it starts on. */
+    public record Entry(int line, String source) {}
+
+    /** Completion candidates: each is the text that replaces {@code code[anchor, cursor)}. */
+    public record Completion(int anchor, List<String> candidates) {}
+
+    private final JShell shell;
+    private final SourceCodeAnalysis analysis;
+    private final List<String> imports;
+    private final Set<Snippet> preloaded;
+    private final List<List<Snippet>> entries = new ArrayList<>();
+    private final Object lock = new Object();
+    private volatile boolean running;
+    private volatile boolean stopRequested;
+
+    private Session(JShell shell, List<String> imports, Set<Snippet> preloaded) {
+        this.shell = shell;
+        this.analysis = shell.sourceCodeAnalysis();
+        this.imports = List.copyOf(imports);
+        this.preloaded = preloaded;
+    }
+
+    /** Builds a session with the library preloaded; takes about a second on a cold JVM. */
+    public static Session start() {
+        JShell shell = JShell.builder()
+                .executionEngine(new SessionEngine(), Map.of())
+                .out(System.out)
+                .err(System.err)
+                .build();
+        List<String> ok = new ArrayList<>();
+        Set<Snippet> pre = new HashSet<>();
+        for (String imp : SessionImports.candidates()) {
+            List<SnippetEvent> ev = shell.eval(imp);
+            boolean good = !ev.isEmpty() && ev.get(0).status() == Snippet.Status.VALID;
+            if (good) {
+                ok.add(imp);
+                pre.add(ev.get(0).snippet());
+            } else if (!ev.isEmpty()) {
+                shell.drop(ev.get(0).snippet()); // a package with no classes yet
+            }
+        }
+        return new Session(shell, ok, pre);
+    }
+
+    /** The import lines that were preloaded, e.g. {@code import org.ampturn.units.*;}. */
+    public List<String> imports() {
+        return imports;
+    }
+
+    /**
+     * Compiles and runs a few throw-away entries and drops them, so that the user's first entry is
+     * quick. For the interactive console only, while the first prompt waits; a batch run is faster
+     * without it.
+     */
+    public void warmUp() {
+        synchronized (lock) {
+            List<Snippet> tmp = new ArrayList<>();
+            for (String s : List.of("int ampturn$warm = 1 + 1;", "ampturn$warm * 2",
+                    "double ampturn$f(double x) { return x * ampturn$warm; }", "ampturn$f(3.0)",
+                    imports.stream().anyMatch(i -> i.contains("Ampturn")) ? "mm(25).times(2)" : "1")) {
+                for (SnippetEvent e : shell.eval(s)) if (e.causeSnippet() == null) tmp.add(e.snippet());
+            }
+            analysis.completionSuggestions("Math.ab", 7, new int[1]);
+            Collections.reverse(tmp);
+            for (Snippet s : tmp) dropQuietly(s);
+        }
+    }
+
+    /**
+     * Runs one entry (one or several snippets, as typed) and returns what it gave. Parts run in
+     * order and the entry stops at the first part that fails. Never throws for bad input.
+     */
+    public Outcome eval(String entrySource) {
+        synchronized (lock) {
+            List<Snippet> added = new ArrayList<>();
+            List<Result> results = new ArrayList<>();
+            Kind kind = Kind.NOTHING;
+            boolean failed = false;
+            boolean interrupted = false;
+            String rest = entrySource;
+            int consumed = 0;
+            while (!rest.isBlank() && !failed) {
+                CompletionInfo ci = analysis.analyzeCompletion(rest);
+                if (ci.completeness() == Completeness.EMPTY) break;
+                String piece;
+                String remaining;
+                if (ci.completeness().isComplete()) {
+                    piece = ci.source();
+                    remaining = ci.remaining();
+                } else {
+                    piece = rest; // incomplete: run it anyway so the compiler says what is missing
+                    remaining = "";
+                }
+                int pieceStart = locate(entrySource, piece, consumed);
+                List<SnippetEvent> events;
+                stopRequested = false;
+                running = true;
+                try {
+                    events = shell.eval(piece);
+                } catch (IllegalStateException e) {
+                    results.add(Result.of(Kind.ERROR, "the session has ended: " + e.getMessage()));
+                    failed = true;
+                    break;
+                } finally {
+                    running = false;
+                }
+                if (stopRequested) {
+                    interrupted = true;
+                    failed = true;
+                    results.add(Result.of(Kind.ERROR, INTERRUPTED));
+                    for (SnippetEvent e : events) if (e.causeSnippet() == null) added.add(e.snippet());
+                    break;
+                }
+                for (SnippetEvent e : events) {
+                    if (e.causeSnippet() != null) continue; // a dependent snippet changed state
+                    added.add(e.snippet());
+                    Result r = describe(e, events, entrySource, pieceStart, piece);
+                    if (r == null) continue;
+                    results.add(r);
+                    if (r.kind() == Kind.ERROR) failed = true;
+                    else kind = r.kind();
+                }
+                consumed = entrySource.length() - remaining.length();
+                if (consumed < 0) consumed = 0;
+                rest = remaining;
+            }
+            if (failed) kind = Kind.ERROR;
+            boolean kept = added.stream().anyMatch(sn -> shell.status(sn).isActive());
+            if (kept) entries.add(added);
+            return new Outcome(entrySource, kind, results, interrupted, kept);
+        }
+    }
+
+    /** Interrupts the entry that is running, if any; safe to call from any thread. */
+    public void stop() {
+        if (!running) return;
+        stopRequested = true;
+        // JShell.stop() only stops code that is executing; a stop that arrives while the entry is
+        // still compiling would be lost. Repeat it until the entry has ended.
+        Thread repeater = new Thread(() -> {
+            while (running && stopRequested) {
+                try {
+                    shell.stop();
+                } catch (RuntimeException ignored) {
+                    // the engine may have finished between the check and the call
+                }
+                try {
+                    Thread.sleep(50);
+                } catch (InterruptedException e) {
+                    return;
+                }
+            }
+        }, "ampturn-stop");
+        repeater.setDaemon(true);
+        repeater.start();
+    }
+
+    /** True while an entry runs. */
+    public boolean isRunning() {
+        return running;
+    }
+
+    /**
+     * Takes the last entry's snippets out of the session. A definition that the entry had replaced
+     * is not brought back (replay the worksheet for that).
+     *
+     * @return true when there was an entry to take back
+     */
+    public boolean undoLast() {
+        synchronized (lock) {
+            if (entries.isEmpty()) return false;
+            List<Snippet> last = entries.remove(entries.size() - 1);
+            for (int i = last.size() - 1; i >= 0; i--) dropQuietly(last.get(i));
+            return true;
+        }
+    }
+
+    /** Takes every entry out of the session; the preloaded imports stay. For replay. */
+    public void clear() {
+        synchronized (lock) {
+            List<Snippet> all = shell.snippets().collect(Collectors.toList());
+            Collections.reverse(all);
+            for (Snippet s : all) if (!preloaded.contains(s)) dropQuietly(s);
+            entries.clear();
+        }
+    }
+
+    /** How many entries have run (and not been undone) since the start or the last {@link #clear()}. */
+    public int entryCount() {
+        synchronized (lock) {
+            return entries.size();
+        }
+    }
+
+    /** The variables, methods and types defined so far (not the temporary values of expressions). */
+    public List<Name> names() {
+        synchronized (lock) {
+            List<Name> out = new ArrayList<>();
+            shell.variables().filter(v -> !v.name().startsWith("$")).forEach(v -> {
+                String value;
+                try {
+                    value = shell.varValue(v);
+                } catch (IllegalStateException | IllegalArgumentException e) {
+                    value = "(no value)";
+                }
+                out.add(new Name("variable", v.name(), v.typeName(), value));
+            });
+            shell.methods().forEach(m -> out.add(new Name("method", m.name() + "(" + m.parameterTypes() + ")",
+                    returnType(m.signature()), "")));
+            shell.types().forEach(t -> out.add(new Name(typeKind(t), t.name(), "", "")));
+            return out;
+        }
+    }
+
+    /**
+     * Splits worksheet text into entries, feeding it line by line as if typed: lines gather until
+     * JShell's completeness analysis says the entry is complete, so a method or a multi-line
+     * expression is one entry. Blank lines and comment lines between entries are skipped (the
+     * worksheet reads its notes and {@code //=} lines itself).
+     */
+    public List<Entry> entries(String text) {
+        synchronized (lock) {
+            List<Entry> out = new ArrayList<>();
+            StringBuilder buf = new StringBuilder();
+            int start = 0;
+            String[] lines = text.split("\r?\n", -1);
+            for (int i = 0; i < lines.length; i++) {
+                String line = lines[i];
+                if (buf.length() == 0) {
+                    String t = line.strip();
+                    if (t.isEmpty() || t.startsWith("//")) continue;
+                    start = i + 1;
+                } else {
+                    buf.append('\n');
+                }
+                buf.append(line);
+                Completeness c = completeness(buf.toString());
+                if (c == Completeness.EMPTY) {
+                    buf.setLength(0);
+                } else if (c.isComplete()) {
+                    out.add(new Entry(start, buf.toString()));
+                    buf.setLength(0);
+                }
+            }
+            if (buf.length() > 0 && !buf.toString().isBlank()) out.add(new Entry(start, buf.toString()));
+            return out;
+        }
+    }
+
+    /** The sources of {@link #entries(String)}. */
+    public List<String> splitEntries(String text) {
+        return entries(text).stream().map(Entry::source).collect(Collectors.toList());
+    }
+
+    /**
+     * True when the text typed so far is not a whole entry yet (an open brace, an unfinished
+     * expression), so the console asks for another line.
+     */
+    public boolean needsMore(String text) {
+        synchronized (lock) {
+            Completeness c = completeness(text);
+            return !c.isComplete() && c != Completeness.EMPTY;
+        }
+    }
+
+    /**
+     * Completion candidates at {@code cursor}: library classes and methods, session variables and
+     * methods. Candidates that fit the expected type come first.
+     */
+    public Completion complete(String code, int cursor) {
+        synchronized (lock) {
+            int[] anchor = new int[1];
+            List<SourceCodeAnalysis.Suggestion> all = analysis.completionSuggestions(code, cursor, anchor);
+            Set<String> out = new LinkedHashSet<>();
+            for (SourceCodeAnalysis.Suggestion s : all) if (s.matchesType()) out.add(s.continuation());
+            for (SourceCodeAnalysis.Suggestion s : all) out.add(s.continuation());
+            out.removeIf(s -> s.startsWith("ampturn$") || s.startsWith("$"));
+            return new Completion(anchor[0], List.copyOf(out));
+        }
+    }
+
+    /** The signatures of the method or constructor being called at {@code cursor}, e.g. {@code Quantity Ampturn.mm(double)}. */
+    public List<String> signatures(String code, int cursor) {
+        synchronized (lock) {
+            return analysis.documentation(code, cursor, false).stream()
+                    .map(SourceCodeAnalysis.Documentation::signature).collect(Collectors.toList());
+        }
+    }
+
+    @Override
+    public void close() {
+        shell.close();
+    }
+
+    // ---- helpers ------------------------------------------------------------------------------
+
+    /** Completeness of the whole text, which may hold several snippets. */
+    private Completeness completeness(String text) {
+        String rest = text;
+        boolean any = false;
+        while (true) {
+            CompletionInfo ci = analysis.analyzeCompletion(rest);
+            Completeness c = ci.completeness();
+            if (c == Completeness.EMPTY) return any ? Completeness.COMPLETE : Completeness.EMPTY;
+            if (!c.isComplete()) return c;
+            any = true;
+            rest = ci.remaining();
+            if (rest.isBlank()) return c;
+        }
+    }
+
+    private Result describe(SnippetEvent e, List<SnippetEvent> events, String entry, int pieceStart, String piece) {
+        Snippet sn = e.snippet();
+        JShellException ex = e.exception();
+        if (ex instanceof UnresolvedReferenceException) {
+            var target = ((UnresolvedReferenceException) ex).getSnippet();
+            String name = target instanceof MethodSnippet ? ((MethodSnippet) target).name() + "(...)" : target.source().strip();
+            String needs = unresolved(target);
+            if (needs.isEmpty()) {
+                List<Diag> errs = errors(target);
+                return Result.of(Kind.ERROR, name + " cannot run: " + (errs.isEmpty() ? "it uses something not defined yet" : SessionMessages.message(errs.get(0))));
+            }
+            return Result.of(Kind.ERROR, name + " cannot run until " + needs + " is defined");
+        }
+        if (ex != null) return Result.of(Kind.ERROR, SessionMessages.exception(ex));
+        switch (e.status()) {
+            case REJECTED:
+                return SessionMessages.compileError(errors(sn), entry, pieceStart, piece);
+            case VALID:
+            case RECOVERABLE_DEFINED:
+            case RECOVERABLE_NOT_DEFINED:
+                break;
+            default:
+                return null;
+        }
+        boolean redefined = events.stream().anyMatch(o -> o.causeSnippet() == sn && o.status() == Snippet.Status.OVERWRITTEN);
+        String unresolved = unresolved(sn);
+        if (unresolved.isEmpty() && e.status() != Snippet.Status.VALID) {
+            List<Diag> errs = errors(sn);
+            if (!errs.isEmpty()) unresolved = "this is fixed: " + SessionMessages.message(errs.get(0));
+        }
+        if (sn instanceof VarSnippet) {
+            VarSnippet v = (VarSnippet) sn;
+            if (e.status() == Snippet.Status.RECOVERABLE_NOT_DEFINED) {
+                return Result.of(Kind.ERROR, v.name() + " cannot be used until " + unresolved + " is defined");
+            }
+            String value = e.value() == null ? "" : e.value();
+            if (v.subKind() == Snippet.SubKind.TEMP_VAR_EXPRESSION_SUBKIND) return Result.of(Kind.VALUE, value);
+            return Result.of(Kind.DECLARATION, v.name() + " = " + value);
+        }
+        if (sn instanceof ExpressionSnippet) {
+            ExpressionSnippet x = (ExpressionSnippet) sn;
+            if ("void".equals(x.typeName())) return null;
+            return Result.of(Kind.VALUE, e.value() == null ? "" : e.value());
+        }
+        if (sn instanceof MethodSnippet) {
+            MethodSnippet m = (MethodSnippet) sn;
+            String text = (redefined ? "redefined method " : "defined method ") + m.name() + "(" + m.parameterTypes() + ")";
+            if (!unresolved.isEmpty()) text += usableOnce(unresolved);
+            return Result.of(Kind.DEFINITION, text);
+        }
+        if (sn instanceof TypeDeclSnippet) {
+            TypeDeclSnippet t = (TypeDeclSnippet) sn;
+            String text = (redefined ? "redefined " : "defined ") + typeKind(t) + " " + t.name();
+            if (!unresolved.isEmpty()) text += usableOnce(unresolved);
+            return Result.of(Kind.DEFINITION, text);
+        }
+        if (sn instanceof ImportSnippet) {
+            return Result.of(Kind.DEFINITION, "imported " + ((ImportSnippet) sn).fullname()
+                    + (((ImportSnippet) sn).isStatic() ? " (static)" : ""));
+        }
+        return null; // a statement shows nothing
+    }
+
+    private static String usableOnce(String unresolved) {
+        return unresolved.startsWith("this is fixed: ") ? ", usable once " + unresolved
+                : ", usable once " + unresolved + " is defined";
+    }
+
+    private List<Diag> errors(Snippet sn) {
+        return shell.diagnostics(sn).filter(Diag::isError).collect(Collectors.toList());
+    }
+
+    private String unresolved(Snippet sn) {
+        if (!(sn instanceof jdk.jshell.DeclarationSnippet)) return "";
+        return shell.unresolvedDependencies((jdk.jshell.DeclarationSnippet) sn).collect(Collectors.joining(", "));
+    }
+
+    private static String typeKind(TypeDeclSnippet t) {
+        switch (t.subKind()) {
+            case INTERFACE_SUBKIND: return "interface";
+            case ENUM_SUBKIND: return "enum";
+            case ANNOTATION_TYPE_SUBKIND: return "annotation";
+            case RECORD_SUBKIND: return "record";
+            default: return "class";
+        }
+    }
+
+    private static String returnType(String signature) {
+        int close = signature.lastIndexOf(')');
+        return close >= 0 ? signature.substring(close + 1) : signature;
+    }
+
+    /** Where {@code piece} (as the analysis returned it) starts in the entry's text. */
+    private static int locate(String entry, String piece, int from) {
+        String core = piece.strip();
+        if (core.endsWith(";")) core = core.substring(0, core.length() - 1).strip();
+        int at = core.isEmpty() ? -1 : entry.indexOf(core, Math.min(from, entry.length()));
+        if (at < 0) return from;
+        int lead = piece.indexOf(core);
+        return at - Math.max(lead, 0);
+    }
+
+    private void dropQuietly(Snippet s) {
+        try {
+            if (shell.status(s).isActive()) shell.drop(s);
+        } catch (IllegalArgumentException | IllegalStateException ignored) {
+            // already gone
+        }
+    }
+
+    static Optional<String> blockedExit(JShellException ex) {
+        for (Throwable t = ex; t != null; t = t.getCause()) {
+            String m = t.getMessage();
+            if (m != null && m.contains(SessionEngine.BLOCKED)) return Optional.of(EXIT_BLOCKED);
+        }
+        return Optional.empty();
+    }
+
+}

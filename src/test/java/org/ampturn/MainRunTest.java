@@ -1,0 +1,82 @@
+package org.ampturn;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.ByteArrayOutputStream;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.TimeUnit;
+import org.ampturn.console.BatchRun;
+import org.ampturn.worksheet.Session;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code ampturn run}: entries and results in plain text, the run goes on after an error, exit codes. */
+class MainRunTest {
+    @TempDir
+    Path dir;
+
+    private static String run(Session s, String text, int expectedExit) {
+        ByteArrayOutputStream bytes = new ByteArrayOutputStream();
+        PrintStream out = new PrintStream(bytes, true, StandardCharsets.UTF_8);
+        assertEquals(expectedExit, BatchRun.run(s, text, out));
+        return bytes.toString(StandardCharsets.UTF_8);
+    }
+
+    @Test
+    void eachEntryIsPrintedWithItsResultsAndAnErrorDoesNotStopTheRun() {
+        try (Session s = Session.start()) {
+            assertEquals("mm(25).times(2)\n  = 50.00 mm\n", run(s, "mm(25).times(2)\n", 0));
+            String out = run(s, "// a note\nvar r = ohm(12);\nr.plus(V(1))\n\nV(24).div(r)\n", 1);
+            assertEquals("var r = ohm(12);\n  r = 12.00 Ω\nr.plus(V(1))\n  ! cannot add 1.000 V to 12.00 Ω (voltage and resistance)\n"
+                    + "V(24).div(r)\n  = 2.000 A\n", out);
+            assertTrue(!out.contains("\u001B["), "no colour in batch output");
+        }
+    }
+
+    @Test
+    void verbsAndOptions() {
+        ByteArrayOutputStream o = new ByteArrayOutputStream();
+        ByteArrayOutputStream e = new ByteArrayOutputStream();
+        PrintStream out = new PrintStream(o, true, StandardCharsets.UTF_8);
+        PrintStream err = new PrintStream(e, true, StandardCharsets.UTF_8);
+        assertEquals(0, Main.run(List.of("--version"), out, err));
+        assertTrue(o.toString(StandardCharsets.UTF_8).startsWith("ampturn " + Ampturn.version()));
+        assertEquals(0, Main.run(List.of("--help"), out, err));
+        assertTrue(o.toString(StandardCharsets.UTF_8).contains("ampturn run [--trust] FILE.atw|-"));
+        assertEquals(2, Main.run(List.of("run", dir.resolve("missing.atw").toString()), out, err));
+        assertTrue(e.toString(StandardCharsets.UTF_8).contains("no such file"));
+        assertEquals(2, Main.run(List.of("verify", "x.atw"), out, err));
+        assertTrue(e.toString(StandardCharsets.UTF_8).contains("verify: not available yet"));
+        assertEquals(2, Main.run(List.of("--frob"), out, err));
+        assertEquals(2, Main.run(List.of("run"), out, err));
+    }
+
+    @Test
+    void aChildProcessExitsOneWhenAnEntryFailsAndSurvivesSystemExit() throws Exception {
+        Path script = dir.resolve("script.atw");
+        Files.writeString(script, "mm(25).times(2)\nSystem.exit(0);\nmA(250).times(ohm(48))\n");
+        String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
+        Process p = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), "org.ampturn.Main", "run", script.toString())
+                .redirectErrorStream(true).start();
+        String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        assertEquals(1, p.exitValue(), out);
+        assertTrue(out.contains("mm(25).times(2)\n  = 50.00 mm\n"), out);
+        assertTrue(out.contains("  ! " + Session.EXIT_BLOCKED), out);
+        // Ohm's law: 250 mA through 48 ohm is 12 V (common practice)
+        assertTrue(out.endsWith("mA(250).times(ohm(48))\n  = 12.00 V\n"), out);
+
+        Files.writeString(script, "var ok = mm(1);\n");
+        p = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), "org.ampturn.Main", "run", "-")
+                .redirectInput(script.toFile()).redirectErrorStream(true).start();
+        out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        assertEquals(0, p.exitValue(), out);
+        assertEquals("var ok = mm(1);\n  ok = 1.000 mm\n", out);
+    }
+}
