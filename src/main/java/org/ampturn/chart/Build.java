@@ -19,6 +19,7 @@ import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.annotations.XYPointerAnnotation;
 import org.jfree.chart.axis.AxisLocation;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.SymbolAxis;
 import org.jfree.chart.axis.ValueAxis;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.PlotOrientation;
@@ -64,10 +65,11 @@ final class Build {
         double xMax = 0;
         for (Panel p : d.panels()) for (Trace t : p.traces()) xMax = Math.max(xMax, t.maxAbsX());
         AxisUnit xu = AxisUnit.forRange(d.xDimension(), xMax);
-        NumberAxis xAxis = axis(xu.label(d.xQuantity()));
+        NumberAxis xAxis = d.xLabels().isEmpty() ? axis(xu.label(d.xQuantity()))
+                : style(new SymbolAxis(d.xQuantity(), d.xLabels().toArray(new String[0])));
         xAxis.setAutoRangeIncludesZero(false);
-        xAxis.setLowerMargin(0);
-        xAxis.setUpperMargin(0);
+        xAxis.setLowerMargin(d.xLabels().isEmpty() ? 0 : 0.03);
+        xAxis.setUpperMargin(d.xLabels().isEmpty() ? 0 : 0.03);
         CombinedDomainXYPlot combined = new CombinedDomainXYPlot(xAxis);
         combined.setGap(12);
         combined.setOrientation(PlotOrientation.VERTICAL);
@@ -146,7 +148,7 @@ final class Build {
                 for (int i = 0; i < plots.size(); i++) {
                     if (!everyPanel && i != home) continue;
                     ValueMarker vm = marker(xu.toDisplay(m.x()), Style.MARK, Style.MARK_LINE);
-                    if (i == home) {
+                    if (i == home && !m.label().isEmpty()) {
                         vm.setLabel(text);
                         vm.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
                         vm.setLabelTextAnchor(TextAnchor.TOP_LEFT);
@@ -343,7 +345,10 @@ final class Build {
     }
 
     static NumberAxis axis(String label) {
-        NumberAxis a = new NumberAxis(label);
+        return style(new NumberAxis(label));
+    }
+
+    static <A extends NumberAxis> A style(A a) {
         a.setLabelFont(Style.AXIS);
         a.setLabelPaint(Style.INK);
         a.setTickLabelFont(Style.TICKS);
