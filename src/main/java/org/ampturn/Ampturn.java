@@ -76,4 +76,169 @@ public final class Ampturn {
 
     /** A quantity from text: {@code q("4.7 mH")}, {@code q("2.5 A/mm^2")}. */
     public static Quantity q(String text) { return Quantity.parse(text); }
+
+    // ---- studies ----
+    // Sweeps, solve-for-target, optimisation and tolerance analysis (org.ampturn.study). The
+    // builders behind them (Sweep, Optimisation, Tolerance, Axis, Param, Varied, Limit, Outputs)
+    // are in that package; the console imports it as well.
+
+    /**
+     * {@code f} at {@code count} evenly spaced values from {@code from} to {@code to}:
+     * {@code sweep("turns", 100, 1000, 10, n -> coil(n).inductance())}. Whole-number ends give whole
+     * numbers ({@code Integer}); write {@code 1.0} for real steps.
+     */
+    public static <N extends Number> org.ampturn.study.Table sweep(String name, N from, N to, int count, java.util.function.Function<N, ?> f) {
+        return org.ampturn.study.Sweep.defaults().of(org.ampturn.study.Axis.linear(name, from, to, count), f);
+    }
+
+    /** {@code f} at {@code count} evenly spaced quantities: {@code sweep("gap", mm(0.1), mm(1), 10, g -> ...)}. */
+    public static org.ampturn.study.Table sweep(String name, Quantity from, Quantity to, int count, java.util.function.Function<Quantity, ?> f) {
+        return org.ampturn.study.Sweep.defaults().of(org.ampturn.study.Axis.linear(name, from, to, count), f);
+    }
+
+    /** {@code f} at {@code count} values evenly spaced on a log scale (both ends above zero). */
+    public static <N extends Number> org.ampturn.study.Table sweepLog(String name, N from, N to, int count, java.util.function.Function<N, ?> f) {
+        return org.ampturn.study.Sweep.defaults().of(org.ampturn.study.Axis.log(name, from, to, count), f);
+    }
+
+    /** {@code f} at {@code count} quantities evenly spaced on a log scale: {@code sweepLog("f", Hz(10), kHz(100), 41, ...)}. */
+    public static org.ampturn.study.Table sweepLog(String name, Quantity from, Quantity to, int count, java.util.function.Function<Quantity, ?> f) {
+        return org.ampturn.study.Sweep.defaults().of(org.ampturn.study.Axis.log(name, from, to, count), f);
+    }
+
+    /** {@code f} at each value of a list: {@code sweep("wire", List.of(Wire.awg(24), Wire.awg(26)), w -> ...)}. */
+    public static <T> org.ampturn.study.Table sweep(String name, java.util.List<T> values, java.util.function.Function<? super T, ?> f) {
+        return org.ampturn.study.Sweep.defaults().of(org.ampturn.study.Axis.of(name, values), f);
+    }
+
+    /** {@code f} along one axis. */
+    public static <A> org.ampturn.study.Table sweep(org.ampturn.study.Axis<A> a, java.util.function.Function<? super A, ?> f) {
+        return org.ampturn.study.Sweep.defaults().of(a, f);
+    }
+
+    /** {@code f} over the grid of two axes: {@code sweep(Axis.linear("turns", 100, 500, 5), Axis.of("gap", mm(0.1), mm(0.2)), (n, g) -> ...)}. */
+    public static <A, B> org.ampturn.study.Table sweep(org.ampturn.study.Axis<A> a, org.ampturn.study.Axis<B> b,
+                                                       java.util.function.BiFunction<? super A, ? super B, ?> f) {
+        return org.ampturn.study.Sweep.defaults().of(a, b, f);
+    }
+
+    /** The fast sweep of a closed form, double in, double out, no object per point. */
+    public static org.ampturn.study.Table sweepDoubles(String name, double from, double to, int count, java.util.function.DoubleUnaryOperator f) {
+        return org.ampturn.study.Sweep.defaults().ofDoubles(name, from, to, count, f);
+    }
+
+    /** The x in [lo, hi] where {@code f(x) = target} (Brent's method). */
+    public static double solve(java.util.function.DoubleUnaryOperator f, double target, double lo, double hi) {
+        return org.ampturn.study.Solve.of(f, target, lo, hi);
+    }
+
+    /** The number x in [lo, hi] where the quantity {@code f(x)} reaches {@code target}: turns for an inductance. */
+    public static double solve(java.util.function.DoubleFunction<Quantity> f, Quantity target, double lo, double hi) {
+        return org.ampturn.study.Solve.of(f, target, lo, hi);
+    }
+
+    /** The quantity x in [lo, hi] where {@code f(x)} reaches {@code target}: the gap for an inductance. */
+    public static Quantity solve(java.util.function.Function<Quantity, Quantity> f, Quantity target, Quantity lo, Quantity hi) {
+        return org.ampturn.study.Solve.of(f, target, lo, hi);
+    }
+
+    /** An optimisation that minimises an output: {@code minimise("loss").over(...).subjectTo("L >= 1 mH").run(p -> ...)}. */
+    public static org.ampturn.study.Optimisation minimise(String objective) {
+        return org.ampturn.study.Optimisation.minimise(objective);
+    }
+
+    /** An optimisation that maximises an output. */
+    public static org.ampturn.study.Optimisation maximise(String objective) {
+        return org.ampturn.study.Optimisation.maximise(objective);
+    }
+
+    /** A tolerance study: {@code tolerance(p -> ...).vary(Varied.percent("V", V(12), 10)).monteCarlo(10_000, 1)}. */
+    public static org.ampturn.study.Tolerance tolerance(java.util.function.Function<org.ampturn.study.Point, ?> f) {
+        return org.ampturn.study.Tolerance.of(f);
+    }
+
+    /** A limit on an output, from text: {@code limit("B <= 0.3 T")}. */
+    public static org.ampturn.study.Limit limit(String text) {
+        return org.ampturn.study.Limit.parse(text);
+    }
+
+    /** Named outputs for a study function: {@code outputs("L", l, "R", r)}. */
+    public static org.ampturn.study.Outputs outputs(Object... namesAndValues) {
+        return org.ampturn.study.Outputs.of(namesAndValues);
+    }
+
+    // ---- charts ----
+    // Each helper hands over to org.ampturn.chart on first use, so the chart library and AWT load
+    // only when something is plotted, never when the console starts.
+
+    /**
+     * A figure of a transient (stacked current, voltage and energy panels sharing the time axis,
+     * key values marked), a table (columns against the first), a magnetic material (its B-H
+     * curve) or a {@code double[]}. Opens a window when a display exists; otherwise writes
+     * {@code NN-name.png} next to the worksheet and prints its path and a one-line preview.
+     * {@code .save("file.png")} or {@code .save("file.svg", 1600, 1000)} writes a file.
+     */
+    public static org.ampturn.chart.Figure plot(Object x) { return org.ampturn.chart.Plots.plot(x); }
+
+    /** As {@link #plot(Object)} under a name; plotting again under that name updates its window. */
+    public static org.ampturn.chart.Figure plot(String name, Object x) { return org.ampturn.chart.Plots.plot(name, x); }
+
+    /** Columns {@code y} of a sweep table against column {@code x} (every other column when none is named). */
+    public static org.ampturn.chart.Figure plot(Object table, String x, String... y) {
+        return org.ampturn.chart.Plots.plot(table, x, y);
+    }
+
+    /** A heat map of column {@code z} over the two swept columns {@code x} and {@code y}. */
+    public static org.ampturn.chart.Figure heatmap(Object table, String x, String y, String z) {
+        return org.ampturn.chart.Plots.heatmap(table, x, y, z);
+    }
+
+    /** The current of several transients overlaid on one panel. */
+    public static org.ampturn.chart.Figure overlay(Object... transients) { return org.ampturn.chart.Plots.overlay(transients); }
+
+    /** One signal ("switch voltage", or a quantity such as "current") of several transients overlaid. */
+    public static org.ampturn.chart.Figure overlay(String signal, Object... transients) {
+        return org.ampturn.chart.Plots.overlay(signal, transients);
+    }
+
+    /** A histogram of one output of a tolerance run (or a table column), with its limits drawn. */
+    public static org.ampturn.chart.Figure histogram(Object result, String output) {
+        return org.ampturn.chart.Plots.histogram(result, output);
+    }
+
+    /** The B-H curve of a material. */
+    public static org.ampturn.chart.Figure plotBH(org.ampturn.material.MagneticMaterial material) {
+        return org.ampturn.chart.Plots.bh(material, null);
+    }
+
+    /** The B-H curve of a material with the operating point at a flux density (T) or a field strength (A/m). */
+    public static org.ampturn.chart.Figure plotBH(org.ampturn.material.MagneticMaterial material, Quantity operatingPoint) {
+        return org.ampturn.chart.Plots.bh(material, operatingPoint);
+    }
+
+    /** The figures made so far with their files, one a line. */
+    public static String figures() { return org.ampturn.chart.Figures.listing(); }
+
+    // ---- wire ----
+    /** An AWG copper magnet wire, heavy build (ASTM B258): {@code awg(24)}, {@code awg(24.5)}. */
+    public static org.ampturn.wire.Wire awg(double gauge) { return org.ampturn.wire.Wire.awg(gauge); }
+
+    /** An AWG wire from text: {@code awg("4/0")}, {@code awg("00")}. */
+    public static org.ampturn.wire.Wire awg(String gauge) { return org.ampturn.wire.Wire.awg(gauge); }
+
+    // ---- coils and magnetic circuits ----------------------------------------------------------
+    /** Magnetic-circuit parts in series (same flux, MMFs add): {@code series(core, gap(mm(0.5), mm2(80)))}. */
+    public static org.ampturn.coil.MagneticCircuit series(org.ampturn.coil.MagneticCircuit... parts) {
+        return org.ampturn.coil.MagneticCircuit.series(parts);
+    }
+
+    /** Magnetic-circuit parts in parallel (same MMF, fluxes add). */
+    public static org.ampturn.coil.MagneticCircuit parallel(org.ampturn.coil.MagneticCircuit... parts) {
+        return org.ampturn.coil.MagneticCircuit.parallel(parts);
+    }
+
+    /** An air gap of {@code length} across pole faces of {@code area}, no fringing. */
+    public static org.ampturn.coil.AirGap gap(Quantity length, Quantity area) {
+        return org.ampturn.coil.AirGap.of(length, area);
+    }
 }

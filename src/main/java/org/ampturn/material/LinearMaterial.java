@@ -20,9 +20,11 @@ final class LinearMaterial implements MagneticMaterial {
     @Override public Quantity saturationFluxDensity() { return Quantity.of(bsat, Dimension.FLUX_DENSITY); }
     @Override public double fluxDensityAt(double h) { return MU0 * mur * h; }
     @Override public double fieldAt(double b) { return b / (MU0 * mur); }
+    @Override public double incrementalPermeabilityAt(double h) { return mur; }
 
     @Override
     public String toString() {
-        return name + ": linear, μr = " + Quantity.number(mur) + ", saturates at " + saturationFluxDensity();
+        String sat = Double.isInfinite(bsat) ? "does not saturate" : "saturates at " + saturationFluxDensity();
+        return name + ": linear, μr = " + Quantity.number(mur) + ", " + sat;
     }
 }

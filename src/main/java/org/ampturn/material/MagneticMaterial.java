@@ -1,5 +1,7 @@
 package org.ampturn.material;
 
+import java.util.Objects;
+import java.util.Optional;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
 import org.ampturn.units.Require;
@@ -40,5 +42,68 @@ public interface MagneticMaterial {
         Require.positive("relative permeability", relativePermeability);
         double bsat = Require.positive("saturation flux density", saturation, Dimension.FLUX_DENSITY);
         return new LinearMaterial(name, relativePermeability, bsat);
+    }
+
+    /**
+     * Incremental (differential) relative permeability (dB/dH)/μ0 at field strength H (A/m).
+     * The default differentiates {@link #fluxDensityAt} numerically; tables give it exactly.
+     */
+    default double incrementalPermeabilityAt(double fieldAmpsPerMetre) {
+        double h = fieldAmpsPerMetre;
+        double step = Math.max(1e-3, Math.abs(h) * 1e-6);
+        return (fluxDensityAt(h + step) - fluxDensityAt(h - step)) / (2 * step) / MU0;
+    }
+
+    /** Amplitude relative permeability B/(μ0·H) at field strength H (A/m); the initial value at H = 0. */
+    default double amplitudePermeabilityAt(double fieldAmpsPerMetre) {
+        if (fieldAmpsPerMetre == 0) return relativePermeability();
+        return fluxDensityAt(fieldAmpsPerMetre) / (MU0 * fieldAmpsPerMetre);
+    }
+
+    /** B at a field strength, on the Quantity surface. */
+    default Quantity fluxDensity(Quantity fieldStrength) {
+        return Quantity.of(fluxDensityAt(Require.si("field strength", fieldStrength, Dimension.FIELD_STRENGTH)), Dimension.FLUX_DENSITY);
+    }
+
+    /** H at a flux density, on the Quantity surface. */
+    default Quantity field(Quantity fluxDensity) {
+        return Quantity.of(fieldAt(Require.si("flux density", fluxDensity, Dimension.FLUX_DENSITY)), Dimension.FIELD_STRENGTH);
+    }
+
+    /** The material's core-loss model, when one is known. */
+    default Optional<CoreLoss> coreLoss() {
+        return Optional.empty();
+    }
+
+    /** The same material with a core-loss model, e.g. from datasheet Steinmetz parameters. */
+    default MagneticMaterial withCoreLoss(CoreLoss loss) {
+        Objects.requireNonNull(loss, "core loss");
+        return new LossyMaterial(this, loss);
+    }
+
+    /**
+     * A nonlinear material from its B-H table in SI (H in A/m, B in T), e.g. from a datasheet curve.
+     * H and B must increase strictly; the origin is added when missing. Between the points a monotone
+     * cubic (Fritsch–Carlson 1980) is used, beyond the last point the slope is μ0, and the curve is odd.
+     *
+     * @param saturation flux density (T) taken as saturated by the saturation check
+     */
+    static MagneticMaterial fromTable(String name, double[] fieldAmpsPerMetre, double[] tesla, double saturation) {
+        Objects.requireNonNull(name, "name");
+        Objects.requireNonNull(fieldAmpsPerMetre, "H values");
+        Objects.requireNonNull(tesla, "B values");
+        Require.positive("saturation flux density (T)", saturation);
+        return new TableMaterial(name, fieldAmpsPerMetre, tesla, saturation);
+    }
+
+    /** A nonlinear material from a B-H table of quantities (H in A/m or Oe, B in T or G). */
+    static MagneticMaterial fromTable(String name, Quantity[] field, Quantity[] fluxDensity, Quantity saturation) {
+        Objects.requireNonNull(field, "H values");
+        Objects.requireNonNull(fluxDensity, "B values");
+        double[] h = new double[field.length];
+        double[] b = new double[fluxDensity.length];
+        for (int i = 0; i < h.length; i++) h[i] = Require.si("H[" + i + "]", field[i], Dimension.FIELD_STRENGTH);
+        for (int i = 0; i < b.length; i++) b[i] = Require.si("B[" + i + "]", fluxDensity[i], Dimension.FLUX_DENSITY);
+        return fromTable(name, h, b, Require.positive("saturation flux density", saturation, Dimension.FLUX_DENSITY));
     }
 }

@@ -1,0 +1,109 @@
+package org.ampturn.drive;
+
+import org.ampturn.coil.Coil;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
+
+/**
+ * A drive connected to a coil (or a moving-armature actuator), with the clamp that takes the
+ * current when the switch opens, ready to {@link #simulate(Quantity)}. Immutable.
+ */
+public final class Circuit {
+    final Drive drive;
+    final Coil coil;            // exactly one of coil, armature
+    final Armature armature;
+    final Clamp clamp;          // may be null until the switch has to open
+    final double offAt;         // NaN: the drive runs to the end
+    final int samples;
+    final double relTol;
+    final boolean numeric;
+
+    /** Output samples unless {@link #samples(int)} says otherwise. */
+    public static final int DEFAULT_SAMPLES = 2001;
+    /** Relative tolerance of the adaptive integrator unless {@link #tolerance(double)} says otherwise. */
+    public static final double DEFAULT_TOLERANCE = 1e-9;
+
+    private Circuit(Drive drive, Coil coil, Armature armature, Clamp clamp, double offAt, int samples, double relTol, boolean numeric) {
+        this.drive = drive;
+        this.coil = coil;
+        this.armature = armature;
+        this.clamp = clamp;
+        this.offAt = offAt;
+        this.samples = samples;
+        this.relTol = relTol;
+        this.numeric = numeric;
+    }
+
+    static Circuit of(Drive d, Coil c) {
+        return new Circuit(d, c, null, null, Double.NaN, DEFAULT_SAMPLES, DEFAULT_TOLERANCE, false);
+    }
+
+    static Circuit of(Drive d, Armature a) {
+        return new Circuit(d, null, a, null, Double.NaN, DEFAULT_SAMPLES, DEFAULT_TOLERANCE, false);
+    }
+
+    /** The switch opens for good at {@code time}; {@code clamp} carries the current from then on (and in PWM off-times). */
+    public Circuit offAt(Quantity time, Clamp clamp) {
+        return offAt(time).clamp(clamp);
+    }
+
+    /** The switch opens for good at {@code time}, into the clamp given by {@link #clamp(Clamp)}. */
+    public Circuit offAt(Quantity time) {
+        double t = Require.nonNegative("off time", time, Dimension.TIME);
+        return new Circuit(drive, coil, armature, clamp, t, samples, relTol, numeric);
+    }
+
+    /** The clamp that carries the current whenever the switch is open. */
+    public Circuit clamp(Clamp c) {
+        if (c == null) throw new IllegalArgumentException("clamp is missing (null); use Clamp.none(V(..)) for none");
+        return new Circuit(drive, coil, armature, c, offAt, samples, relTol, numeric);
+    }
+
+    /** The same circuit with the coil at a temperature (its resistance changes). */
+    public Circuit at(Quantity temperature) {
+        Require.si("coil temperature", temperature, Dimension.TEMPERATURE);
+        if (!temperature.isAbsoluteTemperature()) {
+            throw new IllegalArgumentException("coil temperature must be an absolute temperature such as degC(80), got " + temperature);
+        }
+        return coil != null
+                ? new Circuit(drive, coil.atTemperature(temperature), null, clamp, offAt, samples, relTol, numeric)
+                : new Circuit(drive, null, armature.atTemperature(temperature), clamp, offAt, samples, relTol, numeric);
+    }
+
+    /** Number of evenly spaced output samples, from t = 0 to the end (at least 2). */
+    public Circuit samples(int n) {
+        if (n < 2 || n > 20_000_000) throw new IllegalArgumentException("samples (" + n + ") must be between 2 and 20000000");
+        return new Circuit(drive, coil, armature, clamp, offAt, n, relTol, numeric);
+    }
+
+    /** Relative tolerance of the adaptive integrator (1e-12 to 1e-3). */
+    public Circuit tolerance(double rtol) {
+        if (!(rtol >= 1e-12 && rtol <= 1e-3)) throw new IllegalArgumentException("tolerance (" + rtol + ") must be between 1e-12 and 1e-3");
+        return new Circuit(drive, coil, armature, clamp, offAt, samples, rtol, numeric);
+    }
+
+    /** Integrate numerically even where closed forms apply (for cross-checks). */
+    public Circuit numeric() {
+        return new Circuit(drive, coil, armature, clamp, offAt, samples, relTol, true);
+    }
+
+    public Drive drive() { return drive; }
+    public Clamp clampUsed() { return clamp; }
+
+    /** Solves the transient from t = 0 (switch closes, coil at rest) to {@code duration}. */
+    public Transient simulate(Quantity duration) {
+        double end = Require.si("duration", duration, Dimension.TIME);
+        if (!(end > 0)) throw new IllegalArgumentException("duration must be greater than zero, got " + duration);
+        return new Solver(this, end).run();
+    }
+
+    /** One line: drive, load, clamp, off time. */
+    @Override
+    public String toString() {
+        String s = drive + " into " + (coil != null ? coil.describe() : armature.describe());
+        if (!Double.isNaN(offAt)) s += ", off at " + Quantity.of(offAt, Dimension.TIME);
+        if (clamp != null) s += ", " + clamp;
+        return s;
+    }
+}

@@ -1,0 +1,151 @@
+package org.ampturn.drive;
+
+import org.ampturn.coil.Coil;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
+
+/**
+ * A supply and a low-side switch that drive a coil: a DC step, PWM at a frequency and duty, or
+ * peak-and-hold (full voltage until the current reaches a pull-in level, then a regulated hold
+ * current). The supply is an ideal voltage source behind a source resistance; the switch is a
+ * resistance when closed and an open circuit when open (its capacitance is left out). Immutable;
+ * {@code with…} methods return copies. See lib-docs/drives.md.
+ *
+ * <pre>{@code
+ * var run = Drive.dc(V(12)).into(coil).offAt(ms(20), Clamp.diode()).simulate(ms(40));
+ * }</pre>
+ */
+public final class Drive {
+    /** How the switch is operated. */
+    public enum Scheme { DC, PWM, PEAK_AND_HOLD }
+
+    /** How peak-and-hold regulates the hold current. */
+    public enum Regulation { HYSTERETIC, PWM }
+
+    final Scheme scheme;
+    final double volts;
+    final double sourceOhms;
+    final double switchOhms;
+    final double frequency;   // PWM frequency, or hold PWM frequency
+    final double duty;
+    final double peakAmps;
+    final double holdAmps;
+    final double band;        // hysteresis band, peak to peak
+    final Regulation regulation;
+
+    private Drive(Scheme scheme, double volts, double sourceOhms, double switchOhms, double frequency, double duty,
+                  double peakAmps, double holdAmps, double band, Regulation regulation) {
+        this.scheme = scheme;
+        this.volts = volts;
+        this.sourceOhms = sourceOhms;
+        this.switchOhms = switchOhms;
+        this.frequency = frequency;
+        this.duty = duty;
+        this.peakAmps = peakAmps;
+        this.holdAmps = holdAmps;
+        this.band = band;
+        this.regulation = regulation;
+    }
+
+    /** A DC supply switched on at t = 0. */
+    public static Drive dc(Quantity supply) {
+        double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
+        return new Drive(Scheme.DC, v, 0, 0, 0, 1, 0, 0, 0, Regulation.HYSTERETIC);
+    }
+
+    /** PWM: the switch is on for {@code duty / frequency} at the start of every period, from t = 0. */
+    public static Drive pwm(Quantity supply, Quantity frequency, double duty) {
+        double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
+        double f = Require.positive("PWM frequency", frequency, Dimension.FREQUENCY);
+        if (!(duty > 0 && duty <= 1)) throw new IllegalArgumentException("PWM duty (" + duty + ") must be above 0 and at most 1");
+        return new Drive(Scheme.PWM, v, 0, 0, f, duty, 0, 0, 0, Regulation.HYSTERETIC);
+    }
+
+    /**
+     * Peak-and-hold: full supply until the current reaches {@code pullIn}, then the hold current,
+     * regulated by a hysteretic comparator with a band of 20 % of the hold current (peak to peak)
+     * unless {@link #withHysteresis} or {@link #withHoldPwm} says otherwise.
+     */
+    public static Drive peakAndHold(Quantity supply, Quantity pullIn, Quantity hold) {
+        double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
+        double ip = Require.positive("pull-in current", pullIn, Dimension.CURRENT);
+        double ih = Require.positive("hold current", hold, Dimension.CURRENT);
+        if (!(ih < ip)) throw new IllegalArgumentException("hold current (" + hold + ") must be below the pull-in current (" + pullIn + ")");
+        return new Drive(Scheme.PEAK_AND_HOLD, v, 0, 0, 0, 1, ip, ih, 0.2 * ih, Regulation.HYSTERETIC);
+    }
+
+    /** The same drive with a source (supply and wiring) resistance. */
+    public Drive withSourceResistance(Quantity r) {
+        double rs = Require.nonNegative("source resistance", r, Dimension.RESISTANCE);
+        return new Drive(scheme, volts, rs, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation);
+    }
+
+    /** The same drive with a switch of the given on-resistance. */
+    public Drive withSwitchResistance(Quantity r) {
+        double ron = Require.nonNegative("switch on-resistance", r, Dimension.RESISTANCE);
+        return new Drive(scheme, volts, sourceOhms, ron, frequency, duty, peakAmps, holdAmps, band, regulation);
+    }
+
+    /** Peak-and-hold with hysteretic hold regulation: on below hold − band/2, off above hold + band/2. */
+    public Drive withHysteresis(Quantity band) {
+        requireScheme(Scheme.PEAK_AND_HOLD, "withHysteresis");
+        double b = Require.positive("hysteresis band", band, Dimension.CURRENT);
+        if (!(b < 2 * holdAmps)) {
+            throw new IllegalArgumentException("hysteresis band (" + band + ") must be below twice the hold current ("
+                    + Quantity.of(2 * holdAmps, Dimension.CURRENT) + ")");
+        }
+        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, b, Regulation.HYSTERETIC);
+    }
+
+    /**
+     * Peak-and-hold with fixed-frequency hold regulation (peak current mode): the switch closes at the
+     * start of each period and opens when the current reaches the hold level.
+     */
+    public Drive withHoldPwm(Quantity frequency) {
+        requireScheme(Scheme.PEAK_AND_HOLD, "withHoldPwm");
+        double f = Require.positive("hold PWM frequency", frequency, Dimension.FREQUENCY);
+        return new Drive(scheme, volts, sourceOhms, switchOhms, f, duty, peakAmps, holdAmps, band, Regulation.PWM);
+    }
+
+    private void requireScheme(Scheme s, String what) {
+        if (scheme != s) throw new IllegalStateException(what + " applies to a peak-and-hold drive, not to a " + this);
+    }
+
+    public Scheme scheme() { return scheme; }
+    public Quantity supply() { return Quantity.of(volts, Dimension.VOLTAGE); }
+    public Quantity sourceResistance() { return Quantity.of(sourceOhms, Dimension.RESISTANCE); }
+    public Quantity switchResistance() { return Quantity.of(switchOhms, Dimension.RESISTANCE); }
+
+    /** This drive connected to a coil; the switch closes at t = 0. */
+    public Circuit into(Coil coil) {
+        if (coil == null) throw new IllegalArgumentException("coil is missing (null)");
+        return Circuit.of(this, coil);
+    }
+
+    /** This drive connected to a moving-armature actuator; the switch closes at t = 0. */
+    public Circuit into(Armature actuator) {
+        if (actuator == null) throw new IllegalArgumentException("actuator is missing (null)");
+        return Circuit.of(this, actuator);
+    }
+
+    private static String a(double x) { return Quantity.of(x, Dimension.CURRENT).toString(); }
+
+    /** One line: scheme, supply and settings. */
+    @Override
+    public String toString() {
+        String s;
+        switch (scheme) {
+            case DC: s = "DC drive " + supply(); break;
+            case PWM: s = "PWM drive " + supply() + ", " + Quantity.of(frequency, Dimension.FREQUENCY)
+                    + String.format(java.util.Locale.ROOT, ", duty %.3g", duty); break;
+            default:
+                s = "peak-and-hold drive " + supply() + ", pull-in " + a(peakAmps) + ", hold " + a(holdAmps)
+                        + (regulation == Regulation.PWM ? " by PWM at " + Quantity.of(frequency, Dimension.FREQUENCY)
+                        : " ± " + a(band / 2) + " hysteretic");
+        }
+        if (sourceOhms > 0) s += ", source " + sourceResistance();
+        if (switchOhms > 0) s += ", switch " + switchResistance();
+        return s;
+    }
+}

@@ -1,0 +1,120 @@
+package org.ampturn.drive;
+
+import org.ampturn.coil.Coil;
+
+/** What the solver drives: a fixed coil or a moving armature, in SI kernels. */
+abstract class Load {
+    abstract double currentAt(double lambda, double x);
+
+    abstract double fieldEnergyAt(double lambda, double x);
+
+    abstract double forceAt(double lambda, double x);
+
+    abstract double restoringForceAt(double x, double v);
+
+    abstract double mass();
+
+    abstract double stroke();
+
+    abstract double resistance();
+
+    /** Small-signal inductance at the start position. */
+    abstract double inductance();
+
+    abstract boolean moves();
+
+    /** λ proportional to i and no motion: closed forms apply. */
+    abstract boolean linear();
+
+    abstract String describe();
+
+    static Load of(Coil coil) {
+        return new CoilLoad(coil);
+    }
+
+    static Load of(Armature a) {
+        return new ArmatureLoad(a);
+    }
+
+    /** A coil that does not move. Its field energy ∫ i dλ comes from 5-point Gauss-Legendre panels. */
+    static final class CoilLoad extends Load {
+        private final Coil coil;
+        private final double r;
+        private final double l;
+        private final boolean linear;
+        // the field energy is taken incrementally from the last point asked for
+        private double lastLambda;
+        private double lastEnergy;
+
+        CoilLoad(Coil coil) {
+            this.coil = coil;
+            this.r = coil.resistanceAt(coil.temperature().si());
+            this.l = coil.inductance().si();
+            this.linear = coil.isLinear();
+        }
+
+        @Override double currentAt(double lambda, double x) { return coil.currentAt(lambda); }
+
+        @Override
+        double fieldEnergyAt(double lambda, double x) {
+            if (linear) return 0.5 * lambda * lambda / l;
+            double from = Math.abs(lambda - lastLambda) <= Math.abs(lambda) ? lastLambda : 0;
+            double base = from == lastLambda ? lastEnergy : 0;
+            double w = base + integrate(from, lambda);
+            lastLambda = lambda;
+            lastEnergy = w;
+            return w;
+        }
+
+        private static final double[] GX = {0, -0.5384693101056831, 0.5384693101056831, -0.9061798459386640, 0.9061798459386640};
+        private static final double[] GW = {0.5688888888888889, 0.4786286704993665, 0.4786286704993665, 0.2369268850561891, 0.2369268850561891};
+
+        private double integrate(double a, double b) {
+            if (a == b) return 0;
+            int panels = 4;
+            double h = (b - a) / panels;
+            double sum = 0;
+            for (int p = 0; p < panels; p++) {
+                double mid = a + (p + 0.5) * h;
+                for (int k = 0; k < 5; k++) sum += GW[k] * coil.currentAt(mid + 0.5 * h * GX[k]);
+            }
+            return sum * 0.5 * h;
+        }
+
+        @Override double forceAt(double lambda, double x) { return 0; }
+        @Override double restoringForceAt(double x, double v) { return 0; }
+        @Override double mass() { return 1; }
+        @Override double stroke() { return 0; }
+        @Override double resistance() { return r; }
+        @Override double inductance() { return l; }
+        @Override boolean moves() { return false; }
+        @Override boolean linear() { return linear; }
+        @Override String describe() { return coil.describe(); }
+    }
+
+    static final class ArmatureLoad extends Load {
+        private final Armature a;
+        private final double r;
+        private final double stroke;
+        private final double mass;
+
+        ArmatureLoad(Armature a) {
+            this.a = a;
+            this.r = a.resistanceOhms();
+            this.stroke = a.strokeMetres();
+            this.mass = a.massKg();
+        }
+
+        @Override double currentAt(double lambda, double x) { return a.currentAt(lambda, x); }
+        @Override double fieldEnergyAt(double lambda, double x) { return a.fieldEnergyAt(lambda, x); }
+        @Override double forceAt(double lambda, double x) { return a.forceAt(lambda, x); }
+        @Override double restoringForceAt(double x, double v) { return a.restoringForceAt(x, v); }
+        @Override double mass() { return mass; }
+        @Override double stroke() { return stroke; }
+        @Override double resistance() { return r; }
+        @Override double inductance() { return a.inductanceAt(0); }
+        @Override boolean moves() { return true; }
+        @Override boolean linear() { return false; }
+        @Override String describe() { return a.describe(); }
+    }
+}

@@ -1,0 +1,39 @@
+package org.ampturn.drive;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.ampturn.units.Quantity;
+
+/**
+ * Key figures of a transient. A figure that does not apply to the run (a drop-out time with no
+ * armature, a ripple with no switching cycle) is NaN. Times to a fraction of the final current are
+ * measured in the first on-interval; the final current is the steady on-state current
+ * {@code V/(Rs + Ron + R)}; ripple and cycle mean are those of the last complete switching cycle
+ * (PWM period or hold cycle) before the switch opened for good, from the exact switching instants.
+ */
+public record Metrics(Quantity timeConstant, Quantity timeTo63, Quantity timeTo90, Quantity timeTo99,
+                      Quantity finalCurrent, Quantity peakCurrent, Quantity peakSwitchVoltage, Quantity peakStoredEnergy,
+                      Quantity clampEnergy, Quantity decayTime, Quantity ripple, Quantity cycleMean,
+                      Quantity pullInCurrentTime, Quantity pullInTime, Quantity dropOutTime) {
+
+    private static void add(List<String> out, String label, Quantity q) {
+        if (!Double.isNaN(q.si())) out.add(label + " " + q);
+    }
+
+    /** One line with the figures that apply. */
+    @Override
+    public String toString() {
+        List<String> s = new ArrayList<>();
+        add(s, "τ", timeConstant);
+        add(s, "final", finalCurrent);
+        add(s, "peak", peakCurrent);
+        add(s, "peak switch", peakSwitchVoltage);
+        add(s, "clamp", clampEnergy);
+        add(s, "decay", decayTime);
+        add(s, "ripple", ripple);
+        add(s, "cycle mean", cycleMean);
+        add(s, "pull-in", pullInTime);
+        add(s, "drop-out", dropOutTime);
+        return String.join(", ", s);
+    }
+}

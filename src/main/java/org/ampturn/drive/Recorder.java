@@ -1,0 +1,59 @@
+package org.ampturn.drive;
+
+import static org.ampturn.drive.Solver.*;
+
+/** The output samples of one run, filled in time order (the mutable side of a {@link Transient}). */
+final class Recorder {
+    final double[] time, current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp, pMech,
+            eSup, eDiss, eClamp, eStored, eMech;
+    final double[] x, v, force, capV;
+
+    Recorder(int n, boolean moves, boolean snub) {
+        time = new double[n];
+        current = new double[n];
+        lambda = new double[n];
+        coilV = new double[n];
+        resV = new double[n];
+        switchV = new double[n];
+        pSup = new double[n];
+        pCoil = new double[n];
+        pDrive = new double[n];
+        pClamp = new double[n];
+        pMech = new double[n];
+        eSup = new double[n];
+        eDiss = new double[n];
+        eClamp = new double[n];
+        eStored = new double[n];
+        eMech = new double[n];
+        x = moves ? new double[n] : null;
+        v = moves ? new double[n] : null;
+        force = moves ? new double[n] : null;
+        capV = snub ? new double[n] : null;
+    }
+
+    void put(int k, double t, double[] s, double[] o, double stored, double rc) {
+        double i = o[O_I];
+        time[k] = t;
+        current[k] = i;
+        lambda[k] = s[LAM];
+        coilV[k] = o[O_DLAM] + i * rc;
+        resV[k] = i * rc;
+        switchV[k] = o[O_VSW];
+        pSup[k] = o[O_PSUP];
+        pCoil[k] = o[O_PCOIL];
+        pDrive[k] = o[O_PDRV];
+        pClamp[k] = o[O_PCL];
+        pMech[k] = o[O_PMECH];
+        eSup[k] = s[ESUP];
+        eDiss[k] = s[ECOIL] + s[EDRV];
+        eClamp[k] = s[ECL];
+        eStored[k] = stored;
+        eMech[k] = s[EMECH];
+        if (x != null) {
+            x[k] = s[X];
+            v[k] = s[V];
+            force[k] = o[O_F];
+        }
+        if (capV != null) capV[k] = s[VC];
+    }
+}

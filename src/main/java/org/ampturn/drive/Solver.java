@@ -1,0 +1,584 @@
+package org.ampturn.drive;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.CancellationException;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
+
+/**
+ * Runs one transient: walks the switching schedule segment by segment, hands each segment to a
+ * stepper (closed form for linear pieces, adaptive Runge-Kutta otherwise), applies the event that
+ * ended it, and records samples and metrics. Not thread-safe; one instance per run.
+ *
+ * <p>State vector: λ, snubber capacitor voltage, position, speed, then the running integrals of
+ * supplied power, coil resistive loss, drive loss, clamp power, mechanical power and charge.
+ */
+final class Solver {
+    static final int LAM = 0, VC = 1, X = 2, V = 3, ESUP = 4, ECOIL = 5, EDRV = 6, ECL = 7, EMECH = 8, Q = 9, DIM = 10;
+
+    /** Electrical mode: switch closed, switch open with the clamp (or snubber) conducting, or nothing conducting. */
+    enum Elec { ON, CLAMP, IDLE }
+
+    /** Mechanical mode: moving, resting on the open stop, resting on the closed stop. */
+    enum Mech { FREE, OPEN, CLOSED }
+
+    // outputs of eval()
+    static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
+            O_F = 8, O_DVC = 9, O_ACC = 10, O_N = 11;
+
+    /** A current beyond this (A) on an accepted step is taken as a diverging solution. */
+    static final double DIVERGED_AMPS = 1e7;
+
+    /** Last flux linkage at which the coil model gave a non-finite current (NaN if never). */
+    double nonFiniteLambda = Double.NaN;
+
+    String noCurrentMessage() {
+        return "the coil current is not finite at flux linkage " + q(nonFiniteLambda, Dimension.FLUX) + " near t = " + sec(t)
+                + ": the core model gives no current there, so the solution diverges (check the resistance and the core's saturation)";
+    }
+
+    final Circuit circuit;
+    final Drive drive;
+    final Load load;
+    final Clamp clamp;
+    final double vs, rs, ron, rc, v0, rcl, cap, tEnd, offAt;
+    final boolean snub, acrossCoil, moves, closedForm;
+    final double finalCurrent;
+    final int n;
+    final double dt;
+
+    // run state
+    double t;
+    final double[] y = new double[DIM];
+    Elec elec = Elec.ON;
+    Mech mech = Mech.OPEN;
+    boolean switchOn = true;
+    boolean holdPhase;
+    boolean finalOff;
+    boolean firstOn = true;
+    double offCurrent = Double.NaN;
+
+    final Recorder rec;
+    final List<String> notes = new ArrayList<>();
+    final List<Marker> markers = new ArrayList<>();
+    final double[] scratch = new double[O_N];
+
+    // metrics
+    double t63 = Double.NaN, t90 = Double.NaN, t99 = Double.NaN;
+    double decayZero = Double.NaN, decay1pct = Double.NaN;
+    double peakSw = Double.NEGATIVE_INFINITY, peakSwT;
+    double peakI = Double.NEGATIVE_INFINITY, peakIT;
+    double peakStored, peakStoredT;
+    double pullIn = Double.NaN, dropOut = Double.NaN, startsMoving = Double.NaN;
+    double peakReached = Double.NaN;
+    double initialStored;
+    boolean everClosed;
+    // switching cycles (PWM periods, hold cycles)
+    boolean cycleOpen;
+    double cycStartT, cycStartQ, cycMin, cycMax;
+    double lastRipple = Double.NaN, lastMean = Double.NaN, lastCycleMin, lastCycleMax, lastCycleStart, lastCycleEnd;
+    int cycles;
+    long steps;
+
+    Solver(Circuit c, double tEnd) {
+        this.circuit = c;
+        this.drive = c.drive;
+        this.load = c.coil != null ? Load.of(c.coil) : Load.of(c.armature);
+        this.clamp = c.clamp;
+        this.vs = drive.volts;
+        this.rs = drive.sourceOhms;
+        this.ron = drive.switchOhms;
+        this.rc = load.resistance();
+        this.tEnd = tEnd;
+        this.offAt = c.offAt;
+        this.n = c.samples;
+        this.dt = tEnd / (n - 1);
+        this.snub = clamp != null && clamp.placement() == Clamp.Placement.SNUBBER;
+        this.acrossCoil = clamp != null && clamp.placement() == Clamp.Placement.ACROSS_COIL;
+        this.v0 = clamp != null ? clamp.offsetVolts() : 0;
+        this.rcl = clamp != null ? clamp.seriesOhms() : 0;
+        this.cap = clamp != null ? clamp.capacitanceFarads() : 0;
+        this.moves = load.moves();
+        this.closedForm = load.linear() && !moves && !snub && !c.numeric;
+        double rTot = rs + ron + rc;
+        this.finalCurrent = rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
+        validate();
+        this.rec = new Recorder(n, moves, snub);
+    }
+
+    private static String q(double v, Dimension d) { return Quantity.of(v, d).toString(); }
+    private static String sec(double v) { return q(v, Dimension.TIME); }
+    private static String amp(double v) { return q(v, Dimension.CURRENT); }
+    private static String volt(double v) { return q(v, Dimension.VOLTAGE); }
+
+    private void validate() {
+        if (!(load.inductance() > 0)) {
+            throw new IllegalArgumentException("the coil's inductance must be greater than zero, got "
+                    + q(load.inductance(), Dimension.INDUCTANCE) + ": with no inductance there is no transient to solve");
+        }
+        if (!(rc >= 0)) throw new IllegalArgumentException("the coil's resistance must be zero or more, got " + q(rc, Dimension.RESISTANCE));
+        if (!Double.isNaN(offAt) && offAt > tEnd) {
+            throw new IllegalArgumentException("off time (" + sec(offAt) + ") is after the end of the run (" + sec(tEnd)
+                    + "); simulate for longer or switch off earlier");
+        }
+        boolean opens = !Double.isNaN(offAt) || drive.scheme != Drive.Scheme.DC;
+        if (opens && clamp == null) {
+            throw new IllegalArgumentException("the switch opens during this run but no clamp was given: add .clamp(Clamp.diode()), "
+                    + "or Clamp.none(V(..)) to let the switch avalanche");
+        }
+        if (clamp != null && clamp.placement() == Clamp.Placement.ACROSS_SWITCH && !(v0 > vs)) {
+            throw new IllegalArgumentException("clamp voltage (" + volt(v0) + ") of the " + clamp + " must be above the supply ("
+                    + volt(vs) + "): it would conduct with the switch open and the coil would never switch off");
+        }
+        if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD) {
+            if (!(drive.peakAmps < finalCurrent)) {
+                throw new IllegalArgumentException("pull-in current (" + amp(drive.peakAmps) + ") is never reached: the steady current is V/R = "
+                        + amp(finalCurrent));
+            }
+        }
+        if (drive.scheme == Drive.Scheme.PWM && drive.frequency * tEnd > 5e6) {
+            throw new IllegalArgumentException("the run spans " + Math.round(drive.frequency * tEnd) + " PWM periods; at most 5000000 are solved");
+        }
+        if (drive.scheme == Drive.Scheme.PWM && n / (drive.frequency * tEnd) < 10) {
+            notes.add(String.format(java.util.Locale.ROOT, "samples are coarse for the PWM period (%.1f a period): curves alias, "
+                    + "ripple and mean come from the exact switching instants; use .samples(n) for smooth curves", n / (drive.frequency * tEnd)));
+        }
+    }
+
+    // ---------------------------------------------------------------- the circuit's equations
+
+    /** Current, switch voltage, dλ/dt, powers, force and acceleration in a mode. */
+    void eval(Elec e, Mech m, double[] s, double[] o) {
+        double lam = s[LAM], x = s[X], v = s[V];
+        double i = e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
+        if (!Double.isFinite(i)) {
+            // a trial stage beyond the core model's range: a huge current makes the integrator reject the step
+            nonFiniteLambda = lam;
+            i = Math.copySign(1e150, lam);
+        }
+        double vsw, dl, psup = 0, pdrv = 0, pcl = 0, dvc = 0;
+        switch (e) {
+            case ON:
+                if (snub) {
+                    double vc = s[VC];
+                    double node = ron > 0 ? (i + vc / rcl) / (1 / ron + 1 / rcl) : 0;
+                    double ic = (node - vc) / rcl;
+                    dvc = ic / cap;
+                    vsw = node;
+                    dl = vs - i * (rs + rc) - node;
+                    psup = vs * i;
+                    pdrv = i * i * rs + (ron > 0 ? node * node / ron : 0);
+                    pcl = ic * ic * rcl;
+                } else {
+                    vsw = i * ron;
+                    dl = vs - i * (rs + ron + rc);
+                    psup = vs * i;
+                    pdrv = i * i * (rs + ron);
+                }
+                break;
+            case CLAMP:
+                if (snub) {
+                    double vc = s[VC];
+                    vsw = vc + i * rcl;
+                    dvc = i / cap;
+                    dl = vs - i * (rs + rc) - vsw;
+                    psup = vs * i;
+                    pdrv = i * i * rs;
+                    pcl = i * i * rcl;
+                } else if (acrossCoil) {
+                    double vcl = v0 + rcl * i;
+                    dl = -vcl - i * rc;
+                    vsw = vs + vcl;
+                    pcl = vcl * i;
+                } else {
+                    double vcl = v0 + rcl * i;
+                    dl = vs - i * (rs + rc) - vcl;
+                    vsw = vcl;
+                    psup = vs * i;
+                    pdrv = i * i * rs;
+                    pcl = vcl * i;
+                }
+                break;
+            default:
+                dl = 0;
+                vsw = vs;
+                i = 0;
+        }
+        double f = moves ? load.forceAt(lam, x) : 0;
+        double acc = 0, pm = 0;
+        if (m == Mech.FREE) {
+            acc = (f - load.restoringForceAt(x, v)) / load.mass();
+            pm = f * v;
+        }
+        o[O_I] = i;
+        o[O_VSW] = vsw;
+        o[O_DLAM] = dl;
+        o[O_PSUP] = psup;
+        o[O_PCOIL] = i * i * rc;
+        o[O_PDRV] = pdrv;
+        o[O_PCL] = pcl;
+        o[O_PMECH] = pm;
+        o[O_F] = f;
+        o[O_DVC] = dvc;
+        o[O_ACC] = acc;
+    }
+
+    /** dy/dt in the current mode. */
+    void derivatives(double[] s, double[] d) {
+        eval(elec, mech, s, scratch);
+        d[LAM] = scratch[O_DLAM];
+        d[VC] = scratch[O_DVC];
+        d[X] = mech == Mech.FREE ? s[V] : 0;
+        d[V] = scratch[O_ACC];
+        d[ESUP] = scratch[O_PSUP];
+        d[ECOIL] = scratch[O_PCOIL];
+        d[EDRV] = scratch[O_PDRV];
+        d[ECL] = scratch[O_PCL];
+        d[EMECH] = scratch[O_PMECH];
+        d[Q] = scratch[O_I];
+    }
+
+    double storedAt(double[] s) {
+        double w = load.fieldEnergyAt(s[LAM], s[X]);
+        if (snub) w += 0.5 * cap * s[VC] * s[VC];
+        return w;
+    }
+
+    /** The crossing function of an event: zero at the level. */
+    double g(Ev ev, double[] s) {
+        switch (ev.kind) {
+            case CURRENT: return load.currentAt(s[LAM], s[X]) - ev.level;
+            case POSITION: return s[X] - ev.level;
+            default:
+                // the magnetic force grows as λ², so F − Fr can dip below zero and back within one step as λ
+                // swings through zero; ±√F − √Fr changes sign once, where F − Fr does
+                double f = load.forceAt(s[LAM], s[X]), fr = load.restoringForceAt(s[X], 0);
+                if (fr < 0 || f < 0) return f - fr;
+                return Math.copySign(Math.sqrt(f), s[LAM]) - Math.sqrt(fr);
+        }
+    }
+
+    // ---------------------------------------------------------------- sampling and observing
+
+    private int nextSample;
+
+    double sampleTime(int k) {
+        return k == n - 1 ? tEnd : k * dt;
+    }
+
+    /** Index of the next grid sample not yet recorded. */
+    int nextSample() { return nextSample; }
+
+    void record(int k, double[] s) {
+        if (k != nextSample) throw new IllegalStateException("sample " + k + " out of order, expected " + nextSample);
+        double tk = sampleTime(k);
+        eval(elec, mech, s, scratch);
+        double stored = storedAt(s);
+        rec.put(k, tk, s, scratch, stored, rc);
+        observe(tk, s, scratch, stored);
+        nextSample++;
+    }
+
+    void observe(double tt, double[] s) {
+        eval(elec, mech, s, scratch);
+        observe(tt, s, scratch, Double.NaN);
+    }
+
+    private void observe(double tt, double[] s, double[] o, double stored) {
+        double vsw = o[O_VSW], i = o[O_I];
+        if (!(Math.abs(i) <= DIVERGED_AMPS)) {
+            if (Math.abs(i) >= 1e150) throw new TransientException(noCurrentMessage());
+            throw new TransientException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
+                    + q(s[LAM], Dimension.FLUX) + "): the solution diverges (check the resistance and the core's saturation)");
+        }
+        if (vsw > peakSw) { peakSw = vsw; peakSwT = tt; }
+        if (i > peakI) { peakI = i; peakIT = tt; }
+        if (stored > peakStored) { peakStored = stored; peakStoredT = tt; }
+        if (cycleOpen) {
+            cycMin = Math.min(cycMin, i);
+            cycMax = Math.max(cycMax, i);
+        }
+        steps++;
+        if ((steps & 63) == 0 && Thread.currentThread().isInterrupted()) {
+            throw new CancellationException("transient stopped at t = " + sec(tt) + ": the thread was interrupted");
+        }
+    }
+
+    /** A new switching cycle starts now: the previous one's ripple and mean become the latest complete cycle. */
+    private void startCycle() {
+        double i = load.currentAt(y[LAM], y[X]);
+        if (cycleOpen && t > cycStartT) {
+            cycMin = Math.min(cycMin, i);
+            cycMax = Math.max(cycMax, i);
+            lastRipple = cycMax - cycMin;
+            lastMean = (y[Q] - cycStartQ) / (t - cycStartT);
+            lastCycleMin = cycMin;
+            lastCycleMax = cycMax;
+            lastCycleStart = cycStartT;
+            lastCycleEnd = t;
+            cycles++;
+        }
+        cycleOpen = true;
+        cycStartT = t;
+        cycStartQ = y[Q];
+        cycMin = i;
+        cycMax = i;
+    }
+
+    // ---------------------------------------------------------------- the schedule
+
+    private double nextScheduled() {
+        double next = tEnd;
+        if (!Double.isNaN(offAt) && offAt > t && !finalOff) next = Math.min(next, offAt);
+        if (finalOff) return next;
+        double f = drive.frequency;
+        if (drive.scheme == Drive.Scheme.PWM || (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && holdPhase && drive.regulation == Drive.Regulation.PWM)) {
+            double period = 1 / f;
+            long k = (long) Math.floor(t * f);
+            double eps = 1e-9 * period;
+            double[] cand = drive.scheme == Drive.Scheme.PWM
+                    ? new double[] {k * period, (k + drive.duty) * period, (k + 1) * period, (k + 1 + drive.duty) * period}
+                    : new double[] {k * period, (k + 1) * period};
+            for (double c : cand) {
+                if (c > t + eps) {
+                    next = Math.min(next, c);
+                    break;
+                }
+            }
+        }
+        return next;
+    }
+
+    private void scheduledEdge() {
+        if (t >= tEnd) return;
+        if (!finalOff && !Double.isNaN(offAt) && Math.abs(t - offAt) <= 1e-12 * Math.max(tEnd, 1e-300)) {
+            finalOff = true;
+            offCurrent = currentNow();
+            if (cycleOpen) cycleOpen = false;
+            setSwitch(false);
+            markers.add(new Marker("switch off", tq(t), Quantity.of(offCurrent, Dimension.CURRENT), "current"));
+            return;
+        }
+        double f = drive.frequency;
+        double phase = t * f - Math.floor(t * f + 1e-9);
+        boolean periodStart = Math.abs(phase) < 1e-6;
+        if (drive.scheme == Drive.Scheme.PWM) {
+            if (periodStart) {
+                startCycle();
+                setSwitch(true);
+            } else {
+                setSwitch(false);
+            }
+        } else if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && holdPhase && drive.regulation == Drive.Regulation.PWM && periodStart) {
+            startCycle();
+            if (currentNow() < drive.holdAmps) setSwitch(true);
+        }
+    }
+
+    private double currentNow() {
+        if (elec == Elec.IDLE && !moves) return 0;
+        return load.currentAt(y[LAM], y[X]);
+    }
+
+    private void setSwitch(boolean on) {
+        if (!on && switchOn) firstOn = false;
+        switchOn = on;
+        if (on) {
+            elec = Elec.ON;
+        } else if (snub) {
+            elec = Elec.CLAMP;
+        } else {
+            elec = currentNow() > 0 ? Elec.CLAMP : Elec.IDLE;
+            if (elec == Elec.IDLE) y[LAM] = 0;
+        }
+    }
+
+    private static Quantity tq(double s) { return Quantity.of(s, Dimension.TIME); }
+
+    // ---------------------------------------------------------------- events
+
+    private List<Ev> events() {
+        List<Ev> ev = new ArrayList<>(6);
+        boolean ph = drive.scheme == Drive.Scheme.PEAK_AND_HOLD && !finalOff;
+        if (switchOn) {
+            if (ph && !holdPhase) ev.add(new Ev(Ev.Kind.CURRENT, drive.peakAmps, 1, Ev.Act.PEAK_REACHED));
+            if (ph && holdPhase && drive.regulation == Drive.Regulation.HYSTERETIC) {
+                ev.add(new Ev(Ev.Kind.CURRENT, drive.holdAmps + drive.band / 2, 1, Ev.Act.HOLD_HIGH));
+            }
+            if (ph && holdPhase && drive.regulation == Drive.Regulation.PWM) ev.add(new Ev(Ev.Kind.CURRENT, drive.holdAmps, 1, Ev.Act.HOLD_PWM_OFF));
+            if (firstOn && Double.isFinite(finalCurrent)) {
+                if (Double.isNaN(t63)) ev.add(new Ev(Ev.Kind.CURRENT, (1 - Math.exp(-1)) * finalCurrent, 1, Ev.Act.REC_63));
+                else if (Double.isNaN(t90)) ev.add(new Ev(Ev.Kind.CURRENT, 0.9 * finalCurrent, 1, Ev.Act.REC_90));
+                else if (Double.isNaN(t99)) ev.add(new Ev(Ev.Kind.CURRENT, 0.99 * finalCurrent, 1, Ev.Act.REC_99));
+            }
+        } else {
+            if (ph && holdPhase && drive.regulation == Drive.Regulation.HYSTERETIC) {
+                ev.add(new Ev(Ev.Kind.CURRENT, drive.holdAmps - drive.band / 2, -1, Ev.Act.HOLD_LOW));
+            }
+            if (elec == Elec.CLAMP && !snub) ev.add(new Ev(Ev.Kind.CURRENT, 0, -1, Ev.Act.CLAMP_ZERO));
+            if (finalOff && snub && Double.isNaN(decayZero)) ev.add(new Ev(Ev.Kind.CURRENT, 0, -1, Ev.Act.SNUBBER_ZERO));
+            if (finalOff && elec != Elec.IDLE && Double.isNaN(decay1pct) && offCurrent > 0) {
+                ev.add(new Ev(Ev.Kind.CURRENT, 0.01 * offCurrent, -1, Ev.Act.DECAY_1PCT));
+            }
+        }
+        if (moves) {
+            switch (mech) {
+                case FREE:
+                    ev.add(new Ev(Ev.Kind.POSITION, 0, -1, Ev.Act.HIT_OPEN));
+                    ev.add(new Ev(Ev.Kind.POSITION, load.stroke(), 1, Ev.Act.HIT_CLOSED));
+                    break;
+                case OPEN:
+                    ev.add(new Ev(Ev.Kind.NET_FORCE, 0, 1, Ev.Act.RELEASE_OPEN));
+                    break;
+                default:
+                    ev.add(new Ev(Ev.Kind.NET_FORCE, 0, -1, Ev.Act.RELEASE_CLOSED));
+            }
+        }
+        return ev;
+    }
+
+    private void fire(Ev ev) {
+        double i = currentNow();
+        Quantity iq = Quantity.of(i, Dimension.CURRENT);
+        switch (ev.act) {
+            case PEAK_REACHED:
+                holdPhase = true;
+                peakReached = t;
+                markers.add(new Marker("pull-in current reached", tq(t), iq, "current"));
+                setSwitch(false);
+                if (drive.regulation == Drive.Regulation.HYSTERETIC) startCycle();
+                break;
+            case HOLD_HIGH:
+            case HOLD_PWM_OFF:
+                setSwitch(false);
+                break;
+            case HOLD_LOW:
+                startCycle();
+                setSwitch(true);
+                break;
+            case CLAMP_ZERO:
+                elec = Elec.IDLE;
+                y[LAM] = 0;
+                if (finalOff && Double.isNaN(decayZero)) {
+                    decayZero = t - offAt;
+                    markers.add(new Marker("current zero", tq(t), Quantity.of(0, Dimension.CURRENT), "current"));
+                }
+                break;
+            case SNUBBER_ZERO:
+                decayZero = t - offAt;
+                markers.add(new Marker("current zero", tq(t), Quantity.of(0, Dimension.CURRENT), "current"));
+                break;
+            case DECAY_1PCT:
+                decay1pct = t - offAt;
+                break;
+            case REC_63:
+                t63 = t;
+                markers.add(new Marker("τ", tq(t), iq, "current"));
+                break;
+            case REC_90:
+                t90 = t;
+                markers.add(new Marker("90 %", tq(t), iq, "current"));
+                break;
+            case REC_99:
+                t99 = t;
+                markers.add(new Marker("99 %", tq(t), iq, "current"));
+                break;
+            case HIT_OPEN:
+                y[X] = 0;
+                y[V] = 0;
+                mech = Mech.OPEN;
+                if (everClosed && Double.isNaN(dropOut) && finalOff) {
+                    dropOut = t - offAt;
+                    markers.add(new Marker("drop-out", tq(t), Quantity.of(0, Dimension.LENGTH), "position"));
+                }
+                if (netForce() > 0) mech = Mech.FREE;
+                break;
+            case HIT_CLOSED:
+                y[X] = load.stroke();
+                y[V] = 0;
+                mech = Mech.CLOSED;
+                if (!everClosed) {
+                    everClosed = true;
+                    pullIn = t;
+                    markers.add(new Marker("pull-in", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
+                }
+                if (netForce() < 0) {
+                    mech = Mech.FREE;
+                    markers.add(new Marker("release", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
+                }
+                break;
+            case RELEASE_OPEN:
+                mech = Mech.FREE;
+                if (Double.isNaN(startsMoving)) {
+                    startsMoving = t;
+                    markers.add(new Marker("armature moves", tq(t), Quantity.of(0, Dimension.LENGTH), "position"));
+                }
+                break;
+            case RELEASE_CLOSED:
+                mech = Mech.FREE;
+                markers.add(new Marker("release", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
+                break;
+            default:
+                throw new IllegalStateException(ev.act.toString());
+        }
+    }
+
+    private double netForce() {
+        return load.forceAt(y[LAM], y[X]) - load.restoringForceAt(y[X], 0);
+    }
+
+    // ---------------------------------------------------------------- the run
+
+    Transient run() {
+        y[VC] = snub ? vs : 0;
+        initialStored = storedAt(y);
+        peakStored = initialStored;
+        elec = Elec.ON;
+        switchOn = true;
+        if (drive.scheme == Drive.Scheme.PWM) startCycle();
+        if (!Double.isNaN(offAt) && offAt == 0) scheduledEdge();
+        Stepper stepper = closedForm ? new ClosedFormStepper(this) : new OdeStepper(this, circuit.relTol);
+        notes.add(closedForm ? "solved in closed form (linear coil, piecewise-linear circuit)"
+                : "solved with " + ((OdeStepper) stepper).describe());
+        int stuck = 0;
+        double lastT = -1;
+        int[] fired = new int[1];
+        while (t < tEnd) {
+            if (Thread.currentThread().isInterrupted()) {
+                throw new CancellationException("transient stopped at t = " + sec(t) + ": the thread was interrupted");
+            }
+            double t1 = nextScheduled();
+            List<Ev> evs = events();
+            fired[0] = -1;
+            double tStop = stepper.advance(t, t1, y, evs, fired);
+            boolean atEdge = fired[0] < 0 || t1 - tStop <= 1e-12 * tEnd;
+            t = atEdge ? t1 : tStop;
+            observe(t, y);
+            if (fired[0] >= 0) fire(evs.get(fired[0]));
+            if (atEdge) scheduledEdge();
+            observe(t, y);
+            if (t == lastT) {
+                if (++stuck > 200) {
+                    throw new TransientException("the switching chatters at t = " + sec(t) + " (current " + amp(currentNow())
+                            + "): events repeat without time advancing; widen the hysteresis band or lower the PWM frequency");
+                }
+            } else {
+                stuck = 0;
+                lastT = t;
+            }
+        }
+        while (nextSample < n) record(nextSample, y);
+        if (stepper instanceof OdeStepper) {
+            OdeStepper o = (OdeStepper) stepper;
+            notes.add(o.steps() + " accepted steps, " + o.evaluations() + " derivative evaluations");
+        }
+        return Transient.of(this);
+    }
+
+    /** Advances the state over one segment, recording the samples it passes. */
+    interface Stepper {
+        /** From t0 toward t1; returns the stop time and sets fired[0] to the index of the event that stopped it, or −1. */
+        double advance(double t0, double t1, double[] y, List<Ev> evs, int[] fired);
+    }
+}

@@ -1,0 +1,209 @@
+package org.ampturn.drive;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Locale;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
+
+/**
+ * The solved transient of a drive, a coil and a clamp: sampled signals on a common time axis, the
+ * metrics, the energy ledger, markers of key instants, solver notes and safety cautions. Immutable.
+ *
+ * <p>Signals: {@code current}, {@code flux linkage}, {@code coil voltage} (across the coil's terminals,
+ * {@code dλ/dt + R·i}), {@code resistor voltage} (the winding resistance's part {@code R·i}),
+ * {@code switch voltage}, powers, cumulative energies, and for a moving armature {@code position},
+ * {@code speed} and {@code magnetic force}.
+ */
+public final class Transient {
+    /** Switch voltage above which a caution is shown (common practice: the usual extra-low-voltage DC touch limit). */
+    public static final double CAUTION_VOLTS = 60;
+    /** Stored energy above which a caution is shown (common practice). */
+    public static final double CAUTION_JOULES = 1;
+
+    private final String circuit;
+    private final List<Signal> signals;
+    private final Signal current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp, pMech,
+            eSup, eDiss, eClamp, eStored, eMech, position, speed, force, capV;
+    private final Metrics metrics;
+    private final EnergyLedger energy;
+    private final List<Marker> markers;
+    private final List<String> notes;
+    private final List<String> cautions;
+    private final double duration;
+
+    private Transient(Solver sv) {
+        Recorder r = sv.rec;
+        double[] t = r.time;
+        this.circuit = sv.circuit.toString();
+        this.duration = sv.tEnd;
+        List<Signal> all = new ArrayList<>();
+        current = add(all, "current", Dimension.CURRENT, t, r.current);
+        lambda = add(all, "flux linkage", Dimension.FLUX, t, r.lambda);
+        coilV = add(all, "coil voltage", Dimension.VOLTAGE, t, r.coilV);
+        resV = add(all, "resistor voltage", Dimension.VOLTAGE, t, r.resV);
+        switchV = add(all, "switch voltage", Dimension.VOLTAGE, t, r.switchV);
+        pSup = add(all, "supply power", Dimension.POWER, t, r.pSup);
+        pCoil = add(all, "coil resistance power", Dimension.POWER, t, r.pCoil);
+        pDrive = add(all, "drive loss power", Dimension.POWER, t, r.pDrive);
+        pClamp = add(all, "clamp power", Dimension.POWER, t, r.pClamp);
+        pMech = sv.moves ? add(all, "mechanical power", Dimension.POWER, t, r.pMech) : Signal.wrap("mechanical power", Dimension.POWER, t, r.pMech);
+        eSup = add(all, "supplied energy", Dimension.ENERGY, t, r.eSup);
+        eDiss = add(all, "dissipated energy", Dimension.ENERGY, t, r.eDiss);
+        eClamp = add(all, "clamp energy", Dimension.ENERGY, t, r.eClamp);
+        eStored = add(all, "stored energy", Dimension.ENERGY, t, r.eStored);
+        eMech = sv.moves ? add(all, "mechanical energy", Dimension.ENERGY, t, r.eMech) : null;
+        position = sv.moves ? add(all, "position", Dimension.LENGTH, t, r.x) : null;
+        speed = sv.moves ? add(all, "speed", Dimension.VELOCITY, t, r.v) : null;
+        force = sv.moves ? add(all, "magnetic force", Dimension.FORCE, t, r.force) : null;
+        capV = sv.snub ? add(all, "snubber capacitor voltage", Dimension.VOLTAGE, t, r.capV) : null;
+        signals = Collections.unmodifiableList(all);
+
+        double[] y = sv.y;
+        double stored = sv.storedAt(y) - sv.initialStored;
+        energy = new EnergyLedger(y[Solver.ESUP], y[Solver.ECOIL], y[Solver.EDRV], y[Solver.ECL], stored, y[Solver.EMECH]);
+
+        double tau = sv.load.linear() && !sv.moves ? sv.load.inductance() / (sv.rs + sv.ron + sv.rc) : sv.t63;
+        metrics = new Metrics(tq(tau), tq(sv.t63), tq(sv.t90), tq(sv.t99),
+                Quantity.of(sv.finalCurrent, Dimension.CURRENT), Quantity.of(sv.peakI, Dimension.CURRENT),
+                Quantity.of(sv.peakSw, Dimension.VOLTAGE), Quantity.of(sv.peakStored, Dimension.ENERGY),
+                Quantity.of(y[Solver.ECL], Dimension.ENERGY),
+                tq(Double.isNaN(sv.decayZero) ? sv.decay1pct : sv.decayZero),
+                Quantity.of(sv.lastRipple, Dimension.CURRENT), Quantity.of(sv.lastMean, Dimension.CURRENT),
+                tq(sv.peakReached), tq(sv.pullIn), tq(sv.dropOut));
+
+        List<Marker> mk = new ArrayList<>(sv.markers);
+        if (sv.peakSw > Double.NEGATIVE_INFINITY) {
+            mk.add(new Marker("peak switch voltage", tq(sv.peakSwT), Quantity.of(sv.peakSw, Dimension.VOLTAGE), "switch voltage"));
+        }
+        mk.sort((a, b) -> Double.compare(a.time().si(), b.time().si()));
+        markers = Collections.unmodifiableList(mk);
+
+        List<String> nt = new ArrayList<>(sv.notes);
+        if (sv.finalOff && Double.isNaN(sv.decayZero) && sv.offCurrent > 0) {
+            nt.add(Double.isNaN(sv.decay1pct) ? "the current had not decayed to 1 % of its turn-off value by the end of the run"
+                    : "the current only approaches zero; the decay time is the time to 1 % of the turn-off current");
+        }
+        if (sv.moves && Double.isNaN(sv.pullIn)) nt.add("the armature did not reach the closed stop");
+        notes = Collections.unmodifiableList(nt);
+
+        List<String> cs = new ArrayList<>();
+        if (sv.peakSw > CAUTION_VOLTS) {
+            cs.add("the switch sees " + Quantity.of(sv.peakSw, Dimension.VOLTAGE) + ", above 60 V (a common-practice threshold for "
+                    + "touchable low-voltage circuits): the flyback spike can shock and can destroy parts; rate the switch and clamp for it");
+        }
+        if (sv.peakStored > CAUTION_JOULES) {
+            cs.add("the coil stores up to " + Quantity.of(sv.peakStored, Dimension.ENERGY) + ", above 1 J (a common-practice threshold): "
+                    + "opening the circuit can arc, shock or burn; give the energy a safe path");
+        }
+        if (sv.clamp != null && sv.clamp.kind() == Clamp.Kind.NONE && y[Solver.ECL] > 0) {
+            cs.add("the switch absorbs " + Quantity.of(y[Solver.ECL], Dimension.ENERGY) + " in avalanche at each turn-off; "
+                    + "check it against the switch's rated avalanche energy");
+        }
+        if (!cs.isEmpty()) cs.add("these thresholds are common practice, not limits: defer to local codes and licensed practice");
+        cautions = Collections.unmodifiableList(cs);
+    }
+
+    static Transient of(Solver sv) {
+        return new Transient(sv);
+    }
+
+    private static Signal add(List<Signal> all, String name, Dimension d, double[] t, double[] v) {
+        Signal s = Signal.wrap(name, d, t, v);
+        all.add(s);
+        return s;
+    }
+
+    private static Quantity tq(double s) {
+        return Quantity.of(s, Dimension.TIME);
+    }
+
+    public Signal current() { return current; }
+    public Signal fluxLinkage() { return lambda; }
+    public Signal coilVoltage() { return coilV; }
+    public Signal resistorVoltage() { return resV; }
+    public Signal switchVoltage() { return switchV; }
+    public Signal storedEnergy() { return eStored; }
+    public Signal suppliedEnergy() { return eSup; }
+    public Signal dissipatedEnergy() { return eDiss; }
+    /** Cumulative clamp energy over time (the total is {@code metrics().clampEnergy()}). */
+    public Signal clampEnergy() { return eClamp; }
+    /** Voltage on the snubber capacitor; only for an RC snubber. */
+    public Signal capacitorVoltage() { return require(capV, "an RC snubber"); }
+    /** Armature position from the open stop; only for a moving armature. */
+    public Signal position() { return require(position, "a moving armature"); }
+    public Signal speed() { return require(speed, "a moving armature"); }
+    public Signal force() { return require(force, "a moving armature"); }
+    public Signal mechanicalEnergy() { return require(eMech, "a moving armature"); }
+
+    private Signal require(Signal s, String what) {
+        if (s == null) throw new IllegalStateException("this run has no " + what.replaceFirst("^an? ", "") + "; the signal exists only for " + what);
+        return s;
+    }
+
+    /** A power over time: "supply", "coil" (winding resistance), "drive" (source and switch), "clamp" or "mechanical". */
+    public Signal power(String which) {
+        switch (which == null ? "" : which.toLowerCase(Locale.ROOT)) {
+            case "supply": return pSup;
+            case "coil": case "resistance": case "resistive": return pCoil;
+            case "drive": case "switch": case "source": return pDrive;
+            case "clamp": return pClamp;
+            case "mechanical": return pMech;
+            default: throw new IllegalArgumentException("power (\"" + which + "\") must be one of supply, coil, drive, clamp, mechanical");
+        }
+    }
+
+    /** Every signal of the run, current first, for charts. */
+    public List<Signal> signals() { return signals; }
+
+    public List<Marker> markers() { return markers; }
+
+    public EnergyLedger energy() { return energy; }
+
+    public Metrics metrics() { return metrics; }
+
+    public Quantity timeConstant() { return metrics.timeConstant(); }
+    public Quantity finalCurrent() { return metrics.finalCurrent(); }
+    public Quantity peakCurrent() { return metrics.peakCurrent(); }
+    public Quantity peakSwitchVoltage() { return metrics.peakSwitchVoltage(); }
+    public Quantity decayTime() { return metrics.decayTime(); }
+    public Quantity ripple() { return metrics.ripple(); }
+    public Quantity cycleMean() { return metrics.cycleMean(); }
+    public Quantity pullInTime() { return metrics.pullInTime(); }
+    public Quantity dropOutTime() { return metrics.dropOutTime(); }
+
+    /**
+     * Time at which the current first reaches {@code fraction} of the final current. 0.63 (taken as
+     * 1 − 1/e), 0.9 and 0.99 are located exactly by the solver; other fractions are interpolated
+     * from the samples. NaN when not reached.
+     */
+    public Quantity timeTo(double fraction) {
+        if (!(fraction > 0 && fraction < 1)) throw new IllegalArgumentException("fraction (" + fraction + ") must be between 0 and 1");
+        if (Math.abs(fraction - 0.63) < 0.0025) return metrics.timeTo63();
+        if (fraction == 0.9) return metrics.timeTo90();
+        if (fraction == 0.99) return metrics.timeTo99();
+        double level = fraction * metrics.finalCurrent().si();
+        double[] ts = current.times(), is = current.values();
+        for (int k = 1; k < is.length; k++) {
+            if (is[k - 1] < level && is[k] >= level) {
+                return tq(ts[k - 1] + (level - is[k - 1]) / (is[k] - is[k - 1]) * (ts[k] - ts[k - 1]));
+            }
+        }
+        return tq(Double.NaN);
+    }
+
+    /** How the run was solved, and what to know about the result. */
+    public List<String> notes() { return notes; }
+
+    /** Safety cautions (switch voltage above 60 V, stored energy above 1 J, avalanche), deferring to local codes and licensed practice. */
+    public List<String> cautions() { return cautions; }
+
+    /** One line: the circuit, key figures and cautions. */
+    @Override
+    public String toString() {
+        String s = "transient " + tq(duration) + " of " + circuit + ": " + metrics;
+        if (!cautions.isEmpty()) s += "; CAUTION: " + String.join("; ", cautions);
+        return s;
+    }
+}

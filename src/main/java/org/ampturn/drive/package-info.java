@@ -1,0 +1,17 @@
+/**
+ * Drives and transients: a supply and switch (DC step, PWM, peak-and-hold) drive a coil or a
+ * moving-armature actuator; a clamp takes the current when the switch opens; {@link
+ * org.ampturn.drive.Circuit#simulate} returns a {@link org.ampturn.drive.Transient} with signals,
+ * metrics, an energy ledger, markers and cautions.
+ *
+ * <p>Conventions: SI doubles inside (weber-turns, amperes, volts, seconds, joules), {@code Quantity}
+ * on the surface; no nulls accepted or returned (a figure that does not apply is NaN); immutable
+ * values with {@code with…} copies. The state is the coil's flux linkage (plus snubber capacitor
+ * voltage, armature position and speed) and the running energy integrals; linear pieces are solved
+ * in closed form (first-order RL response, Hayt, Kemmerly and Durbin, Engineering Circuit Analysis,
+ * 8th ed., ch. 8), the rest with Commons Math's Dormand-Prince 8(5,3) integrator (Hairer, Nørsett and
+ * Wanner, Solving ODEs I, II.5). Loops poll the thread's interrupt flag and stop with a
+ * {@link java.util.concurrent.CancellationException}. Equations and assumptions: lib-docs/drives.md,
+ * clamps.md, transients.md.
+ */
+package org.ampturn.drive;

@@ -1,0 +1,168 @@
+package org.ampturn.material;
+
+import java.util.Locale;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
+import org.apache.commons.math3.special.Gamma;
+
+/**
+ * Core loss per volume from Steinmetz parameters, for sinusoidal and for piecewise-linear flux.
+ * Immutable. Loss densities are in W/m³ with f in Hz and B in tesla.
+ *
+ * <p>Sinusoidal flux of peak B̂ (C. P. Steinmetz, "On the law of hysteresis", Trans. AIEE 9,
+ * 1892, generalised to the frequency exponent as is usual in ferrite datasheets):
+ * P_v = k · f^α · B̂^β.
+ *
+ * <p>Any periodic flux, by the improved generalised Steinmetz equation (iGSE) of K. Venkatachalam,
+ * C. R. Sullivan, T. Abdallah, H. Tacca, "Accurate prediction of ferrite core loss with nonsinusoidal
+ * waveforms using only Steinmetz parameters", IEEE COMPEL 2002:
+ * P_v = (1/T) ∫ k_i |dB/dt|^α (ΔB)^(β−α) dt, with ΔB the peak-to-peak flux swing and
+ * k_i = k / ((2π)^(α−1) · ∫₀^{2π} |cos θ|^α · 2^(β−α) dθ),
+ * where ∫₀^{2π} |cos θ|^α dθ = 2√π Γ((α+1)/2) / Γ(α/2 + 1). For a sine the iGSE gives Steinmetz's
+ * value exactly. For a piecewise-linear flux (the ripple of a choke) the integral is the sum
+ * k_i (ΔB)^(β−α) f Σ |ΔB_j|^α Δt_j^(1−α); for a triangle of duty D this is
+ * P_v = k_i · ΔB^β · f^α · (D^(1−α) + (1−D)^(1−α)).
+ *
+ * <p>Range: the parameters hold over the frequency and flux range they were fitted on (a datasheet's
+ * curves), for an unbiased loop with no minor loops (single peak-to-peak swing per period); DC bias,
+ * relaxation after flat parts of the waveform (i²GSE) and temperature dependence are not included.
+ */
+public final class CoreLoss {
+    private final double k;
+    private final double alpha;
+    private final double beta;
+    private final double ki;
+    private final String source;
+
+    private CoreLoss(double k, double alpha, double beta, String source) {
+        this.k = k;
+        this.alpha = alpha;
+        this.beta = beta;
+        this.source = source;
+        double cosInt = 2 * Math.sqrt(Math.PI) * Math.exp(Gamma.logGamma((alpha + 1) / 2) - Gamma.logGamma(alpha / 2 + 1));
+        this.ki = k / (Math.pow(2 * Math.PI, alpha - 1) * cosInt * Math.pow(2, beta - alpha));
+    }
+
+    /**
+     * Steinmetz parameters: P_v = k · f^α · B̂^β with P_v in W/m³, f in Hz and B̂ in T.
+     *
+     * @param k coefficient in W/m³ for f in Hz and B in T
+     * @param alpha frequency exponent, 1 to 3 (typically 1.1 to 1.9)
+     * @param beta flux exponent, 1 to 4 (typically 2 to 3)
+     */
+    public static CoreLoss steinmetz(double k, double alpha, double beta) {
+        Require.positive("Steinmetz coefficient k (W/m³ at f in Hz, B in T)", k);
+        Require.between("Steinmetz frequency exponent α", alpha, 1, 3);
+        Require.between("Steinmetz flux exponent β", beta, 1, 4);
+        return new CoreLoss(k, alpha, beta, "");
+    }
+
+    /**
+     * Steinmetz parameters from one datasheet point and the two exponents: the loss density
+     * {@code lossDensity} at frequency {@code f} and peak flux density {@code bPeak}, sinusoidal.
+     * E.g. {@code CoreLoss.fromPoint(q("200 kW/m^3"), kHz(100), mT(100), 1.4, 2.6)}.
+     */
+    public static CoreLoss fromPoint(Quantity lossDensity, Quantity frequency, Quantity bPeak, double alpha, double beta) {
+        double p = Require.positive("loss density", lossDensity, Dimension.POWER_DENSITY);
+        double f = Require.positive("frequency", frequency, Dimension.FREQUENCY);
+        double b = Require.positive("peak flux density", bPeak, Dimension.FLUX_DENSITY);
+        Require.between("Steinmetz frequency exponent α", alpha, 1, 3);
+        Require.between("Steinmetz flux exponent β", beta, 1, 4);
+        return new CoreLoss(p / (Math.pow(f, alpha) * Math.pow(b, beta)), alpha, beta, "");
+    }
+
+    /** The same parameters with a note of where they came from, shown by {@link #toString()}. */
+    public CoreLoss withSource(String note) {
+        return new CoreLoss(k, alpha, beta, note == null ? "" : note);
+    }
+
+    public double k() { return k; }
+
+    public double alpha() { return alpha; }
+
+    public double beta() { return beta; }
+
+    /** The iGSE coefficient k_i (same units as k). */
+    public double ki() { return ki; }
+
+    // ---- Quantity surface ----
+
+    /** Loss density for sinusoidal flux of peak {@code bPeak} at {@code frequency} (Steinmetz). */
+    public Quantity density(Quantity frequency, Quantity bPeak) {
+        double f = Require.positive("frequency", frequency, Dimension.FREQUENCY);
+        double b = Require.nonNegative("peak flux density", bPeak, Dimension.FLUX_DENSITY);
+        return Quantity.of(densitySineAt(f, b), Dimension.POWER_DENSITY);
+    }
+
+    /** Loss in a core volume for sinusoidal flux (Steinmetz). */
+    public Quantity loss(Quantity frequency, Quantity bPeak, Quantity volume) {
+        double v = Require.positive("core volume", volume, Dimension.VOLUME);
+        return Quantity.of(density(frequency, bPeak).si() * v, Dimension.POWER);
+    }
+
+    /**
+     * Loss density for a triangular flux of peak-to-peak swing {@code ripple} rising for a fraction
+     * {@code duty} of each period (the ripple in a choke of a converter at duty D), by the iGSE.
+     */
+    public Quantity triangularDensity(Quantity frequency, Quantity ripple, double duty) {
+        double f = Require.positive("frequency", frequency, Dimension.FREQUENCY);
+        double db = Require.nonNegative("peak-to-peak flux swing", ripple, Dimension.FLUX_DENSITY);
+        return Quantity.of(densityTriangularAt(f, db, duty), Dimension.POWER_DENSITY);
+    }
+
+    /** Loss in a core volume for a triangular flux (iGSE); see {@link #triangularDensity}. */
+    public Quantity triangularLoss(Quantity frequency, Quantity ripple, double duty, Quantity volume) {
+        double v = Require.positive("core volume", volume, Dimension.VOLUME);
+        return Quantity.of(triangularDensity(frequency, ripple, duty).si() * v, Dimension.POWER);
+    }
+
+    // ---- kernels (SI) ----
+
+    /** Kernel: Steinmetz loss density (W/m³) at f (Hz) and peak B (T), sinusoidal. */
+    public double densitySineAt(double f, double bPeak) {
+        return k * Math.pow(f, alpha) * Math.pow(Math.abs(bPeak), beta);
+    }
+
+    /** Kernel: iGSE loss density (W/m³) of a triangle: f (Hz), swing ΔB (T, peak to peak), duty D in (0, 1). */
+    public double densityTriangularAt(double f, double deltaB, double duty) {
+        if (!(duty > 0 && duty < 1)) throw new IllegalArgumentException("duty must be between 0 and 1 (exclusive), got " + duty);
+        return ki * Math.pow(deltaB, beta) * Math.pow(f, alpha) * (Math.pow(duty, 1 - alpha) + Math.pow(1 - duty, 1 - alpha));
+    }
+
+    /**
+     * Kernel: iGSE loss density (W/m³) of a periodic piecewise-linear flux given by its corner points
+     * over one period: times {@code t} (s, increasing, t[n−1] − t[0] is the period) and flux densities
+     * {@code b} (T), with b[n−1] = b[0]. ΔB is max(b) − min(b) (one major loop per period).
+     */
+    public double densityPiecewiseLinearAt(double[] t, double[] b) {
+        int n = t.length;
+        if (n != b.length || n < 3) {
+            throw new IllegalArgumentException("a piecewise-linear flux needs at least 3 corner points with one B per time, got "
+                    + n + " times and " + b.length + " flux densities");
+        }
+        double period = t[n - 1] - t[0];
+        if (!(period > 0)) throw new IllegalArgumentException("the period t[last] − t[0] must be greater than zero, got " + period + " s");
+        if (Math.abs(b[n - 1] - b[0]) > 1e-9 * (Math.abs(b[0]) + 1e-12) + 1e-15) {
+            throw new IllegalArgumentException("the flux must end where it began over one period: b[0] = " + b[0] + " T, b[last] = " + b[n - 1] + " T");
+        }
+        double lo = b[0], hi = b[0];
+        for (double v : b) { lo = Math.min(lo, v); hi = Math.max(hi, v); }
+        double sum = 0;
+        for (int j = 1; j < n; j++) {
+            double dt = t[j] - t[j - 1];
+            if (!(dt >= 0)) throw new IllegalArgumentException("times must not decrease: t[" + j + "] = " + t[j] + " s after " + t[j - 1] + " s");
+            double db = Math.abs(b[j] - b[j - 1]);
+            if (db == 0) continue;
+            if (dt == 0) throw new IllegalArgumentException("a flux step with no time (at t = " + t[j] + " s) has infinite dB/dt");
+            sum += Math.pow(db, alpha) * Math.pow(dt, 1 - alpha);
+        }
+        return ki * Math.pow(hi - lo, beta - alpha) * sum / period;
+    }
+
+    @Override
+    public String toString() {
+        String s = String.format(Locale.ROOT, "Steinmetz k = %.4g W/m³, α = %.3g, β = %.3g (f in Hz, B in T)", k, alpha, beta);
+        return source.isEmpty() ? s : s + ", " + source;
+    }
+}

@@ -1,0 +1,175 @@
+package org.ampturn.material;
+
+import java.util.Locale;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
+
+/**
+ * A nonlinear material from a B-H table (the first-quadrant normal or anhysteretic curve).
+ *
+ * <p>Between the points: monotone piecewise cubic Hermite interpolation of F. N. Fritsch and
+ * R. E. Carlson, "Monotone piecewise cubic interpolation", SIAM J. Numer. Anal. 17(2), 238–246
+ * (1980): secant-mean tangents limited to the circle α² + β² ≤ 9, which keeps B strictly increasing
+ * in H when the data are. The tangent at H = 0 is the first secant; the tangent at the last point is
+ * μ0, and beyond the last point B = B_n + μ0·(H − H_n) (the material is fully saturated: only the
+ * vacuum term grows). B(−H) = −B(H). The inverse H(B) is found in the one interval that brackets B
+ * by a safeguarded Newton iteration (bisection whenever a Newton step leaves the bracket), so it
+ * always converges.
+ */
+final class TableMaterial implements MagneticMaterial {
+    private final String name;
+    private final double[] h;
+    private final double[] b;
+    private final double[] m; // dB/dH at the points
+    private final double bsat;
+
+    TableMaterial(String name, double[] hIn, double[] bIn, double bsat) {
+        int n = hIn.length;
+        if (n != bIn.length) {
+            throw new IllegalArgumentException("the B-H table needs as many B values as H values, got " + n + " H and " + bIn.length + " B");
+        }
+        boolean hasOrigin = n > 0 && hIn[0] == 0;
+        int off = hasOrigin ? 0 : 1;
+        double[] hh = new double[n + off];
+        double[] bb = new double[n + off];
+        for (int i = 0; i < n; i++) {
+            if (!Double.isFinite(hIn[i]) || !Double.isFinite(bIn[i])) {
+                throw new IllegalArgumentException("B-H table point " + i + " must be finite, got H = " + hIn[i] + " A/m, B = " + bIn[i] + " T");
+            }
+            hh[i + off] = hIn[i];
+            bb[i + off] = bIn[i];
+        }
+        if (hasOrigin && bIn[0] != 0) {
+            throw new IllegalArgumentException("B-H table: B at H = 0 must be 0 (an anhysteretic curve through the origin), got " + bIn[0] + " T");
+        }
+        if (hh.length < 2) throw new IllegalArgumentException("the B-H table needs at least one point with H > 0, got " + n + " points");
+        for (int i = 1; i < hh.length; i++) {
+            if (!(hh[i] > hh[i - 1])) {
+                throw new IllegalArgumentException("B-H table: H must increase strictly from 0; H[" + (i - off) + "] = " + hh[i]
+                        + " A/m after " + hh[i - 1] + " A/m");
+            }
+            if (!(bb[i] > bb[i - 1])) {
+                throw new IllegalArgumentException("B-H table: B must increase strictly with H; B[" + (i - off) + "] = " + bb[i]
+                        + " T after " + bb[i - 1] + " T");
+            }
+        }
+        this.name = name;
+        this.h = hh;
+        this.b = bb;
+        this.bsat = bsat;
+        this.m = tangents(hh, bb);
+    }
+
+    private static double[] tangents(double[] x, double[] y) {
+        int n = x.length;
+        double[] d = new double[n - 1];
+        for (int i = 0; i < n - 1; i++) d[i] = (y[i + 1] - y[i]) / (x[i + 1] - x[i]);
+        double[] t = new double[n];
+        t[0] = d[0];
+        for (int i = 1; i < n - 1; i++) t[i] = (d[i - 1] + d[i]) / 2;
+        t[n - 1] = Math.min(MU0, 3 * d[n - 2]);
+        // Fritsch–Carlson limiter, interval by interval
+        for (int i = 0; i < n - 1; i++) {
+            double a = t[i] / d[i], c = t[i + 1] / d[i];
+            double s = a * a + c * c;
+            if (s > 9) {
+                double tau = 3 / Math.sqrt(s);
+                t[i] = tau * a * d[i];
+                t[i + 1] = tau * c * d[i];
+            }
+        }
+        return t;
+    }
+
+    @Override public String name() { return name; }
+
+    @Override public double relativePermeability() { return m[0] / MU0; }
+
+    @Override public Quantity saturationFluxDensity() { return Quantity.of(bsat, Dimension.FLUX_DENSITY); }
+
+    @Override public boolean isLinear() { return false; }
+
+    @Override
+    public double fluxDensityAt(double hIn) {
+        double x = Math.abs(hIn);
+        double r;
+        int n = h.length;
+        if (x >= h[n - 1]) {
+            r = b[n - 1] + MU0 * (x - h[n - 1]);
+        } else {
+            int i = interval(h, x);
+            r = hermite(i, x);
+        }
+        return hIn < 0 ? -r : r;
+    }
+
+    @Override
+    public double incrementalPermeabilityAt(double hIn) {
+        double x = Math.abs(hIn);
+        int n = h.length;
+        if (x >= h[n - 1]) return 1;
+        int i = interval(h, x);
+        return slope(i, x) / MU0;
+    }
+
+    @Override
+    public double fieldAt(double bIn) {
+        double y = Math.abs(bIn);
+        int n = h.length;
+        double r;
+        if (y >= b[n - 1]) {
+            r = h[n - 1] + (y - b[n - 1]) / MU0;
+        } else {
+            int i = interval(b, y);
+            double lo = h[i], hi = h[i + 1];
+            // start from the linear interpolate
+            double x = lo + (y - b[i]) / (b[i + 1] - b[i]) * (hi - lo);
+            for (int it = 0; it < 100; it++) {
+                double f = hermite(i, x) - y;
+                if (f == 0) break;
+                if (f > 0) hi = x; else lo = x;
+                double s = slope(i, x);
+                double nx = s > 0 ? x - f / s : Double.NaN;
+                if (!(nx > lo && nx < hi)) nx = 0.5 * (lo + hi);
+                if (Math.abs(nx - x) <= 1e-15 * Math.max(1, Math.abs(x)) || hi - lo <= 1e-15 * hi) { x = nx; break; }
+                x = nx;
+            }
+            r = x;
+        }
+        return bIn < 0 ? -r : r;
+    }
+
+    /** Index i with a[i] <= v < a[i+1]; v is within [a[0], a[n-1]). */
+    private static int interval(double[] a, double v) {
+        int lo = 0, hi = a.length - 1;
+        while (hi - lo > 1) {
+            int mid = (lo + hi) >>> 1;
+            if (a[mid] <= v) lo = mid; else hi = mid;
+        }
+        return lo;
+    }
+
+    private double hermite(int i, double x) {
+        double dx = h[i + 1] - h[i];
+        double t = (x - h[i]) / dx;
+        double t2 = t * t, t3 = t2 * t;
+        return (2 * t3 - 3 * t2 + 1) * b[i] + (t3 - 2 * t2 + t) * dx * m[i] + (-2 * t3 + 3 * t2) * b[i + 1] + (t3 - t2) * dx * m[i + 1];
+    }
+
+    private double slope(int i, double x) {
+        double dx = h[i + 1] - h[i];
+        double t = (x - h[i]) / dx;
+        double t2 = t * t;
+        return ((6 * t2 - 6 * t) * b[i] + (6 * t2 - 6 * t) * -b[i + 1]) / dx + (3 * t2 - 4 * t + 1) * m[i] + (3 * t2 - 2 * t) * m[i + 1];
+    }
+
+    /** The table points (H in A/m, B in T), the origin included. */
+    double[][] points() { return new double[][] {h.clone(), b.clone()}; }
+
+    @Override
+    public String toString() {
+        return String.format(Locale.ROOT, "%s: B-H table of %d points up to %s at %s, initial μr = %s, saturates at %s", name, h.length,
+                Quantity.of(b[b.length - 1], Dimension.FLUX_DENSITY), Quantity.of(h[h.length - 1], Dimension.FIELD_STRENGTH),
+                Quantity.number(relativePermeability()), saturationFluxDensity());
+    }
+}

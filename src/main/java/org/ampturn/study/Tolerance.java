@@ -1,0 +1,179 @@
+package org.ampturn.study;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.SplittableRandom;
+import java.util.function.Function;
+
+/**
+ * Tolerance analysis of a design: parameters with tolerances ({@link Varied}), a function giving
+ * the outputs, and optional limits on the outputs. {@link #corners()} evaluates the nominal design,
+ * every corner of the tolerance box and each parameter alone at both ends; {@link #monteCarlo(int, long)}
+ * draws random designs from a seed.
+ *
+ * <p>Monte Carlo runs are split into blocks of {@value #BLOCK} runs; block b draws from a
+ * {@link SplittableRandom} seeded from the seed and b, so a seed gives the same runs whatever the
+ * number of threads.
+ */
+public final class Tolerance {
+    static final int BLOCK = 256;
+    private static final int MAX_CORNER_PARAMS = 16;
+
+    private final Function<Point, ?> f;
+    private final List<Varied> varied;
+    private final List<Limit> limits;
+    private final int threads;
+    private final Progress progress;
+
+    private Tolerance(Function<Point, ?> f, List<Varied> varied, List<Limit> limits, int threads, Progress progress) {
+        this.f = f;
+        this.varied = varied;
+        this.limits = limits;
+        this.threads = threads;
+        this.progress = progress;
+    }
+
+    /** A tolerance study of {@code f}, which reads the parameters by name from its {@link Point}. */
+    public static Tolerance of(Function<Point, ?> f) {
+        return new Tolerance(Objects.requireNonNull(f, "function"), List.of(), List.of(), Runner.CORES, null);
+    }
+
+    /** A copy with more toleranced parameters. */
+    public Tolerance vary(Varied... more) {
+        List<Varied> vs = new ArrayList<>(varied);
+        for (Varied v : more) {
+            Objects.requireNonNull(v, "toleranced parameter");
+            for (Varied w : vs) if (w.name.equals(v.name)) throw new IllegalArgumentException("parameter " + v.name + " is given twice");
+            vs.add(v);
+        }
+        return new Tolerance(f, List.copyOf(vs), limits, threads, progress);
+    }
+
+    /** A copy with limits the outputs must meet, as text: {@code limit("I >= 2 A")}. */
+    public Tolerance limit(String... more) {
+        Limit[] ls = new Limit[more.length];
+        for (int i = 0; i < more.length; i++) ls[i] = Limit.parse(more[i]);
+        return limit(ls);
+    }
+
+    /** A copy with limits the outputs must meet. */
+    public Tolerance limit(Limit... more) {
+        List<Limit> ls = new ArrayList<>(limits);
+        for (Limit l : more) ls.add(Objects.requireNonNull(l, "limit"));
+        return new Tolerance(f, varied, List.copyOf(ls), threads, progress);
+    }
+
+    public Tolerance withThreads(int n) {
+        return new Tolerance(f, varied, limits, Runner.checkThreads(n), progress);
+    }
+
+    public Tolerance withProgress(Progress listener) {
+        return new Tolerance(f, varied, limits, threads, Objects.requireNonNull(listener, "progress listener"));
+    }
+
+    public List<Varied> parameters() {
+        return varied;
+    }
+
+    public List<Limit> limits() {
+        return limits;
+    }
+
+    private void requireParameters() {
+        if (varied.isEmpty()) throw new IllegalArgumentException("no parameter has a tolerance: give them with vary(Varied...)");
+    }
+
+    private List<String> names() {
+        List<String> names = new ArrayList<>();
+        for (Varied v : varied) names.add(v.name);
+        return names;
+    }
+
+    private Function<Object[], Object> call() {
+        List<String> names = List.copyOf(names());
+        Map<String, Integer> index = new HashMap<>();
+        for (int i = 0; i < names.size(); i++) index.put(names.get(i), i);
+        return values -> f.apply(new Point(names, index, values));
+    }
+
+    /**
+     * The nominal design (row 0), then every corner of the tolerance box (2^k rows, k ≤ 16), then
+     * each parameter alone at its low and high end with the others nominal (2k rows).
+     */
+    public Corners corners() {
+        requireParameters();
+        return Runner.guarded(this::runCorners);
+    }
+
+    private Corners runCorners() {
+        int k = varied.size();
+        if (k > MAX_CORNER_PARAMS) {
+            throw new IllegalArgumentException(k + " toleranced parameters give 2^" + k + " corners, more than 2^" + MAX_CORNER_PARAMS
+                    + "; use monteCarlo(runs, seed) instead");
+        }
+        int corners = 1 << k;
+        Object[][] params = new Object[1 + corners + 2 * k][];
+        params[0] = nominalRow();
+        for (int c = 0; c < corners; c++) {
+            Object[] row = new Object[k];
+            for (int j = 0; j < k; j++) {
+                Varied v = varied.get(j);
+                boolean high = (c >> (k - 1 - j) & 1) == 1;
+                row[j] = v.valueAt(v.nominal.si() + (high ? v.half : -v.half));
+            }
+            params[1 + c] = row;
+        }
+        for (int j = 0; j < k; j++) {
+            for (int s = 0; s < 2; s++) {
+                Object[] row = nominalRow();
+                Varied v = varied.get(j);
+                row[j] = v.valueAt(v.nominal.si() + (s == 1 ? v.half : -v.half));
+                params[1 + corners + 2 * j + s] = row;
+            }
+        }
+        Table t = Sweep.points("corners of " + k + (k == 1 ? " parameter" : " parameters"), names(), params, call(), threads, progress,
+                Math.max(1, Math.min(64, params.length / 64)), null, "corner analysis");
+        return new Corners(t, varied, limits, corners);
+    }
+
+    private Object[] nominalRow() {
+        Object[] row = new Object[varied.size()];
+        for (int j = 0; j < varied.size(); j++) row[j] = varied.get(j).valueAt(varied.get(j).nominal.si());
+        return row;
+    }
+
+    /** {@code runs} random designs drawn from {@code seed}; the same runs for a seed on any number of threads. */
+    public MonteCarlo monteCarlo(int runs, long seed) {
+        requireParameters();
+        if (runs < 2) throw new IllegalArgumentException("runs (" + runs + ") must be at least 2");
+        return Runner.guarded(() -> runMonteCarlo(runs, seed));
+    }
+
+    private MonteCarlo runMonteCarlo(int runs, long seed) {
+        int k = varied.size();
+        Object[][] params = new Object[runs][];
+        double[][] inputs = new double[k][runs];
+        for (double[] col : inputs) java.util.Arrays.fill(col, Double.NaN);
+        Table t = Sweep.points("Monte Carlo of " + runs + " runs", names(), params, call(), threads, progress, BLOCK, (block, lo, hi) -> {
+            SplittableRandom r = new SplittableRandom(Runner.seedFor(seed, block));
+            for (int i = lo; i < hi; i++) {
+                Object[] row = new Object[k];
+                for (int j = 0; j < k; j++) {
+                    double x = varied.get(j).sample(r);
+                    inputs[j][i] = x;
+                    row[j] = varied.get(j).valueAt(x);
+                }
+                params[i] = row;
+            }
+        }, "Monte Carlo run");
+        return new MonteCarlo(t, varied, limits, seed, inputs);
+    }
+
+    @Override
+    public String toString() {
+        return "tolerance study of " + varied + (limits.isEmpty() ? "" : " with limits " + limits);
+    }
+}

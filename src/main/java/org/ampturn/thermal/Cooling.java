@@ -1,0 +1,57 @@
+package org.ampturn.thermal;
+
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
+
+/**
+ * How a surface sheds heat in still air: the steady temperature rise of the surface over ambient for a
+ * dissipated power and a surface area. Kernels in SI (W, m², K).
+ */
+public interface Cooling {
+    /** Kernel: surface temperature rise (K) for power P (W) over area A (m²). */
+    double riseAt(double watts, double squareMetres);
+
+    /** One line naming the rule and its source. */
+    String describe();
+
+    /** The rise on the Quantity surface. */
+    default Quantity rise(Quantity power, Quantity area) {
+        double p = Require.nonNegative("power", power, Dimension.POWER);
+        double a = Require.positive("surface area", area, Dimension.AREA);
+        return Quantity.of(riseAt(p, a), Dimension.TEMPERATURE);
+    }
+
+    /**
+     * The empirical rule of C. W. T. McLyman, "Transformer and Inductor Design Handbook", 3rd ed.
+     * (Marcel Dekker, 2004), chapter on temperature rise: ΔT = 450 · ψ^0.826 °C with ψ = P/A in W/cm²,
+     * for a component in still air cooled by natural convection and radiation (from memory). Meant for
+     * ψ of about 0.005 to 0.15 W/cm² (rises of about 5 to 100 K); the default of {@link Heating}.
+     */
+    static Cooling handbookRule() {
+        return PowerLawCooling.HANDBOOK;
+    }
+
+    /**
+     * The rule printed in ferrite-core catalogues for cores in still air: ΔT = (P/A)^0.833 °C with P in
+     * mW and A in cm² (from memory). It gives rises about a third lower than {@link #handbookRule()} at
+     * 0.05 W/cm²; use whichever your parts were measured against.
+     */
+    static Cooling ferriteCatalogueRule() {
+        return PowerLawCooling.FERRITE;
+    }
+
+    /**
+     * A constant surface heat-transfer coefficient h (convection plus radiation): ΔT = P/(h·A).
+     * Still air gives about 10 to 15 W/(m²·K) over the range of coil temperatures (common practice);
+     * forced air more.
+     */
+    static Cooling surfaceCoefficient(Quantity h) {
+        double v = Require.positive("heat transfer coefficient", h, Dimension.HEAT_TRANSFER_COEFFICIENT);
+        return new Cooling() {
+            @Override public double riseAt(double watts, double squareMetres) { return watts / (v * squareMetres); }
+            @Override public String describe() { return "surface coefficient h = " + h; }
+            @Override public String toString() { return describe(); }
+        };
+    }
+}

@@ -1,0 +1,30 @@
+package org.ampturn.thermal;
+
+/** ΔT = c · (P/A)^n with P/A in W/m² (the rules of {@link Cooling} converted to SI). */
+final class PowerLawCooling implements Cooling {
+    // 450 ψ^0.826, ψ in W/cm² = 1e-4 · (W/m²)
+    static final PowerLawCooling HANDBOOK = new PowerLawCooling(450 * Math.pow(1e-4, 0.826), 0.826,
+            "handbook rule ΔT = 450·(P/A in W/cm²)^0.826 (McLyman, Transformer and Inductor Design Handbook, 3rd ed.)");
+    // (mW/cm²)^0.833 ; mW/cm² = 0.1 · W/m²
+    static final PowerLawCooling FERRITE = new PowerLawCooling(Math.pow(0.1, 0.833), 0.833,
+            "ferrite-catalogue rule ΔT = (P in mW / A in cm²)^0.833");
+
+    private final double c;
+    private final double n;
+    private final String text;
+
+    private PowerLawCooling(double c, double n, String text) {
+        this.c = c;
+        this.n = n;
+        this.text = text;
+    }
+
+    @Override
+    public double riseAt(double watts, double squareMetres) {
+        return c * Math.pow(watts / squareMetres, n);
+    }
+
+    @Override public String describe() { return text; }
+
+    @Override public String toString() { return text; }
+}

@@ -1,0 +1,95 @@
+package org.ampturn.wire;
+
+import java.util.Objects;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
+
+/**
+ * The enamel (film) insulation of a round magnet wire, as the increase in diameter it adds over the
+ * bare conductor. Immutable.
+ *
+ * <p>The built-in builds give <em>typical nominal</em> increases, not a standard's limits:
+ * <ul>
+ *   <li>{@link #SINGLE}, {@link #HEAVY}, {@link #TRIPLE}: the single, heavy (double) and triple film
+ *       builds of NEMA MW 1000. IEC 60317 grade 1, 2 and 3 are close to them and are given as the
+ *       aliases {@link #GRADE_1}, {@link #GRADE_2}, {@link #GRADE_3} (common practice).</li>
+ *   <li>The increase is interpolated (log-log) in a short table of bare diameter → nominal increase.
+ *       The points at AWG 22, 24 and 26 are nominal overall diameters from a published copper magnet
+ *       wire table quoting NEMA MW 1000 (22: 0.0253/0.0266/0.0276/0.0286 in; 24: 0.0201/0.0213/
+ *       0.0223/0.0232 in; 26: 0.0159/0.0170/0.0179/0.0187 in for bare/single/heavy/triple). The
+ *       points at AWG 40, 30, 18 and 10 are typical values <b>from memory</b>. Beyond the table the
+ *       end increase is kept.</li>
+ * </ul>
+ * For a real wire give its datasheet figure: {@link #ofIncrease(Quantity)} or
+ * {@link Wire#withOverallDiameter(Quantity)}.
+ */
+public final class Insulation {
+    // bare diameter (mm) → nominal increase single / heavy / triple (mm); see the class comment
+    private static final double[] D = {0.0799, 0.2546, 0.4039, 0.5105, 0.6426, 1.0237, 2.5882};
+    private static final double[] SINGLE_INC = {0.0076, 0.0152, 0.0279, 0.0305, 0.0330, 0.0356, 0.0508};
+    private static final double[] HEAVY_INC = {0.0152, 0.0279, 0.0508, 0.0559, 0.0584, 0.0635, 0.0889};
+    private static final double[] TRIPLE_INC = {0.0229, 0.0406, 0.0711, 0.0787, 0.0838, 0.0914, 0.1270};
+
+    /** Bare conductor, no enamel. */
+    public static final Insulation NONE = new Insulation("bare", null, 0);
+    /** Single film build (NEMA MW 1000), typical nominal increase. */
+    public static final Insulation SINGLE = new Insulation("single build", SINGLE_INC, 0);
+    /** Heavy (double) film build (NEMA MW 1000), typical nominal increase. */
+    public static final Insulation HEAVY = new Insulation("heavy build", HEAVY_INC, 0);
+    /** Triple film build (NEMA MW 1000), typical nominal increase. */
+    public static final Insulation TRIPLE = new Insulation("triple build", TRIPLE_INC, 0);
+    /** IEC 60317 grade 1, taken as {@link #SINGLE} (common practice). */
+    public static final Insulation GRADE_1 = new Insulation("grade 1", SINGLE_INC, 0);
+    /** IEC 60317 grade 2, taken as {@link #HEAVY} (common practice). */
+    public static final Insulation GRADE_2 = new Insulation("grade 2", HEAVY_INC, 0);
+    /** IEC 60317 grade 3, taken as {@link #TRIPLE} (common practice). */
+    public static final Insulation GRADE_3 = new Insulation("grade 3", TRIPLE_INC, 0);
+
+    private final String name;
+    private final double[] table;
+    private final double fixed;
+
+    private Insulation(String name, double[] table, double fixed) {
+        this.name = name;
+        this.table = table;
+        this.fixed = fixed;
+    }
+
+    /** An insulation of a fixed increase in diameter (twice the film thickness), from a datasheet. */
+    public static Insulation ofIncrease(Quantity increaseInDiameter) {
+        double inc = Require.nonNegative("increase in diameter", increaseInDiameter, Dimension.LENGTH);
+        return new Insulation("+" + Quantity.of(inc, Dimension.LENGTH) + " film", null, inc);
+    }
+
+    public String name() { return name; }
+
+    /** Increase in diameter for a bare diameter. */
+    public Quantity increase(Quantity bareDiameter) {
+        return Quantity.of(increaseAt(Require.positive("bare diameter", bareDiameter, Dimension.LENGTH)), Dimension.LENGTH);
+    }
+
+    /** Kernel: increase in diameter (m) for a bare diameter (m). */
+    public double increaseAt(double bareMetres) {
+        if (table == null) return fixed;
+        double dmm = bareMetres * 1e3;
+        if (dmm <= D[0]) return table[0] * 1e-3;
+        int n = D.length;
+        if (dmm >= D[n - 1]) return table[n - 1] * 1e-3;
+        int i = 0;
+        while (dmm > D[i + 1]) i++;
+        double u = Math.log(dmm / D[i]) / Math.log(D[i + 1] / D[i]);
+        return Math.exp(Math.log(table[i]) + u * Math.log(table[i + 1] / table[i])) * 1e-3;
+    }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Insulation i && i.name.equals(name) && i.fixed == fixed && i.table == table;
+    }
+
+    @Override
+    public int hashCode() { return Objects.hash(name, fixed); }
+
+    @Override
+    public String toString() { return name; }
+}

@@ -1,0 +1,206 @@
+package org.ampturn.worksheet;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Base64;
+import java.util.List;
+import java.util.Map;
+import org.ampturn.Ampturn;
+
+/**
+ * The report of a worksheet: one self-contained HTML file with inline CSS (screen and A4 print),
+ * the title and header, notes as prose, each entry with its result, the charts embedded (SVG as
+ * text, PNG as a {@code data:} URI; nothing is fetched from a network), the cautions that apply
+ * ({@link Cautions}), the tool and Java versions, and the statement that results defer to local
+ * codes and licensed practice.
+ */
+public final class HtmlReport {
+    private HtmlReport() {}
+
+    /**
+     * Renders the report. {@code steps} are the results of a fresh run (the worksheet's own entries
+     * in order); when null the recorded results are shown. {@code file} locates figures (may be null).
+     */
+    public static String render(Worksheet w, Path file, List<Replay.Step> steps) {
+        List<Block.Entry> fresh = freshEntries(w, file, steps);
+        Path base = file == null || file.toAbsolutePath().getParent() == null ? Path.of(".") : file.toAbsolutePath().getParent();
+        String title = w.title().isEmpty() ? (file == null ? "Worksheet" : file.getFileName().toString()) : w.title();
+
+        List<Cautions.Seen> seen = new ArrayList<>();
+        List<String> errors = new ArrayList<>();
+        int ei = 0;
+        for (int k = 0; k < w.blocks().size(); k++) {
+            if (w.blocks().get(k) instanceof Block.Entry) {
+                Block.Entry e = fresh.get(ei++);
+                seen.add(new Cautions.Seen(w.lineOf(k), e.source(), e.results()));
+                if (e.results().stream().anyMatch(r -> r.startsWith("! "))) errors.add("line " + w.lineOf(k));
+            }
+        }
+        List<Cautions.Caution> cautions = Cautions.scan(seen);
+
+        StringBuilder h = new StringBuilder(16_384);
+        h.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
+                .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
+                .append("<meta name=\"generator\" content=\"ampturn ").append(esc(Ampturn.version())).append("\">\n")
+                .append("<title>").append(esc(title)).append("</title>\n<style>\n").append(CSS).append("</style>\n</head>\n<body>\n");
+        h.append("<header>\n<h1>").append(esc(title)).append("</h1>\n<dl class=\"meta\">\n");
+        for (Map.Entry<String, String> e : w.header().entrySet()) {
+            if (e.getKey().equals("title")) continue;
+            h.append("<dt>").append(esc(e.getKey())).append("</dt><dd>").append(esc(e.getValue())).append("</dd>\n");
+        }
+        if (file != null) h.append("<dt>file</dt><dd>").append(esc(file.getFileName().toString())).append("</dd>\n");
+        h.append("<dt>results</dt><dd>").append(steps == null ? "as recorded in the worksheet" : "computed afresh on " + LocalDate.now())
+                .append("</dd>\n</dl>\n</header>\n");
+
+        h.append("<section class=\"cautions\" id=\"cautions\">\n<h2>Cautions</h2>\n");
+        if (cautions.isEmpty()) {
+            h.append("<p>None of the common-practice caution thresholds (voltage above 60 V, mains-level voltage, "
+                    + "stored energy above 1 J, surfaces above 60 °C) was reached by the values in this worksheet.</p>\n");
+        }
+        for (Cautions.Caution c : cautions) {
+            h.append("<div class=\"caution\"><h3>").append(esc(c.heading())).append("</h3>\n<p>").append(esc(c.text()))
+                    .append("</p>\n<p class=\"where\">Seen at ").append(esc(String.join("; ", c.where()))).append(".</p></div>\n");
+        }
+        h.append("<p class=\"defer\">").append(esc(Cautions.DEFER)).append("</p>\n</section>\n");
+        if (!errors.isEmpty()) {
+            h.append("<p class=\"failed\">Some entries failed when the worksheet was run for this report (")
+                    .append(esc(String.join(", ", errors))).append("); their messages are shown in place.</p>\n");
+        }
+
+        h.append("<main>\n");
+        StringBuilder para = new StringBuilder();
+        ei = 0;
+        for (int k = 0; k < w.blocks().size(); k++) {
+            Block b = w.blocks().get(k);
+            if (b instanceof Block.Note) {
+                String t = ((Block.Note) b).text().strip();
+                if (t.isEmpty()) flush(h, para);
+                else para.append(para.length() == 0 ? "" : " ").append(t);
+                continue;
+            }
+            flush(h, para);
+            if (b instanceof Block.Use) {
+                h.append("<p class=\"use\">Uses the definitions of <code>").append(esc(((Block.Use) b).path())).append("</code>.</p>\n");
+            } else if (b instanceof Block.Entry) {
+                Block.Entry e = fresh.get(ei++);
+                h.append("<section class=\"entry\" id=\"line-").append(w.lineOf(k)).append("\">\n<div class=\"line\">")
+                        .append(w.lineOf(k)).append("</div>\n<pre class=\"src\"><code>").append(esc(e.source())).append("</code></pre>\n");
+                if (!e.results().isEmpty()) {
+                    h.append("<pre class=\"out\">");
+                    for (String r : e.results()) {
+                        String d = Evaluation.toDisplay(r).substring(2);
+                        if (r.startsWith("! ")) h.append("<span class=\"err\">").append(esc(d)).append("</span>\n");
+                        else h.append(esc(d)).append('\n');
+                    }
+                    h.setLength(h.length() - 1);
+                    h.append("</pre>\n");
+                }
+                for (String f : e.figures()) h.append(figure(base, f));
+                h.append("</section>\n");
+            }
+        }
+        flush(h, para);
+        h.append("</main>\n<footer>\n<p>Made with Ampturn ").append(esc(Ampturn.version())).append(" on Java ")
+                .append(esc(System.getProperty("java.version"))).append(" (").append(esc(System.getProperty("java.vendor", "")))
+                .append(").</p>\n<p>").append(esc(Cautions.DEFER)).append("</p>\n</footer>\n</body>\n</html>\n");
+        return h.toString();
+    }
+
+    /** Renders and writes the report atomically. */
+    public static Path write(Worksheet w, Path file, List<Replay.Step> steps, Path out) throws IOException {
+        WorksheetFiles.saveText(render(w, file, steps), out, WorksheetFiles.Writer.PLAIN);
+        return out;
+    }
+
+    /** The worksheet's entries with fresh results in place of the recorded ones, when there are any. */
+    static List<Block.Entry> freshEntries(Worksheet w, Path file, List<Replay.Step> steps) {
+        List<Block.Entry> recorded = w.entries();
+        if (steps == null) return recorded;
+        List<Block.Entry> out = new ArrayList<>();
+        int k = 0;
+        for (Replay.Step s : steps) {
+            if (!s.isIn(file) || s.entry().source().startsWith("#use ")) continue;
+            if (k >= recorded.size()) break;
+            out.add(recorded.get(k++).withRecord(s.result().records(), s.result().figures()));
+        }
+        while (k < recorded.size()) out.add(recorded.get(k++));
+        return out;
+    }
+
+    private static void flush(StringBuilder h, StringBuilder para) {
+        if (para.length() == 0) return;
+        h.append("<p class=\"note\">").append(esc(para.toString())).append("</p>\n");
+        para.setLength(0);
+    }
+
+    private static String figure(Path base, String name) {
+        Path f = base.resolve(name).normalize();
+        String lower = name.toLowerCase(java.util.Locale.ROOT);
+        String cap = "<figcaption>" + esc(name) + "</figcaption>";
+        try {
+            if (lower.endsWith(".svg")) {
+                String svg = Files.readString(f, StandardCharsets.UTF_8)
+                        .replaceAll("(?s)<\\?xml.*?\\?>", "")
+                        .replaceAll("(?s)<!DOCTYPE[^>]*>", "")
+                        .replaceAll("(?is)<script.*?</script>", "")
+                        .strip();
+                return "<figure class=\"chart\">" + svg + cap + "</figure>\n";
+            }
+            if (lower.endsWith(".png") || lower.endsWith(".jpg") || lower.endsWith(".jpeg")) {
+                String type = lower.endsWith(".png") ? "image/png" : "image/jpeg";
+                return "<figure class=\"chart\"><img alt=\"" + esc(name) + "\" src=\"data:" + type + ";base64,"
+                        + Base64.getEncoder().encodeToString(Files.readAllBytes(f)) + "\">" + cap + "</figure>\n";
+            }
+            return "<p class=\"missing\">Figure " + esc(name) + " is not SVG or PNG, so it is not embedded.</p>\n";
+        } catch (IOException e) {
+            return "<p class=\"missing\">Figure " + esc(name) + " was not found next to the worksheet.</p>\n";
+        }
+    }
+
+    static String esc(String s) {
+        StringBuilder b = new StringBuilder(s.length() + 16);
+        for (int i = 0; i < s.length(); i++) {
+            char c = s.charAt(i);
+            switch (c) {
+                case '<': b.append("&lt;"); break;
+                case '>': b.append("&gt;"); break;
+                case '&': b.append("&amp;"); break;
+                case '"': b.append("&quot;"); break;
+                default: b.append(c);
+            }
+        }
+        return b.toString();
+    }
+
+    private static final String CSS = String.join("\n",
+            ":root { --ink: #1d2329; --muted: #5a6672; --rule: #d5dbe1; --code: #f4f6f8; --warn: #8a4b00; --warnbg: #fff6e5; }",
+            "* { box-sizing: border-box; }",
+            "body { font: 15px/1.5 Georgia, 'Times New Roman', serif; color: var(--ink); max-width: 52rem; margin: 2rem auto; padding: 0 1.2rem; }",
+            "h1 { font: 600 1.8rem/1.2 system-ui, sans-serif; margin: 0 0 .4rem; }",
+            "h2 { font: 600 1.15rem system-ui, sans-serif; margin: 1.4rem 0 .5rem; }",
+            "h3 { font: 600 1rem system-ui, sans-serif; margin: 0 0 .3rem; color: var(--warn); }",
+            "header { border-bottom: 2px solid var(--ink); padding-bottom: .6rem; margin-bottom: 1rem; }",
+            "dl.meta { display: grid; grid-template-columns: max-content 1fr; gap: .1rem 1rem; margin: 0; font: .85rem system-ui, sans-serif; color: var(--muted); }",
+            "dl.meta dt { font-weight: 600; } dl.meta dd { margin: 0; }",
+            ".caution { background: var(--warnbg); border-left: 4px solid var(--warn); padding: .5rem .8rem; margin: .5rem 0; break-inside: avoid; }",
+            ".caution p { margin: .2rem 0; } .where { font: .8rem system-ui, sans-serif; color: var(--muted); }",
+            ".defer { font-style: italic; } .failed { color: #a00000; font-weight: 600; }",
+            "p.note { margin: 1rem 0 .4rem; }",
+            ".entry { display: grid; grid-template-columns: 2.6rem 1fr; column-gap: .4rem; margin: .3rem 0; break-inside: avoid; }",
+            ".entry > * { grid-column: 2; } .entry > .line { grid-column: 1; grid-row: 1; text-align: right; font: .75rem/1.9 ui-monospace, monospace; color: var(--muted); }",
+            "pre { margin: 0; white-space: pre-wrap; overflow-wrap: anywhere; font: .85rem/1.45 ui-monospace, 'DejaVu Sans Mono', monospace; }",
+            "pre.src { background: var(--code); border: 1px solid var(--rule); border-radius: 3px; padding: .35rem .6rem; }",
+            "pre.out { padding: .2rem .6rem .3rem 1.2rem; color: #0b4f6c; } .err { color: #a00000; }",
+            "figure.chart { margin: .5rem 0 .8rem; break-inside: avoid; } figure.chart svg, figure.chart img { max-width: 100%; height: auto; display: block; }",
+            "figcaption { font: .75rem system-ui, sans-serif; color: var(--muted); }",
+            ".missing { color: var(--warn); font: .85rem system-ui, sans-serif; } .use { font: .9rem system-ui, sans-serif; color: var(--muted); }",
+            "footer { border-top: 1px solid var(--rule); margin-top: 2rem; padding-top: .5rem; font: .8rem system-ui, sans-serif; color: var(--muted); }",
+            "@page { size: A4; margin: 16mm 15mm 18mm; }",
+            "@media print { body { font-size: 10.5pt; max-width: none; margin: 0; padding: 0; } pre { font-size: 8.5pt; }",
+            "  .caution { -webkit-print-color-adjust: exact; print-color-adjust: exact; } a { color: inherit; } h2 { break-after: avoid; } }",
+            "");
+}

@@ -1,0 +1,75 @@
+package org.ampturn.worksheet;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+
+/**
+ * Runs a worksheet's entries in order through an {@link Evaluator}, first running the entries of
+ * any worksheet it names with {@code #use} (resolved relative to the using file, each at most once,
+ * cycles refused). The result is data: one {@link Step} per entry run, in order.
+ */
+public final class Replay {
+    private Replay() {}
+
+    /** Loads a worksheet named by {@code #use}; throwing refuses it (not found, not trusted, ...). */
+    @FunctionalInterface
+    public interface Loader {
+        Worksheet load(Path file) throws Exception;
+    }
+
+    /** One entry run: the file it came from, its line there, the entry and what it printed now. */
+    public record Step(Path file, int line, Block.Entry entry, Evaluation result) {
+        /** True when the entry belongs to {@code top} itself rather than to a worksheet it uses. */
+        public boolean isIn(Path top) {
+            return file == null ? top == null : top != null && file.toAbsolutePath().normalize().equals(top.toAbsolutePath().normalize());
+        }
+    }
+
+    /** Runs every entry; {@code onStep} sees each step as soon as it is done (for printing or a journal). */
+    public static List<Step> run(Worksheet w, Path file, Evaluator evaluator, Loader loader, Consumer<Step> onStep) {
+        List<Step> steps = new ArrayList<>();
+        run(w, file, evaluator, loader, onStep, steps, new ArrayList<>(), new ArrayList<>());
+        return steps;
+    }
+
+    private static void run(Worksheet w, Path file, Evaluator ev, Loader loader, Consumer<Step> onStep, List<Step> steps,
+                            List<Path> stack, List<Path> done) {
+        Path self = file == null ? null : file.toAbsolutePath().normalize();
+        if (self != null) stack.add(self);
+        for (int k = 0; k < w.blocks().size(); k++) {
+            Block b = w.blocks().get(k);
+            if (b instanceof Block.Entry) {
+                Block.Entry e = (Block.Entry) b;
+                Step s = new Step(file, w.lineOf(k), e, ev.eval(e.source()));
+                steps.add(s);
+                onStep.accept(s);
+            } else if (b instanceof Block.Use) {
+                String name = ((Block.Use) b).path();
+                Path used = (self == null || self.getParent() == null ? Path.of(name) : self.getParent().resolve(name)).normalize();
+                Block.Entry marker = Block.Entry.of("#use " + name);
+                if (stack.contains(used)) {
+                    Step s = new Step(file, w.lineOf(k), marker, Evaluation.error("#use " + name + " would run itself again ("
+                            + String.join(" uses ", stack.stream().map(p -> p.getFileName().toString()).toList()) + " uses " + used.getFileName() + ")"));
+                    steps.add(s);
+                    onStep.accept(s);
+                    continue;
+                }
+                if (done.contains(used)) continue;
+                Worksheet other;
+                try {
+                    other = loader.load(used);
+                } catch (Exception ex) {
+                    Step s = new Step(file, w.lineOf(k), marker, Evaluation.error("#use " + name + ": " + ex.getMessage()));
+                    steps.add(s);
+                    onStep.accept(s);
+                    continue;
+                }
+                done.add(used);
+                run(other, used, ev, loader, onStep, steps, stack, done);
+            }
+        }
+        if (self != null) stack.remove(stack.size() - 1);
+    }
+}

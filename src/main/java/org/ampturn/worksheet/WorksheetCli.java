@@ -1,0 +1,196 @@
+package org.ampturn.worksheet;
+
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.PrintStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.OptionalInt;
+import java.util.function.Supplier;
+
+/**
+ * The command-line verbs of DESIGN.md that work on worksheet files, without a terminal:
+ * <pre>
+ * ampturn run [--trust] FILE.atw|-              run, print each entry and its result; exit 1 on an error
+ * ampturn verify [--trust] FILE.atw...          replay and compare with the records; exit 1 on any mismatch
+ * ampturn export [--trust] FILE.atw --html OUT  run and write the report
+ * </pre>
+ * A file that this machine has not saved or trusted is not run unless {@code --trust} is given
+ * (which trusts it for this run only). Entries read from standard input count as typed by the
+ * user. Exit codes: 0 all well, 1 an entry failed, a result differs or a file was refused,
+ * 2 a usage error or a file that could not be read.
+ */
+public final class WorksheetCli {
+    private final Supplier<Evaluator> evaluators;
+    private final TrustStore trust;
+    private final InputStream in;
+    private final PrintStream out;
+    private final PrintStream err;
+
+    private WorksheetCli(Supplier<Evaluator> evaluators, TrustStore trust, InputStream in, PrintStream out, PrintStream err) {
+        this.evaluators = evaluators;
+        this.trust = trust;
+        this.in = in;
+        this.out = out;
+        this.err = err;
+    }
+
+    public static WorksheetCli of(Supplier<Evaluator> evaluators, TrustStore trust, InputStream in, PrintStream out, PrintStream err) {
+        return new WorksheetCli(evaluators, trust, in, out, err);
+    }
+
+    /** The verbs with the user's trust store and the real JShell session. */
+    public static WorksheetCli forUser(InputStream in, PrintStream out, PrintStream err) {
+        return of(ShellEvaluator::start, TrustStore.user(), in, out, err);
+    }
+
+    /** Runs a verb; empty when the verb is not one of {@code run}, {@code verify}, {@code export}. */
+    public OptionalInt verb(String verb, List<String> args) {
+        switch (verb) {
+            case "run": return OptionalInt.of(run(args));
+            case "verify": return OptionalInt.of(verify(args));
+            case "export": return OptionalInt.of(export(args));
+            default: return OptionalInt.empty();
+        }
+    }
+
+    /** The usage lines of the verbs. */
+    public static final String USAGE = String.join("\n",
+            "usage: ampturn run [--trust] FILE.atw|-",
+            "       ampturn verify [--trust] FILE.atw...",
+            "       ampturn export [--trust] FILE.atw --html OUT.html");
+
+    int run(List<String> args) {
+        List<String> a = new ArrayList<>(args);
+        boolean trusted = a.remove("--trust");
+        if (a.size() != 1 || a.get(0).startsWith("--")) return usage("run takes one worksheet file, or - for standard input");
+        String name = a.get(0);
+        Worksheet w;
+        Path file = null;
+        try (Evaluator ev = evaluators.get()) {
+            if (name.equals("-")) {
+                String text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
+                if (!text.startsWith(WorksheetFormat.MAGIC)) text = WorksheetFormat.MAGIC + Worksheet.FORMAT + "\n\n" + text;
+                w = WorksheetFormat.parse(text, ev.completeness());
+            } else {
+                file = Path.of(name);
+                w = WorksheetFiles.read(file, ev.completeness());
+                if (!trusted && refused(file)) return 1;
+            }
+            boolean[] failed = {false};
+            Path[] current = {file};
+            Replay.run(w, file, ev, loader(ev, trusted), s -> {
+                if (!s.isIn(current[0])) {
+                    current[0] = s.file();
+                    out.println("// from " + (s.file() == null ? "standard input" : s.file()));
+                }
+                out.println(s.entry().source());
+                for (String l : s.result().lines()) out.println(l);
+                out.flush();
+                failed[0] |= s.result().failed();
+            });
+            return failed[0] ? 1 : 0;
+        } catch (IOException | WorksheetFormatException e) {
+            err.println("ampturn: " + e.getMessage());
+            return 2;
+        }
+    }
+
+    int verify(List<String> args) {
+        List<String> a = new ArrayList<>(args);
+        boolean trusted = a.remove("--trust");
+        if (a.isEmpty() || a.stream().anyMatch(s -> s.startsWith("--"))) return usage("verify takes one or more worksheet files");
+        int hold = 0, differ = 0, refused = 0, unreadable = 0;
+        try (Evaluator ev = evaluators.get()) {
+            for (String name : a) {
+                Path f = Path.of(name);
+                Worksheet w;
+                try {
+                    w = WorksheetFiles.read(f, ev.completeness());
+                } catch (IOException | WorksheetFormatException e) {
+                    err.println("ampturn: " + e.getMessage());
+                    unreadable++;
+                    continue;
+                }
+                try {
+                    if (!trusted && refused(f)) {
+                        refused++;
+                        continue;
+                    }
+                } catch (IOException e) {
+                    out.println(f + ": " + e.getMessage());
+                    unreadable++;
+                    continue;
+                }
+                ev.clear();
+                List<Replay.Step> steps = Replay.run(w, f, ev, loader(ev, trusted), s -> {});
+                List<Mismatch> m = Verifier.compare(f, steps);
+                long own = steps.stream().filter(s -> s.isIn(f)).count();
+                if (m.isEmpty()) {
+                    out.println(f + ": " + own + " entries, all results hold");
+                    hold++;
+                } else {
+                    for (Mismatch x : m) out.println(x);
+                    out.println(f + ": " + m.size() + (m.size() == 1 ? " mismatch" : " mismatches") + " in " + own + " entries");
+                    differ++;
+                }
+                out.flush();
+            }
+        }
+        if (a.size() > 1) {
+            out.println("verified " + a.size() + " worksheets: " + hold + " hold, " + differ + " differ"
+                    + (refused > 0 ? ", " + refused + " not trusted" : "") + (unreadable > 0 ? ", " + unreadable + " unreadable" : ""));
+        }
+        if (unreadable > 0 && hold + differ + refused == 0) return 2;
+        return differ + refused + unreadable == 0 ? 0 : 1;
+    }
+
+    int export(List<String> args) {
+        List<String> a = new ArrayList<>(args);
+        boolean trusted = a.remove("--trust");
+        int at = a.indexOf("--html");
+        if (at < 0 || at + 1 >= a.size() || a.size() != 3) return usage("export takes a worksheet and --html OUT.html");
+        Path target = Path.of(a.get(at + 1));
+        a.remove(at + 1);
+        a.remove(at);
+        Path f = Path.of(a.get(0));
+        try (Evaluator ev = evaluators.get()) {
+            Worksheet w = WorksheetFiles.read(f, ev.completeness());
+            if (!trusted && refused(f)) return 1;
+            List<Replay.Step> steps = Replay.run(w, f, ev, loader(ev, trusted), s -> {});
+            HtmlReport.write(w, f, steps, target);
+            long failed = steps.stream().filter(s -> s.result().failed()).count();
+            out.println("wrote " + target + (failed == 0 ? "" : " (" + failed + " entries failed; their messages are in the report)"));
+            return failed == 0 ? 0 : 1;
+        } catch (IOException | WorksheetFormatException e) {
+            err.println("ampturn: " + e.getMessage());
+            return 2;
+        }
+    }
+
+    private boolean refused(Path f) throws IOException {
+        if (trust.isTrusted(f, Files.readAllBytes(f))) return false;
+        out.println(f + ": not run: this machine has not saved or trusted this worksheet (its content hash is not in "
+                + trust.location() + "). A worksheet is code: read it, then give --trust, or #trust it in the console.");
+        return true;
+    }
+
+    private Replay.Loader loader(Evaluator ev, boolean trusted) {
+        return p -> {
+            Worksheet w = WorksheetFiles.read(p, ev.completeness());
+            if (!trusted && !trust.isTrusted(p, Files.readAllBytes(p))) {
+                throw new IOException(p + " is not trusted on this machine, so it was not run; give --trust or #trust it");
+            }
+            return w;
+        };
+    }
+
+    private int usage(String why) {
+        err.println("ampturn: " + why);
+        err.println(USAGE);
+        return 2;
+    }
+}

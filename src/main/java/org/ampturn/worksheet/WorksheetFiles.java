@@ -1,0 +1,108 @@
+package org.ampturn.worksheet;
+
+import java.io.IOException;
+import java.io.OutputStream;
+import java.nio.channels.Channels;
+import java.nio.channels.FileChannel;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+
+/**
+ * Reading worksheet files, and saving them so that a failure never damages the old file: the text
+ * goes to a temporary file in the same directory, is forced to disk, and is then renamed over the
+ * target with an atomic move.
+ */
+public final class WorksheetFiles {
+    private WorksheetFiles() {}
+
+    /** Writes bytes to an open stream; tests inject one that fails part-way. */
+    @FunctionalInterface
+    public interface Writer {
+        void write(OutputStream out, byte[] bytes) throws IOException;
+
+        Writer PLAIN = OutputStream::write;
+    }
+
+    /** Reads a worksheet; errors name the file. */
+    public static Worksheet read(Path file, Completeness completeness) throws IOException, WorksheetFormatException {
+        String text = readText(file);
+        try {
+            return WorksheetFormat.parse(text, completeness);
+        } catch (WorksheetFormatException e) {
+            throw new WorksheetFormatException(file + ": " + e.getMessage(), e.line());
+        }
+    }
+
+    /** The file as UTF-8 text; a file that is not UTF-8 text is refused with a clear message. */
+    public static String readText(Path file) throws IOException {
+        byte[] bytes;
+        try {
+            bytes = Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new NoSuchFileException(file.toString(), null, "no such file");
+        }
+        try {
+            return StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                    .decode(java.nio.ByteBuffer.wrap(bytes)).toString();
+        } catch (CharacterCodingException e) {
+            throw new IOException(file + " is not a worksheet: it is not UTF-8 text");
+        }
+    }
+
+    /** Saves the worksheet atomically; returns the bytes written (for the trust store). */
+    public static byte[] save(Worksheet w, Path target) throws SaveException {
+        return saveText(WorksheetFormat.print(w), target, Writer.PLAIN);
+    }
+
+    /** Writes {@code text} to {@code target} through a temporary file and an atomic rename. */
+    public static byte[] saveText(String text, Path target, Writer writer) throws SaveException {
+        Path abs = target.toAbsolutePath();
+        boolean existed = Files.exists(abs);
+        byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
+        Path tmp = null;
+        try {
+            Path dir = abs.getParent();
+            tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
+            try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
+                OutputStream out = Channels.newOutputStream(ch);
+                writer.write(out, bytes);
+                out.flush();
+                ch.force(true);
+            }
+            try {
+                Files.move(tmp, abs, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
+            } catch (AtomicMoveNotSupportedException e) {
+                throw new IOException("this file system cannot rename atomically", e);
+            }
+            tmp = null;
+            forceDirectory(dir);
+            return bytes;
+        } catch (IOException | RuntimeException e) {
+            throw new SaveException(target, existed, e);
+        } finally {
+            if (tmp != null) {
+                try {
+                    Files.deleteIfExists(tmp);
+                } catch (IOException ignored) {
+                    // the temporary file is harmless; the message already says the save failed
+                }
+            }
+        }
+    }
+
+    /** Makes the rename itself durable where the platform allows opening a directory. */
+    private static void forceDirectory(Path dir) {
+        try (FileChannel ch = FileChannel.open(dir, StandardOpenOption.READ)) {
+            ch.force(true);
+        } catch (IOException | UnsupportedOperationException ignored) {
+            // not possible on every platform; the rename is still atomic
+        }
+    }
+}

@@ -1,0 +1,404 @@
+package org.ampturn.worksheet;
+
+import java.io.Closeable;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.Consumer;
+import java.util.function.Supplier;
+
+/**
+ * The worksheet the console is working on: entries typed or opened, their results, the file it
+ * belongs to, the journal that protects unsaved work, and the trust rules for opening files. The
+ * console feeds entries through {@link #enter}; the {@code #} commands call the other methods
+ * (see {@link WorksheetCommands}). Not thread-safe: one console thread uses it.
+ */
+public final class Workspace implements Closeable {
+    /** Asks the user a yes/no question; the console reads the answer, batch mode says no. */
+    @FunctionalInterface
+    public interface Confirm {
+        boolean ask(String question);
+
+        Confirm NO = q -> false;
+    }
+
+    private final Evaluator evaluator;
+    private final Supplier<Evaluator> fresh;
+    private final TrustStore trust;
+    private final Journal journal;
+    private final Path journalDir;
+    private Worksheet sheet = Worksheet.titled("");
+    private Path file;
+    private boolean dirty;
+    private int replaying;
+    private final List<String> journalTrouble = new ArrayList<>();
+
+    private Workspace(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust, Journal journal, Path journalDir) {
+        this.evaluator = evaluator;
+        this.fresh = fresh;
+        this.trust = trust;
+        this.journal = journal;
+        this.journalDir = journalDir;
+    }
+
+    /**
+     * A workspace on a new worksheet. {@code journalDir} null means no journal (batch use).
+     * {@code fresh} makes new evaluators for {@code #verify FILE}.
+     */
+    public static Workspace of(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust, Path journalDir) throws IOException {
+        Journal j = journalDir == null ? null : Journal.start(journalDir);
+        Workspace w = new Workspace(evaluator, fresh, trust, j, journalDir);
+        w.log(j2 -> j2.opened(null));
+        return w;
+    }
+
+    /** A workspace without a journal (when none can be written). */
+    public static Workspace unjournaled(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust) {
+        return new Workspace(evaluator, fresh, trust, null, null);
+    }
+
+    /** A workspace with the user's trust store and journal directory ({@link AmpturnHome}). */
+    public static Workspace forUser(Evaluator evaluator, Supplier<Evaluator> fresh) throws IOException {
+        return of(evaluator, fresh, TrustStore.user(), AmpturnHome.journals());
+    }
+
+    public Worksheet worksheet() {
+        return sheet;
+    }
+
+    /** The file the worksheet was opened from or saved to, or null. */
+    public Path file() {
+        return file;
+    }
+
+    /** Names the file a new worksheet will be saved to ({@code ampturn new.atw} on a file not yet written). */
+    public void useFile(Path f) {
+        file = f;
+    }
+
+    /** True when there is work that is not in the file. */
+    public boolean isDirty() {
+        return dirty;
+    }
+
+    /** The name for the prompt: the file name without {@code .atw}, or "untitled". */
+    public String name() {
+        if (file == null) return "untitled";
+        String n = file.getFileName().toString();
+        return n.endsWith(".atw") ? n.substring(0, n.length() - 4) : n;
+    }
+
+    /** The number the next entry will get (1 for the first). */
+    public int nextEntryNumber() {
+        return sheet.entries().size() + 1;
+    }
+
+    /** The evaluator's completeness analysis, for gathering typed lines into an entry. */
+    public Completeness completeness() {
+        return evaluator.completeness();
+    }
+
+    public Journal journal() {
+        return journal;
+    }
+
+    /**
+     * Runs a typed entry, adds it with its results to the worksheet and writes it to the journal,
+     * forced to disk, before returning; so once the caller shows the result, a crash loses nothing.
+     * A failed entry is shown but not kept (the session did not keep it either).
+     */
+    public Evaluation enter(String source) {
+        Evaluation e = evaluator.eval(source);
+        return record(source, e, !e.failed());
+    }
+
+    /**
+     * Adds an entry that the console has just run (the console's own loop calls this before it
+     * shows the result): kept entries go into the worksheet and the journal, forced to disk. While
+     * the workspace itself replays (open, replay, verify, recover, use) this does nothing. Returns
+     * the evaluation to show, with a warning line when the journal could not be written.
+     */
+    public Evaluation record(String source, Evaluation e, boolean kept) {
+        if (replaying > 0 || !kept) return e;
+        Block.Entry entry = new Block.Entry(source, e.records(), relativeFigures(e.figures()));
+        sheet = sheet.with(entry);
+        dirty = true;
+        if (!log(j -> j.entry(entry))) {
+            List<String> lines = new ArrayList<>(e.lines());
+            lines.add("  ! " + journalTrouble.get(journalTrouble.size() - 1));
+            return new Evaluation(lines, e.figures(), e.failed());
+        }
+        return e;
+    }
+
+    private List<String> relativeFigures(List<String> figures) {
+        Path base = file == null ? null : file.toAbsolutePath().getParent();
+        List<String> out = new ArrayList<>();
+        for (String f : figures) {
+            Path p = Path.of(f);
+            out.add(base != null && p.isAbsolute() && p.startsWith(base) ? base.relativize(p).toString() : f);
+        }
+        return out;
+    }
+
+    /** The console took the last entry back: it leaves the worksheet too (and the journal says so). */
+    public void undone() {
+        if (sheet.entries().isEmpty()) return;
+        sheet = sheet.withoutLastEntry();
+        dirty = true;
+        log(Journal::undo);
+    }
+
+    /** Adds a prose note. */
+    public void note(String text) {
+        List<Block> b = sheet.blocks();
+        if (!b.isEmpty() && b.get(b.size() - 1) instanceof Block.Entry) sheet = sheet.with(new Block.Blank());
+        for (String line : text.split("\n")) {
+            Block.Note n = new Block.Note(line.strip());
+            sheet = sheet.with(n);
+            log(j -> j.note(n.text()));
+        }
+        dirty = true;
+    }
+
+    /** Takes the last entry out of the worksheet and the session; returns it, or null when there is none. */
+    public Block.Entry undo() {
+        List<Block.Entry> all = sheet.entries();
+        if (all.isEmpty()) return null;
+        Block.Entry last = all.get(all.size() - 1);
+        evaluator.undoLast();
+        undone();
+        return last;
+    }
+
+    /** Messages about journal writes that failed (shown once by the console), then cleared. */
+    public List<String> takeJournalTrouble() {
+        List<String> out = List.copyOf(journalTrouble);
+        journalTrouble.clear();
+        return out;
+    }
+
+    /**
+     * Saves to {@code target} (or the current file when null): atomic, and the saved content is
+     * trusted on this machine. Returns the file written.
+     */
+    public Path save(Path target) throws IOException {
+        Path t = target != null ? target : file;
+        if (t == null) throw new IOException("this worksheet has no file yet: give a name, e.g. #save coil.atw");
+        if (!t.getFileName().toString().contains(".")) t = t.resolveSibling(t.getFileName() + ".atw");
+        Worksheet w = sheet.withHeader("tool", "ampturn " + org.ampturn.Ampturn.version());
+        if (w.title().isEmpty()) {
+            String n = t.getFileName().toString().replaceFirst("\\.atw$", "");
+            w = Worksheet.of(titleFirst(n, w), w.blocks());
+        }
+        byte[] bytes = WorksheetFiles.save(w, t);
+        sheet = w;
+        file = t;
+        dirty = false;
+        trust.trust(t, bytes);
+        Path saved = t;
+        log(j -> j.saved(saved));
+        return t;
+    }
+
+    private static java.util.Map<String, String> titleFirst(String title, Worksheet w) {
+        java.util.Map<String, String> h = new java.util.LinkedHashMap<>();
+        h.put("title", title);
+        h.putAll(w.header());
+        return h;
+    }
+
+    /** What {@link #open} did. */
+    public record Opened(Path file, Worksheet worksheet, boolean ran, List<Replay.Step> steps, List<Mismatch> differences) {}
+
+    /**
+     * Opens a worksheet. When it is trusted (or the user confirms, which trusts it) the session is
+     * cleared and its entries run, each step passed to {@code onStep}; otherwise it is loaded for
+     * reading only and not run. Fails with a clear message for a file that is not a worksheet.
+     */
+    public Opened open(Path f, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
+        Worksheet w = WorksheetFiles.read(f, completeness());
+        byte[] bytes = Files.readAllBytes(f);
+        boolean ok = trust.isTrusted(f, bytes);
+        if (!ok && confirm.ask(f + " was not saved or trusted on this machine. A worksheet is code: run it?")) {
+            trust.trust(f, bytes);
+            ok = true;
+        }
+        if (!ok) return new Opened(f, w, false, List.of(), List.of());
+        sheet = w;
+        file = f;
+        dirty = false;
+        log(j -> j.opened(f));
+        List<Replay.Step> steps = replay(w, f, confirm, onStep);
+        return new Opened(f, w, true, steps, Verifier.compare(f, steps));
+    }
+
+    /** Loads {@code #use}d worksheets, refusing untrusted ones unless the user confirms. */
+    public Replay.Loader loader(Confirm confirm) {
+        return p -> {
+            Worksheet w = WorksheetFiles.read(p, completeness());
+            byte[] bytes = Files.readAllBytes(p);
+            if (!trust.isTrusted(p, bytes)) {
+                if (!confirm.ask(p + " (used by this worksheet) is not trusted on this machine: run it?")) {
+                    throw new IOException(p + " is not trusted on this machine, so it was not run; #trust " + p + " to allow it");
+                }
+                trust.trust(p, bytes);
+            }
+            return w;
+        };
+    }
+
+    /** Clears the session and runs every entry again; the worksheet then records the fresh results. */
+    public List<Replay.Step> replay(Confirm confirm, Consumer<Replay.Step> onStep) {
+        List<Replay.Step> steps = replay(sheet, file, confirm, onStep);
+        List<Block> blocks = new ArrayList<>(sheet.blocks());
+        int k = 0;
+        for (Replay.Step s : steps) {
+            if (!s.isIn(file) || s.entry().source().startsWith("#use ")) continue;
+            while (k < blocks.size() && !(blocks.get(k) instanceof Block.Entry)) k++;
+            if (k >= blocks.size()) break;
+            Block.Entry old = (Block.Entry) blocks.get(k);
+            Block.Entry now = old.withRecord(s.result().records(), s.result().figures());
+            if (!now.equals(old)) dirty = true;
+            blocks.set(k++, now);
+        }
+        sheet = sheet.withBlocks(blocks);
+        return steps;
+    }
+
+    /**
+     * Verifies the current worksheet (file null: clears the session and replays it) or another
+     * file (in a fresh evaluator, after its trust is settled), without changing any record.
+     */
+    public List<Mismatch> verify(Path other, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
+        if (other == null) return Verifier.compare(file, replay(sheet, file, confirm, onStep));
+        Worksheet w = WorksheetFiles.read(other, completeness());
+        byte[] bytes = Files.readAllBytes(other);
+        if (!trust.isTrusted(other, bytes)) {
+            if (!confirm.ask(other + " was not saved or trusted on this machine. A worksheet is code: run it?")) {
+                throw new IOException(other + " is not trusted on this machine, so it was not run; #trust " + other + " to allow it");
+            }
+            trust.trust(other, bytes);
+        }
+        try (Evaluator ev = fresh.get()) {
+            return Verifier.compare(other, Replay.run(w, other, ev, loader(confirm), onStep));
+        }
+    }
+
+    /** Marks a file's current content as safe to run on this machine. */
+    public void trust(Path f) throws IOException {
+        trust.trust(f, Files.readAllBytes(f));
+    }
+
+    public TrustStore trustStore() {
+        return trust;
+    }
+
+    /** The charts recorded in the worksheet, as {@code line: path}. */
+    public List<String> figures() {
+        List<String> out = new ArrayList<>();
+        for (int k = 0; k < sheet.blocks().size(); k++) {
+            if (sheet.blocks().get(k) instanceof Block.Entry) {
+                for (String f : ((Block.Entry) sheet.blocks().get(k)).figures()) out.add("line " + sheet.lineOf(k) + ": " + f);
+            }
+        }
+        return out;
+    }
+
+    /** Unsaved work left by sessions that ended without saving, newest first. */
+    public List<Recovery> recoverable() throws IOException {
+        return journalDir == null ? List.of() : Journal.unfinished(journalDir);
+    }
+
+    /**
+     * Brings back the work of an ended session: its worksheet file as saved, plus the entries and
+     * notes made after that, all run again. Refused while this worksheet has unsaved work.
+     */
+    public List<Replay.Step> recover(Recovery r, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
+        if (dirty) throw new IOException("this worksheet has unsaved work; #save it first, then #recover");
+        Worksheet base = Worksheet.titled("");
+        if (r.worksheet() != null && Files.exists(r.worksheet())) {
+            byte[] bytes = Files.readAllBytes(r.worksheet());
+            if (!trust.isTrusted(r.worksheet(), bytes) && !confirm.ask(r.worksheet() + " changed since that session and is not trusted: run it?")) {
+                throw new IOException(r.worksheet() + " is not trusted on this machine; #trust it, then #recover");
+            }
+            base = WorksheetFiles.read(r.worksheet(), completeness());
+        }
+        Worksheet w = r.applyTo(base);
+        sheet = w;
+        file = r.worksheet();
+        dirty = true;
+        log(j -> j.opened(r.worksheet()));
+        for (int k = 0; k < r.undosPastBase(); k++) log(Journal::undo);
+        for (Block b : r.blocks()) {
+            if (b instanceof Block.Entry) log(j -> j.entry((Block.Entry) b));
+            else if (b instanceof Block.Note) log(j -> j.note(((Block.Note) b).text()));
+            else if (b instanceof Block.Use) log(j -> j.use(((Block.Use) b).path()));
+        }
+        r.discard();
+        return replay(w, file, confirm, onStep);
+    }
+
+    /** Clears the session and runs {@code w}'s entries, without recording them again. */
+    private List<Replay.Step> replay(Worksheet w, Path f, Confirm confirm, Consumer<Replay.Step> onStep) {
+        replaying++;
+        try {
+            evaluator.clear();
+            return Replay.run(w, f, evaluator, loader(confirm), onStep);
+        } finally {
+            replaying--;
+        }
+    }
+
+    /**
+     * {@code #use FILE}: runs another worksheet's entries in this session (after its trust is
+     * settled) and adds a {@code #use} line, relative to this worksheet's file, so a replay runs it too.
+     */
+    public List<Replay.Step> use(Path other, Confirm confirm, Consumer<Replay.Step> onStep) throws Exception {
+        Path base = file == null ? Path.of("").toAbsolutePath() : file.toAbsolutePath().getParent();
+        Path abs = other.isAbsolute() ? other : base.resolve(other);
+        Worksheet w = loader(confirm).load(abs.normalize());
+        String rel;
+        try {
+            rel = base.relativize(abs.normalize()).toString().replace(java.io.File.separatorChar, '/');
+        } catch (IllegalArgumentException e) {
+            rel = abs.toString();
+        }
+        List<Replay.Step> steps;
+        replaying++;
+        try {
+            steps = Replay.run(w, abs.normalize(), evaluator, loader(confirm), onStep);
+        } finally {
+            replaying--;
+        }
+        Block.Use u = new Block.Use(rel);
+        sheet = sheet.with(u);
+        dirty = true;
+        log(j -> j.use(u.path()));
+        return steps;
+    }
+
+    /** Ends the session cleanly: the journal is deleted (call after saving, or when the user chose to drop the work). */
+    @Override
+    public void close() throws IOException {
+        if (journal != null) journal.close();
+    }
+
+    private interface JournalWrite {
+        void write(Journal j) throws IOException;
+    }
+
+    private boolean log(JournalWrite w) {
+        if (journal == null) return true;
+        try {
+            w.write(journal);
+            return true;
+        } catch (IOException e) {
+            journalTrouble.add("the journal " + journal.file() + " could not be written (" + e.getMessage()
+                    + "): save soon, a crash now would lose this entry");
+            return false;
+        }
+    }
+}

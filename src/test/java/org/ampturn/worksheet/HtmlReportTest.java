@@ -1,0 +1,114 @@
+package org.ampturn.worksheet;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.awt.image.BufferedImage;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import javax.imageio.ImageIO;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The report: self-contained, notes as prose, entries with results, charts inline, cautions, deferral. */
+class HtmlReportTest {
+    @TempDir
+    Path dir;
+
+    static final String SVG = "<?xml version=\"1.0\"?>\n<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"400\" height=\"120\" viewBox=\"0 0 400 120\">"
+            + "<script>alert(1)</script><polyline fill=\"none\" stroke=\"#1f6f8b\" stroke-width=\"2\" points=\"0,110 40,70 80,45 120,30 160,20 200,15 240,12 280,11 320,110 360,112\"/>"
+            + "<text x=\"8\" y=\"14\" font-size=\"12\">current (A) against time (ms)</text></svg>\n";
+
+    Path sheet() throws Exception {
+        Files.createDirectories(dir.resolve("gate.figures"));
+        Files.writeString(dir.resolve("gate.figures/01-current.svg"), SVG);
+        BufferedImage img = new BufferedImage(4, 3, BufferedImage.TYPE_INT_RGB);
+        ImageIO.write(img, "png", dir.resolve("gate.figures/02-energy.png").toFile());
+        String text = "// ampturn worksheet 1\n// title: Gate latch <coil> & drive\n// tool: ampturn 0.1.0\n\n"
+                + "// The latch coil runs from 12 V.\n// Its switch opens at 20 ms.\n//\n// A second paragraph.\n"
+                + "var L = mH(180);\n//= L = 180.0 mH\n"
+                + "var I = A(4.2);\n//= I = 4.200 A\n"
+                + "L.times(I.pow(2)).div(2)\n//= 1.588 J\n//= figure: gate.figures/01-current.svg\n"
+                + "V(230)\n//= 230.0 V\n//= figure: gate.figures/02-energy.png\n"
+                + "degC(118)\n//= 118.0 °C\n//= figure: gate.figures/missing.svg\n";
+        Path f = dir.resolve("gate.atw");
+        Files.writeString(f, text);
+        return f;
+    }
+
+    @Test
+    void reportIsSelfContainedAndComplete() throws Exception {
+        Path f = sheet();
+        Worksheet w = WorksheetFiles.read(f, Completeness.BRACKETS);
+        String html = HtmlReport.render(w, f, null);
+        assertTrue(html.startsWith("<!DOCTYPE html>\n<html lang=\"en\">"));
+        assertTrue(html.contains("<title>Gate latch &lt;coil&gt; &amp; drive</title>"), "title escaped");
+        assertTrue(html.contains("<h1>Gate latch &lt;coil&gt; &amp; drive</h1>"));
+        assertTrue(html.contains("<dt>tool</dt><dd>ampturn 0.1.0</dd>"));
+        // notes become paragraphs: consecutive lines join, an empty comment line ends one
+        assertTrue(html.contains("<p class=\"note\">The latch coil runs from 12 V. Its switch opens at 20 ms.</p>\n<p class=\"note\">A second paragraph.</p>"), html);
+        assertTrue(html.contains("<pre class=\"src\"><code>var L = mH(180);</code></pre>\n<pre class=\"out\">L = 180.0 mH</pre>"));
+        assertTrue(html.contains("<pre class=\"out\">= 1.588 J</pre>"));
+        // charts inline: SVG as markup (prologue and scripts removed), PNG as a data URI
+        assertTrue(html.contains("<figure class=\"chart\"><svg xmlns=\"http://www.w3.org/2000/svg\""));
+        assertTrue(html.contains("src=\"data:image/png;base64,iVBORw0KGgo"), "PNG signature in base64");
+        assertTrue(html.contains("Figure gate.figures/missing.svg was not found next to the worksheet."));
+        assertFalse(html.contains("<script"), "no script");
+        assertFalse(html.contains("<?xml"));
+        // nothing fetched from elsewhere
+        Matcher ref = Pattern.compile("(?i)(src|href)\\s*=\\s*\"(?!data:|#)").matcher(html);
+        assertFalse(ref.find(), "no external reference");
+        assertFalse(html.contains("<link") || html.contains("@import") || html.contains("url("));
+        assertTrue(html.contains("@page { size: A4;"));
+        assertTrue(html.contains("on Java " + System.getProperty("java.version")));
+        assertTrue(html.contains("defer to local codes and standards and to licensed professional practice"));
+    }
+
+    @Test
+    void cautionsFollowWhatWasComputed() throws Exception {
+        Path f = sheet();
+        String html = HtmlReport.render(WorksheetFiles.read(f, Completeness.BRACKETS), f, null);
+        assertTrue(html.contains("<h3>Voltage above 60 V</h3>"));
+        assertTrue(html.contains("<h3>Mains-level voltage</h3>"));
+        assertTrue(html.contains("<h3>Stored energy above 1 J</h3>"));
+        assertTrue(html.contains("<h3>Hot surface</h3>"));
+        assertTrue(html.contains("<h3>Above the class A insulation limit</h3>"));
+        assertTrue(html.contains("Seen at line 13: 1.588 J."), html);
+        assertTrue(html.contains("Seen at line 16: 230.0 V."), html);
+    }
+
+    @Test
+    void lowValuesGiveNoCautionButStillTheDeferral() {
+        List<Cautions.Caution> none = Cautions.scan(List.of(new Cautions.Seen(3, "V(12)", List.of("12.00 V", "9.400 mJ", "40.00 °C", "58.00 V"))));
+        assertEquals(List.of(), none);
+        String html = HtmlReport.render(Worksheet.titled("low").with(new Block.Entry("V(12)", List.of("12.00 V"), List.of())), null, null);
+        assertTrue(html.contains("None of the common-practice caution thresholds"));
+        assertTrue(html.contains(Cautions.DEFER));
+    }
+
+    @Test
+    void freshResultsReplaceRecordedOnes() throws Exception {
+        Path f = sheet();
+        Worksheet w = WorksheetFiles.read(f, Completeness.BRACKETS);
+        FakeEvaluator ev = new FakeEvaluator().answer("var L = mH(180);", "  L = 180.0 mH").answer("var I = A(4.2);", "  I = 4.200 A")
+                .answer("L.times(I.pow(2)).div(2)", "  = 1.588 J").answer("V(230)", "  = 12.00 V");
+        String html = HtmlReport.render(w, f, Replay.run(w, f, ev, p -> null, s -> {}));
+        assertTrue(html.contains("<pre class=\"out\">= 12.00 V</pre>"));
+        assertTrue(html.contains("<span class=\"err\">! cannot find symbol in degC(118)</span>"));
+        assertTrue(html.contains("Some entries failed when the worksheet was run for this report (line 19)"), html);
+        assertFalse(html.contains("<h3>Mains-level voltage</h3>"), "cautions follow the fresh values");
+    }
+
+    /** Writes the sample report where a person (or a browser) can look at it: target/report-sample.html. */
+    @Test
+    void writesASampleForTheBrowserCheck() throws Exception {
+        Path f = sheet();
+        Path out = Path.of("target/report-sample.html").toAbsolutePath();
+        HtmlReport.write(WorksheetFiles.read(f, Completeness.BRACKETS), f, null, out);
+        assertTrue(Files.size(out) > 2000);
+    }
+}

@@ -1,0 +1,155 @@
+package org.ampturn.worksheet;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The console's worksheet: entries, notes, undo, save (trusted), open (trust first), replay, verify. */
+class WorkspaceTest {
+    @TempDir
+    Path dir;
+
+    private Workspace workspace(FakeEvaluator ev) throws IOException {
+        return Workspace.of(ev, VerifierTest::truth, TrustStore.of(dir.resolve("home/trusted"), null), dir.resolve("home/journal"));
+    }
+
+    @Test
+    void enteredWorkIsSavedTrustedAndReopened() throws Exception {
+        try (Workspace ws = workspace(VerifierTest.truth())) {
+            assertEquals("untitled 1", ws.name() + " " + ws.nextEntryNumber());
+            ws.note("Energy in the choke.");
+            assertEquals(List.of("  L = 4.700 mH"), ws.enter("var L = mH(4.7);").lines());
+            ws.enter("var I = A(2);");
+            assertTrue(ws.enter("nonsense").failed());
+            ws.enter("L.times(I.pow(2)).div(2)");
+            assertEquals(3, ws.worksheet().entries().size(), "the failed entry is not kept");
+            assertTrue(ws.isDirty());
+            Path f = ws.save(dir.resolve("choke"));
+            assertEquals(dir.resolve("choke.atw"), f);
+            assertFalse(ws.isDirty());
+            assertEquals("choke", ws.name());
+            String text = Files.readString(f);
+            assertTrue(text.startsWith("// ampturn worksheet 1\n// title: choke\n// tool: ampturn 0.1.0\n\n// Energy in the choke.\n"
+                    + "var L = mH(4.7);\n//= L = 4.700 mH\n"), text);
+            assertTrue(text.endsWith("L.times(I.pow(2)).div(2)\n//= 9.4000 mJ\n"), text);
+            assertTrue(ws.trustStore().isTrusted(f, Files.readAllBytes(f)), "saved here, so trusted");
+        }
+        FakeEvaluator ev = VerifierTest.truth();
+        try (Workspace ws = workspace(ev)) {
+            Workspace.Opened o = ws.open(dir.resolve("choke.atw"), Workspace.Confirm.NO, s -> {});
+            assertTrue(o.ran());
+            assertEquals(3, ev.ran.size());
+            assertEquals(List.of(), o.differences());
+            assertEquals(List.of(), ws.verify(null, Workspace.Confirm.NO, s -> {}));
+        }
+    }
+
+    @Test
+    void untrustedFileIsShownButNotRunUntilConfirmed() throws Exception {
+        Path f = dir.resolve("from-a-colleague.atw");
+        Files.writeString(f, VerifierTest.SHEET);
+        FakeEvaluator ev = VerifierTest.truth();
+        try (Workspace ws = workspace(ev)) {
+            Workspace.Opened o = ws.open(f, Workspace.Confirm.NO, s -> {});
+            assertFalse(o.ran());
+            assertEquals(List.of(), ev.ran, "nothing ran");
+            assertEquals(3, o.worksheet().entries().size(), "it is read, for showing");
+            assertEquals(0, ws.worksheet().entries().size(), "but it does not replace the current worksheet");
+            assertNull(ws.file());
+            List<String> asked = new ArrayList<>();
+            o = ws.open(f, q -> asked.add(q), s -> {});
+            assertTrue(o.ran());
+            assertTrue(asked.get(0).contains("was not saved or trusted on this machine"), asked.get(0));
+            assertEquals(3, ev.ran.size());
+            assertTrue(ws.trustStore().isTrusted(f, Files.readAllBytes(f)), "confirming trusts it");
+        }
+    }
+
+    @Test
+    void verifyOfAnotherFileRefusesUntrustedAndUsesAFreshEvaluator() throws Exception {
+        Path f = dir.resolve("other.atw");
+        Files.writeString(f, VerifierTest.SHEET);
+        FakeEvaluator ev = new FakeEvaluator();
+        try (Workspace ws = workspace(ev)) {
+            IOException e = assertThrows(IOException.class, () -> ws.verify(f, Workspace.Confirm.NO, s -> {}));
+            assertTrue(e.getMessage().endsWith("is not trusted on this machine, so it was not run; #trust " + f + " to allow it"));
+            ws.trust(f);
+            assertEquals(List.of(), ws.verify(f, Workspace.Confirm.NO, s -> {}));
+            assertEquals(List.of(), ev.ran, "the workspace's own session was not touched");
+        }
+    }
+
+    @Test
+    void undoAndReplayKeepWorksheetAndSessionInStep() throws Exception {
+        FakeEvaluator ev = VerifierTest.truth();
+        try (Workspace ws = workspace(ev)) {
+            assertNull(ws.undo());
+            ws.enter("var L = mH(4.7);");
+            ws.enter("var I = A(2);");
+            assertEquals("var I = A(2);", ws.undo().source());
+            assertEquals(1, ws.worksheet().entries().size());
+            ev.answer("var L = mH(4.7);", "  L = 4.7000 mH");
+            ev.ran.clear();
+            ws.replay(Workspace.Confirm.NO, s -> {});
+            assertEquals(List.of("var L = mH(4.7);"), ev.ran);
+            assertEquals(List.of("L = 4.7000 mH"), ws.worksheet().entries().get(0).results(), "replay records fresh results");
+        }
+    }
+
+    @Test
+    void useRunsSharedDefinitionsAndRecordsTheLine() throws Exception {
+        Files.createDirectories(dir.resolve("team"));
+        Path shared = dir.resolve("team/defs.atw");
+        Files.writeString(shared, "// ampturn worksheet 1\n\nvar L = mH(4.7);\n//= L = 4.700 mH\n");
+        FakeEvaluator ev = VerifierTest.truth();
+        try (Workspace ws = workspace(ev)) {
+            ws.save(dir.resolve("mine.atw"));
+            Exception e = assertThrows(IOException.class, () -> ws.use(Path.of("team/defs.atw"), Workspace.Confirm.NO, s -> {}));
+            assertTrue(e.getMessage().contains("is not trusted on this machine"), e.getMessage());
+            ws.trust(shared);
+            ws.use(Path.of("team/defs.atw"), Workspace.Confirm.NO, s -> {});
+            ws.enter("var I = A(2);");
+            ws.enter("L.times(I.pow(2)).div(2)");
+            assertEquals(List.of(new Block.Use("team/defs.atw"), new Block.Entry("var I = A(2);", List.of("I = 2.000 A"), List.of()),
+                    new Block.Entry("L.times(I.pow(2)).div(2)", List.of("9.4000 mJ"), List.of())), ws.worksheet().blocks());
+            ws.save(null);
+            assertEquals(List.of(), ws.verify(dir.resolve("mine.atw"), Workspace.Confirm.NO, s -> {}));
+        }
+    }
+
+    @Test
+    void consoleDrivenEntriesAreRecordedExceptDuringReplay() throws Exception {
+        FakeEvaluator ev = VerifierTest.truth();
+        try (Workspace ws = workspace(ev)) {
+            ws.record("var L = mH(4.7);", Evaluation.of("  L = 4.700 mH"), true);
+            ws.record("oops", Evaluation.error("x"), false);
+            assertEquals(1, ws.worksheet().entries().size());
+            ws.replay(Workspace.Confirm.NO, s -> ws.record(s.entry().source(), s.result(), true));
+            assertEquals(1, ws.worksheet().entries().size(), "a replayed entry is not added twice");
+            ws.undone();
+            assertEquals(0, ws.worksheet().entries().size());
+            List<Recovery> none = Journal.unfinished(dir.resolve("home/journal"));
+            assertEquals(List.of(), none, "a live journal is never offered");
+            Recovery r = Recovery.read(ws.journal().file());
+            assertEquals(List.of(), r.blocks(), "the undo reached the journal");
+        }
+    }
+
+    @Test
+    void saveWithoutNameSaysHow() throws Exception {
+        try (Workspace ws = workspace(VerifierTest.truth())) {
+            IOException e = assertThrows(IOException.class, () -> ws.save(null));
+            assertEquals("this worksheet has no file yet: give a name, e.g. #save coil.atw", e.getMessage());
+        }
+    }
+}
