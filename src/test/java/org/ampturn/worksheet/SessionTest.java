@@ -75,6 +75,15 @@ class SessionTest {
     }
 
     @Test
+    void aWrongArgumentListNamesTypesWithoutTheirPackages() {
+        Outcome o = session.eval("mm(1).times(\"two\", 3)");
+        assertTrue(o.failed());
+        String first = o.lines().get(0);
+        assertTrue(first.startsWith("  ! no suitable method found for times(String,int)"), first);
+        assertFalse(first.contains("org.ampturn.") || first.contains("java.lang."), first);
+    }
+
+    @Test
     void aLibraryExceptionShowsItsMessageOnly() {
         Outcome o = session.eval("mm(1).plus(A(1))");
         assertEquals(Kind.ERROR, o.kind());
