@@ -219,6 +219,13 @@ public final class Ampturn {
     /** The figures made so far with their files, one a line. */
     public static String figures() { return org.ampturn.chart.Figures.listing(); }
 
+    // ---- wire ----
+    /** An AWG copper magnet wire, heavy build (ASTM B258): {@code awg(24)}, {@code awg(24.5)}. */
+    public static org.ampturn.wire.Wire awg(double gauge) { return org.ampturn.wire.Wire.awg(gauge); }
+
+    /** An AWG wire from text: {@code awg("4/0")}, {@code awg("00")}. */
+    public static org.ampturn.wire.Wire awg(String gauge) { return org.ampturn.wire.Wire.awg(gauge); }
+
     // ---- coils and magnetic circuits ----------------------------------------------------------
     /** Magnetic-circuit parts in series (same flux, MMFs add): {@code series(core, gap(mm(0.5), mm2(80)))}. */
     public static org.ampturn.coil.MagneticCircuit series(org.ampturn.coil.MagneticCircuit... parts) {

@@ -193,11 +193,24 @@ public final class Session implements AutoCloseable {
     public void stop() {
         if (!running) return;
         stopRequested = true;
-        try {
-            shell.stop();
-        } catch (RuntimeException ignored) {
-            // the engine may have finished between the check and the call
-        }
+        // JShell.stop() only stops code that is executing; a stop that arrives while the entry is
+        // still compiling would be lost. Repeat it until the entry has ended.
+        Thread repeater = new Thread(() -> {
+            while (running && stopRequested) {
+                try {
+                    shell.stop();
+                } catch (RuntimeException ignored) {
+                    // the engine may have finished between the check and the call
+                }
+                try {
+                    Thread.sleep(50);
+                } catch (InterruptedException e) {
+                    return;
+                }
+            }
+        }, "ampturn-stop");
+        repeater.setDaemon(true);
+        repeater.start();
     }
 
     /** True while an entry runs. */
