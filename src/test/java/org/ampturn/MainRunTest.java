@@ -51,7 +51,7 @@ class MainRunTest {
         assertEquals(2, Main.run(List.of("run", dir.resolve("missing.atw").toString()), out, err));
         assertTrue(e.toString(StandardCharsets.UTF_8).contains("no such file"));
         assertEquals(2, Main.run(List.of("verify", "x.atw"), out, err));
-        assertTrue(e.toString(StandardCharsets.UTF_8).contains("verify: not available yet"));
+        assertTrue(e.toString(StandardCharsets.UTF_8).contains("x.atw: no such file"));
         assertEquals(2, Main.run(List.of("--frob"), out, err));
         assertEquals(2, Main.run(List.of("run"), out, err));
     }
@@ -59,9 +59,9 @@ class MainRunTest {
     @Test
     void aChildProcessExitsOneWhenAnEntryFailsAndSurvivesSystemExit() throws Exception {
         Path script = dir.resolve("script.atw");
-        Files.writeString(script, "mm(25).times(2)\nSystem.exit(0);\nmA(250).times(ohm(48))\n");
+        Files.writeString(script, "// ampturn worksheet 1\n\nmm(25).times(2)\nSystem.exit(0);\nmA(250).times(ohm(48))\n");
         String java = Path.of(System.getProperty("java.home"), "bin", "java").toString();
-        Process p = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), "org.ampturn.Main", "run", script.toString())
+        Process p = new ProcessBuilder(java, "-cp", System.getProperty("java.class.path"), "org.ampturn.Main", "run", "--trust", script.toString())
                 .redirectErrorStream(true).start();
         String out = new String(p.getInputStream().readAllBytes(), StandardCharsets.UTF_8);
         assertTrue(p.waitFor(60, TimeUnit.SECONDS));

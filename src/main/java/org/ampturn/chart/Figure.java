@@ -54,7 +54,7 @@ public final class Figure {
         Render.checkSize(width, height);
         Render.formatOf(path);
         Render.write(Build.chart(data), path, width, height);
-        files.add(path);
+        if (!files.contains(path)) files.add(path);
         return this;
     }
 

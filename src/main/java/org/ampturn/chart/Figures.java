@@ -69,6 +69,14 @@ public final class Figures {
         return windows && !GraphicsEnvironment.isHeadless();
     }
 
+    /**
+     * Starts the window system ahead of the first plot (call from a background thread at start-up
+     * to take the first window's start-up cost off the user's first plot); does nothing headless.
+     */
+    public static void prepareWindows() {
+        if (windowsShown()) Windows.prepare();
+    }
+
     /** The figures made so far, oldest first. */
     public static List<Figure> made() { return List.copyOf(MADE); }
 

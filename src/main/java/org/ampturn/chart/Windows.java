@@ -27,7 +27,45 @@ final class Windows {
 
     private record Frame(JFrame frame, ChartPanel panel) {}
 
+    private static volatile boolean prepared;
+
+    /**
+     * Starts the window system from a thread of the top thread group. The event thread takes the
+     * thread group of whoever first touches the window system; when that is a JShell snippet, the
+     * event thread lands in the shell's execution group, and the shell stops the threads of that
+     * group (seen on Java 17: windows then stay blank). So the first touch is made here instead.
+     */
+    static void prepare() {
+        if (prepared) return;
+        synchronized (Windows.class) {
+            if (prepared) return;
+            ThreadGroup top = Thread.currentThread().getThreadGroup();
+            while (top.getParent() != null) top = top.getParent();
+            Throwable[] failed = new Throwable[1];
+            Thread t = new Thread(top, () -> {
+                try {
+                    SwingUtilities.invokeAndWait(() -> { });
+                } catch (Throwable e) {
+                    failed[0] = e;
+                }
+            }, "ampturn-window-start");
+            t.setDaemon(true);
+            t.setContextClassLoader(Windows.class.getClassLoader());
+            t.start();
+            try {
+                t.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                return;
+            }
+            if (failed[0] instanceof java.awt.HeadlessException h) throw h;
+            if (failed[0] != null) throw new IllegalStateException("cannot start the window system: " + failed[0], failed[0]);
+            prepared = true;
+        }
+    }
+
     static void show(Figure f) {
+        prepare();
         JFreeChart chart = Build.chart(f.data()); // built here, so a bad figure fails in the caller's thread
         SwingUtilities.invokeLater(() -> {
             Frame w = OPEN.get(f.name());

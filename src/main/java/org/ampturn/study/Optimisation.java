@@ -125,7 +125,7 @@ public final class Optimisation {
     public Optimum run(Function<Point, ?> f) {
         Objects.requireNonNull(f, "function");
         if (params.isEmpty()) throw new IllegalArgumentException("nothing to optimise: give the parameters with over(Param...)");
-        return new Search(f).run();
+        return Runner.guarded(() -> new Search(f).run());
     }
 
     @Override

@@ -302,6 +302,7 @@ public final class Table {
     }
 
     private void appendLine(StringBuilder sb, String[] cells, int[] width, int n) {
+        int start = sb.length();
         sb.append(' ');
         for (int j = 0; j < cells.length; j++) {
             boolean right = j < n && columns.get(j).numeric();
@@ -312,6 +313,9 @@ public final class Table {
             else sb.append(right ? pad + c : c + pad);
             if (j < cells.length - 1) sb.append(' ');
         }
+        int end = sb.length();
+        while (end > start && sb.charAt(end - 1) == ' ') end--;
+        sb.setLength(end);
         sb.append('\n');
     }
 

@@ -32,6 +32,7 @@ import java.util.stream.Stream;
  * = L = 4.700 mH            ... its recorded results ...
  * f gate.figures/01.svg     ... and figures
  * n a note                  a note
+ * x shared/coils.atw        a #use line
  * u                         undo of the last entry
  * s /home/me/gate.atw       saved: everything so far is in that file
  * .
@@ -87,6 +88,11 @@ public final class Journal implements Closeable {
 
     public void note(String text) throws IOException {
         record("n " + text + "\n");
+    }
+
+    /** A {@code #use} line was added. */
+    public void use(String path) throws IOException {
+        record("x " + path + "\n");
     }
 
     /** The last entry was taken back. */

@@ -52,6 +52,9 @@ public final class Recovery {
                     case 'n':
                         blocks.add(new Block.Note(arg));
                         break;
+                    case 'x':
+                        blocks.add(new Block.Use(arg));
+                        break;
                     case 'u':
                         int last = lastEntry(blocks);
                         if (last >= 0) blocks.subList(last, blocks.size()).clear();
@@ -114,6 +117,11 @@ public final class Recovery {
     /** The unsaved entries. */
     public List<Block.Entry> entries() {
         return blocks.stream().filter(b -> b instanceof Block.Entry).map(b -> (Block.Entry) b).toList();
+    }
+
+    /** How many entries of the base file were taken back before anything new was added. */
+    int undosPastBase() {
+        return undosPastBase;
     }
 
     /** True when there is nothing to recover. */

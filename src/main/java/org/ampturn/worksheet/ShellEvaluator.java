@@ -7,8 +7,8 @@ import java.util.function.Supplier;
 
 /**
  * The real {@link Evaluator}: the console's JShell {@link Session}, with its completeness analysis
- * for splitting worksheet text into entries. Optionally told where charts are written, so each
- * entry records the chart files it made.
+ * for splitting worksheet text into entries. Each entry records the chart files it made (from the
+ * chart layer's registry of figures, or another source given with {@link #withFigures}).
  */
 public final class ShellEvaluator implements Evaluator {
     private final Session session;
@@ -23,12 +23,12 @@ public final class ShellEvaluator implements Evaluator {
 
     /** Starts a new session (about a second on a cold JVM); closing this evaluator ends it. */
     public static ShellEvaluator start() {
-        return new ShellEvaluator(Session.start(), List::of, true);
+        return new ShellEvaluator(Session.start(), ShellEvaluator::chartFiles, true);
     }
 
     /** Wraps a session the console owns; closing this evaluator leaves the session open. */
     public static ShellEvaluator over(Session session) {
-        return new ShellEvaluator(session, List::of, false);
+        return new ShellEvaluator(session, ShellEvaluator::chartFiles, false);
     }
 
     /**
@@ -47,9 +47,21 @@ public final class ShellEvaluator implements Evaluator {
     public Evaluation eval(String source) {
         List<Path> before = figureFiles.get();
         Outcome o = session.eval(source);
+        return evaluation(o, before, figureFiles.get());
+    }
+
+    /** An outcome as an evaluation, with the chart files that appeared between {@code before} and {@code after}. */
+    static Evaluation evaluation(Outcome o, List<Path> before, List<Path> after) {
         List<String> figs = new ArrayList<>();
-        for (Path p : figureFiles.get()) if (!before.contains(p)) figs.add(p.toString());
+        for (Path p : after) if (!before.contains(p)) figs.add(p.toString());
         return new Evaluation(o.lines(), figs, o.failed());
+    }
+
+    /** Every chart file written so far in this JVM (the chart layer's registry). */
+    public static List<Path> chartFiles() {
+        List<Path> out = new ArrayList<>();
+        for (org.ampturn.chart.Figure f : org.ampturn.chart.Figures.made()) out.addAll(f.files());
+        return out;
     }
 
     @Override
@@ -65,6 +77,7 @@ public final class ShellEvaluator implements Evaluator {
     @Override
     public void clear() {
         session.clear();
+        org.ampturn.chart.Figures.clear();
     }
 
     @Override

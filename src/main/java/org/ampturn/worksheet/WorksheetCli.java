@@ -111,7 +111,7 @@ public final class WorksheetCli {
                 try {
                     w = WorksheetFiles.read(f, ev.completeness());
                 } catch (IOException | WorksheetFormatException e) {
-                    out.println(e.getMessage());
+                    err.println("ampturn: " + e.getMessage());
                     unreadable++;
                     continue;
                 }

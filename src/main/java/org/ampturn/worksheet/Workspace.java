@@ -32,6 +32,7 @@ public final class Workspace implements Closeable {
     private Worksheet sheet = Worksheet.titled("");
     private Path file;
     private boolean dirty;
+    private int replaying;
     private final List<String> journalTrouble = new ArrayList<>();
 
     private Workspace(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust, Journal journal, Path journalDir) {
@@ -53,6 +54,11 @@ public final class Workspace implements Closeable {
         return w;
     }
 
+    /** A workspace without a journal (when none can be written). */
+    public static Workspace unjournaled(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust) {
+        return new Workspace(evaluator, fresh, trust, null, null);
+    }
+
     /** A workspace with the user's trust store and journal directory ({@link AmpturnHome}). */
     public static Workspace forUser(Evaluator evaluator, Supplier<Evaluator> fresh) throws IOException {
         return of(evaluator, fresh, TrustStore.user(), AmpturnHome.journals());
@@ -65,6 +71,11 @@ public final class Workspace implements Closeable {
     /** The file the worksheet was opened from or saved to, or null. */
     public Path file() {
         return file;
+    }
+
+    /** Names the file a new worksheet will be saved to ({@code ampturn new.atw} on a file not yet written). */
+    public void useFile(Path f) {
+        file = f;
     }
 
     /** True when there is work that is not in the file. */
@@ -100,20 +111,50 @@ public final class Workspace implements Closeable {
      */
     public Evaluation enter(String source) {
         Evaluation e = evaluator.eval(source);
-        if (e.failed()) return e;
-        Block.Entry entry = new Block.Entry(source, e.records(), e.figures());
+        return record(source, e, !e.failed());
+    }
+
+    /**
+     * Adds an entry that the console has just run (the console's own loop calls this before it
+     * shows the result): kept entries go into the worksheet and the journal, forced to disk. While
+     * the workspace itself replays (open, replay, verify, recover, use) this does nothing. Returns
+     * the evaluation to show, with a warning line when the journal could not be written.
+     */
+    public Evaluation record(String source, Evaluation e, boolean kept) {
+        if (replaying > 0 || !kept) return e;
+        Block.Entry entry = new Block.Entry(source, e.records(), relativeFigures(e.figures()));
         sheet = sheet.with(entry);
         dirty = true;
         if (!log(j -> j.entry(entry))) {
             List<String> lines = new ArrayList<>(e.lines());
             lines.add("  ! " + journalTrouble.get(journalTrouble.size() - 1));
-            return new Evaluation(lines, e.figures(), false);
+            return new Evaluation(lines, e.figures(), e.failed());
         }
         return e;
     }
 
+    private List<String> relativeFigures(List<String> figures) {
+        Path base = file == null ? null : file.toAbsolutePath().getParent();
+        List<String> out = new ArrayList<>();
+        for (String f : figures) {
+            Path p = Path.of(f);
+            out.add(base != null && p.isAbsolute() && p.startsWith(base) ? base.relativize(p).toString() : f);
+        }
+        return out;
+    }
+
+    /** The console took the last entry back: it leaves the worksheet too (and the journal says so). */
+    public void undone() {
+        if (sheet.entries().isEmpty()) return;
+        sheet = sheet.withoutLastEntry();
+        dirty = true;
+        log(Journal::undo);
+    }
+
     /** Adds a prose note. */
     public void note(String text) {
+        List<Block> b = sheet.blocks();
+        if (!b.isEmpty() && b.get(b.size() - 1) instanceof Block.Entry) sheet = sheet.with(new Block.Blank());
         for (String line : text.split("\n")) {
             Block.Note n = new Block.Note(line.strip());
             sheet = sheet.with(n);
@@ -128,9 +169,7 @@ public final class Workspace implements Closeable {
         if (all.isEmpty()) return null;
         Block.Entry last = all.get(all.size() - 1);
         evaluator.undoLast();
-        sheet = sheet.withoutLastEntry();
-        dirty = true;
-        log(Journal::undo);
+        undone();
         return last;
     }
 
@@ -187,13 +226,12 @@ public final class Workspace implements Closeable {
             trust.trust(f, bytes);
             ok = true;
         }
+        if (!ok) return new Opened(f, w, false, List.of(), List.of());
         sheet = w;
         file = f;
         dirty = false;
         log(j -> j.opened(f));
-        if (!ok) return new Opened(f, w, false, List.of(), List.of());
-        evaluator.clear();
-        List<Replay.Step> steps = Replay.run(w, f, evaluator, loader(confirm), onStep);
+        List<Replay.Step> steps = replay(w, f, confirm, onStep);
         return new Opened(f, w, true, steps, Verifier.compare(f, steps));
     }
 
@@ -214,8 +252,7 @@ public final class Workspace implements Closeable {
 
     /** Clears the session and runs every entry again; the worksheet then records the fresh results. */
     public List<Replay.Step> replay(Confirm confirm, Consumer<Replay.Step> onStep) {
-        evaluator.clear();
-        List<Replay.Step> steps = Replay.run(sheet, file, evaluator, loader(confirm), onStep);
+        List<Replay.Step> steps = replay(sheet, file, confirm, onStep);
         List<Block> blocks = new ArrayList<>(sheet.blocks());
         int k = 0;
         for (Replay.Step s : steps) {
@@ -236,10 +273,7 @@ public final class Workspace implements Closeable {
      * file (in a fresh evaluator, after its trust is settled), without changing any record.
      */
     public List<Mismatch> verify(Path other, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
-        if (other == null) {
-            evaluator.clear();
-            return Verifier.compare(file, Replay.run(sheet, file, evaluator, loader(confirm), onStep));
-        }
+        if (other == null) return Verifier.compare(file, replay(sheet, file, confirm, onStep));
         Worksheet w = WorksheetFiles.read(other, completeness());
         byte[] bytes = Files.readAllBytes(other);
         if (!trust.isTrusted(other, bytes)) {
@@ -297,13 +331,53 @@ public final class Workspace implements Closeable {
         file = r.worksheet();
         dirty = true;
         log(j -> j.opened(r.worksheet()));
+        for (int k = 0; k < r.undosPastBase(); k++) log(Journal::undo);
         for (Block b : r.blocks()) {
             if (b instanceof Block.Entry) log(j -> j.entry((Block.Entry) b));
             else if (b instanceof Block.Note) log(j -> j.note(((Block.Note) b).text()));
+            else if (b instanceof Block.Use) log(j -> j.use(((Block.Use) b).path()));
         }
         r.discard();
-        evaluator.clear();
-        return Replay.run(w, file, evaluator, loader(confirm), onStep);
+        return replay(w, file, confirm, onStep);
+    }
+
+    /** Clears the session and runs {@code w}'s entries, without recording them again. */
+    private List<Replay.Step> replay(Worksheet w, Path f, Confirm confirm, Consumer<Replay.Step> onStep) {
+        replaying++;
+        try {
+            evaluator.clear();
+            return Replay.run(w, f, evaluator, loader(confirm), onStep);
+        } finally {
+            replaying--;
+        }
+    }
+
+    /**
+     * {@code #use FILE}: runs another worksheet's entries in this session (after its trust is
+     * settled) and adds a {@code #use} line, relative to this worksheet's file, so a replay runs it too.
+     */
+    public List<Replay.Step> use(Path other, Confirm confirm, Consumer<Replay.Step> onStep) throws Exception {
+        Path base = file == null ? Path.of("").toAbsolutePath() : file.toAbsolutePath().getParent();
+        Path abs = other.isAbsolute() ? other : base.resolve(other);
+        Worksheet w = loader(confirm).load(abs.normalize());
+        String rel;
+        try {
+            rel = base.relativize(abs.normalize()).toString().replace(java.io.File.separatorChar, '/');
+        } catch (IllegalArgumentException e) {
+            rel = abs.toString();
+        }
+        List<Replay.Step> steps;
+        replaying++;
+        try {
+            steps = Replay.run(w, abs.normalize(), evaluator, loader(confirm), onStep);
+        } finally {
+            replaying--;
+        }
+        Block.Use u = new Block.Use(rel);
+        sheet = sheet.with(u);
+        dirty = true;
+        log(j -> j.use(u.path()));
+        return steps;
     }
 
     /** Ends the session cleanly: the journal is deleted (call after saving, or when the user chose to drop the work). */

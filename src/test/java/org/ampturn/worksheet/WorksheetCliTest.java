@@ -94,7 +94,7 @@ class WorksheetCliTest {
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("usage: ampturn run"));
         Path notes = sheet("notes.atw", "shopping list\n", false);
         assertEquals(2, cli("").verb("verify", List.of(notes.toString())).getAsInt());
-        assertTrue(out().startsWith(notes + ": not an Ampturn worksheet"), out());
+        assertTrue(err.toString(StandardCharsets.UTF_8).contains("ampturn: " + notes + ": not an Ampturn worksheet"), err.toString());
         assertTrue(cli("").verb("plot", List.of()).isEmpty());
     }
 }

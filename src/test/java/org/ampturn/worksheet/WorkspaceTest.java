@@ -63,7 +63,9 @@ class WorkspaceTest {
             Workspace.Opened o = ws.open(f, Workspace.Confirm.NO, s -> {});
             assertFalse(o.ran());
             assertEquals(List.of(), ev.ran, "nothing ran");
-            assertEquals(3, ws.worksheet().entries().size(), "but it is loaded to read");
+            assertEquals(3, o.worksheet().entries().size(), "it is read, for showing");
+            assertEquals(0, ws.worksheet().entries().size(), "but it does not replace the current worksheet");
+            assertNull(ws.file());
             List<String> asked = new ArrayList<>();
             o = ws.open(f, q -> asked.add(q), s -> {});
             assertTrue(o.ran());
@@ -101,6 +103,45 @@ class WorkspaceTest {
             ws.replay(Workspace.Confirm.NO, s -> {});
             assertEquals(List.of("var L = mH(4.7);"), ev.ran);
             assertEquals(List.of("L = 4.7000 mH"), ws.worksheet().entries().get(0).results(), "replay records fresh results");
+        }
+    }
+
+    @Test
+    void useRunsSharedDefinitionsAndRecordsTheLine() throws Exception {
+        Files.createDirectories(dir.resolve("team"));
+        Path shared = dir.resolve("team/defs.atw");
+        Files.writeString(shared, "// ampturn worksheet 1\n\nvar L = mH(4.7);\n//= L = 4.700 mH\n");
+        FakeEvaluator ev = VerifierTest.truth();
+        try (Workspace ws = workspace(ev)) {
+            ws.save(dir.resolve("mine.atw"));
+            Exception e = assertThrows(IOException.class, () -> ws.use(Path.of("team/defs.atw"), Workspace.Confirm.NO, s -> {}));
+            assertTrue(e.getMessage().contains("is not trusted on this machine"), e.getMessage());
+            ws.trust(shared);
+            ws.use(Path.of("team/defs.atw"), Workspace.Confirm.NO, s -> {});
+            ws.enter("var I = A(2);");
+            ws.enter("L.times(I.pow(2)).div(2)");
+            assertEquals(List.of(new Block.Use("team/defs.atw"), new Block.Entry("var I = A(2);", List.of("I = 2.000 A"), List.of()),
+                    new Block.Entry("L.times(I.pow(2)).div(2)", List.of("9.4000 mJ"), List.of())), ws.worksheet().blocks());
+            ws.save(null);
+            assertEquals(List.of(), ws.verify(dir.resolve("mine.atw"), Workspace.Confirm.NO, s -> {}));
+        }
+    }
+
+    @Test
+    void consoleDrivenEntriesAreRecordedExceptDuringReplay() throws Exception {
+        FakeEvaluator ev = VerifierTest.truth();
+        try (Workspace ws = workspace(ev)) {
+            ws.record("var L = mH(4.7);", Evaluation.of("  L = 4.700 mH"), true);
+            ws.record("oops", Evaluation.error("x"), false);
+            assertEquals(1, ws.worksheet().entries().size());
+            ws.replay(Workspace.Confirm.NO, s -> ws.record(s.entry().source(), s.result(), true));
+            assertEquals(1, ws.worksheet().entries().size(), "a replayed entry is not added twice");
+            ws.undone();
+            assertEquals(0, ws.worksheet().entries().size());
+            List<Recovery> none = Journal.unfinished(dir.resolve("home/journal"));
+            assertEquals(List.of(), none, "a live journal is never offered");
+            Recovery r = Recovery.read(ws.journal().file());
+            assertEquals(List.of(), r.blocks(), "the undo reached the journal");
         }
     }
 

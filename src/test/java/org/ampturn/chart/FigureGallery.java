@@ -2,10 +2,10 @@ package org.ampturn.chart;
 
 import java.nio.file.Path;
 
-/** Writes sample figures for looking at. Not a test. */
-public final class Smoke {
+/** Writes one figure of each kind to a directory (default target/gallery), for looking at; run by bench/chart gallery. */
+public final class FigureGallery {
     public static void main(String[] args) {
-        Path dir = Path.of(args.length > 0 ? args[0] : "target/smoke");
+        Path dir = Path.of(args.length > 0 ? args[0] : "target/gallery");
         Figures.useDirectory(dir);
         Figures.useFormats("png", "svg");
         long t0 = System.nanoTime();
