@@ -218,4 +218,27 @@ public final class Ampturn {
 
     /** The figures made so far with their files, one a line. */
     public static String figures() { return org.ampturn.chart.Figures.listing(); }
+
+    // ---- wire ----
+    /** An AWG copper magnet wire, heavy build (ASTM B258): {@code awg(24)}, {@code awg(24.5)}. */
+    public static org.ampturn.wire.Wire awg(double gauge) { return org.ampturn.wire.Wire.awg(gauge); }
+
+    /** An AWG wire from text: {@code awg("4/0")}, {@code awg("00")}. */
+    public static org.ampturn.wire.Wire awg(String gauge) { return org.ampturn.wire.Wire.awg(gauge); }
+
+    // ---- coils and magnetic circuits ----------------------------------------------------------
+    /** Magnetic-circuit parts in series (same flux, MMFs add): {@code series(core, gap(mm(0.5), mm2(80)))}. */
+    public static org.ampturn.coil.MagneticCircuit series(org.ampturn.coil.MagneticCircuit... parts) {
+        return org.ampturn.coil.MagneticCircuit.series(parts);
+    }
+
+    /** Magnetic-circuit parts in parallel (same MMF, fluxes add). */
+    public static org.ampturn.coil.MagneticCircuit parallel(org.ampturn.coil.MagneticCircuit... parts) {
+        return org.ampturn.coil.MagneticCircuit.parallel(parts);
+    }
+
+    /** An air gap of {@code length} across pole faces of {@code area}, no fringing. */
+    public static org.ampturn.coil.AirGap gap(Quantity length, Quantity area) {
+        return org.ampturn.coil.AirGap.of(length, area);
+    }
 }

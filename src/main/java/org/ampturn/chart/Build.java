@@ -17,11 +17,10 @@ import org.jfree.chart.JFreeChart;
 import org.jfree.chart.LegendItem;
 import org.jfree.chart.LegendItemCollection;
 import org.jfree.chart.annotations.XYPointerAnnotation;
-import org.jfree.chart.annotations.XYTitleAnnotation;
 import org.jfree.chart.axis.AxisLocation;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.SymbolAxis;
 import org.jfree.chart.axis.ValueAxis;
-import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.CombinedDomainXYPlot;
 import org.jfree.chart.plot.PlotOrientation;
 import org.jfree.chart.plot.ValueMarker;
@@ -66,10 +65,12 @@ final class Build {
         double xMax = 0;
         for (Panel p : d.panels()) for (Trace t : p.traces()) xMax = Math.max(xMax, t.maxAbsX());
         AxisUnit xu = AxisUnit.forRange(d.xDimension(), xMax);
-        NumberAxis xAxis = axis(xu.label(d.xQuantity()));
+        NumberAxis xAxis = d.xLabels().isEmpty() ? axis(xu.label(d.xQuantity()))
+                : style(new SymbolAxis(d.xQuantity(), d.xLabels().toArray(new String[0])));
         xAxis.setAutoRangeIncludesZero(false);
-        xAxis.setLowerMargin(0);
-        xAxis.setUpperMargin(0);
+        xAxis.setAutoRangeMinimumSize(xMax > 0 ? 0.1 * xu.toDisplay(xMax) : 1);
+        xAxis.setLowerMargin(d.xLabels().isEmpty() ? 0 : 0.03);
+        xAxis.setUpperMargin(d.xLabels().isEmpty() ? 0 : 0.03);
         CombinedDomainXYPlot combined = new CombinedDomainXYPlot(xAxis);
         combined.setGap(12);
         combined.setOrientation(PlotOrientation.VERTICAL);
@@ -78,10 +79,14 @@ final class Build {
 
         int colour = 0;
         List<XYPlot> plots = new ArrayList<>();
+        LegendItemCollection legendItems = new LegendItemCollection();
         for (Panel p : d.panels()) {
             AxisUnit yu = AxisUnit.forRange(p.dimension(), p.maxAbsY());
             NumberAxis yAxis = axis(yu.label(p.quantity()));
             yAxis.setAutoRangeIncludesZero(false);
+            // a flat curve gets a readable span (±5 % of its level) instead of a range of rounding error
+            double level = yu.toDisplay(p.maxAbsY());
+            yAxis.setAutoRangeMinimumSize(level > 0 ? 0.1 * level : 1);
             DefaultXYDataset ds = new DefaultXYDataset();
             Set<String> keys = new HashSet<>();
             boolean dense = false;
@@ -100,22 +105,32 @@ final class Build {
             }
             XYPlot plot = new XYPlot(ds, null, yAxis, r);
             area(plot);
-            LegendItemCollection items = new LegendItemCollection();
             for (int i = 0; i < ds.getSeriesCount(); i++) {
                 LegendItem li = new LegendItem(String.valueOf(ds.getSeriesKey(i)), null, null, null,
                         new Line2D.Double(-10, 0, 10, 0), Style.LINE, r.getSeriesPaint(i));
                 li.setLabelFont(Style.LEGEND);
                 li.setLabelPaint(Style.INK);
-                items.add(li);
+                legendItems.add(li);
             }
-            plot.setFixedLegendItems(items);
-            if (p.traces().size() > 1 || d.panels().size() > 1) legendInside(plot, quietCorner(p));
+            plot.setFixedLegendItems(new LegendItemCollection());
             combined.add(plot, 1);
             plots.add(plot);
         }
         placeMarks(d, plots, xu);
         JFreeChart chart = new JFreeChart(null, Style.TITLE, combined, false);
         page(chart, d.title());
+        if (legendItems.getItemCount() > 1) {
+            // one legend for all panels, above them: every curve has its own colour, and nothing is covered
+            LegendTitle legend = new LegendTitle(() -> legendItems);
+            legend.setItemFont(Style.LEGEND);
+            legend.setItemPaint(Style.INK);
+            legend.setBackgroundPaint(Style.PAGE);
+            legend.setPosition(RectangleEdge.TOP);
+            legend.setHorizontalAlignment(org.jfree.chart.ui.HorizontalAlignment.LEFT);
+            legend.setItemLabelPadding(new RectangleInsets(2, 4, 2, 14));
+            legend.setMargin(new RectangleInsets(0, 60, 6, 0));
+            chart.addLegend(legend);
+        }
         return chart;
     }
 
@@ -137,7 +152,7 @@ final class Build {
                 for (int i = 0; i < plots.size(); i++) {
                     if (!everyPanel && i != home) continue;
                     ValueMarker vm = marker(xu.toDisplay(m.x()), Style.MARK, Style.MARK_LINE);
-                    if (i == home) {
+                    if (i == home && !m.label().isEmpty()) {
                         vm.setLabel(text);
                         vm.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
                         vm.setLabelTextAnchor(TextAnchor.TOP_LEFT);
@@ -249,8 +264,9 @@ final class Build {
         ValueMarker m = marker(xu.toDisplay(si), Style.LIMIT, Style.LIMIT_LINE);
         m.setLabel(label + " " + Quantity.of(si, d));
         m.setLabelPaint(Style.LIMIT);
-        m.setLabelAnchor(lower ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT);
-        m.setLabelTextAnchor(lower ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT);
+        // labels face inward, towards the accepted range, so they stay inside the plot
+        m.setLabelAnchor(lower ? RectangleAnchor.TOP_RIGHT : RectangleAnchor.TOP_LEFT);
+        m.setLabelTextAnchor(lower ? TextAnchor.TOP_LEFT : TextAnchor.TOP_RIGHT);
         plot.addDomainMarker(m);
     }
 
@@ -333,7 +349,10 @@ final class Build {
     }
 
     static NumberAxis axis(String label) {
-        NumberAxis a = new NumberAxis(label);
+        return style(new NumberAxis(label));
+    }
+
+    static <A extends NumberAxis> A style(A a) {
         a.setLabelFont(Style.AXIS);
         a.setLabelPaint(Style.INK);
         a.setTickLabelFont(Style.TICKS);
@@ -366,56 +385,6 @@ final class Build {
         plot.setRangeZeroBaselineVisible(true);
         plot.setRangeZeroBaselinePaint(Style.INK_SOFT);
         plot.setRangeZeroBaselineStroke(new BasicStroke(0.8f));
-    }
-
-    /**
-     * The corner of a panel with the fewest curve points in it (a box of 40 % of the width and 30 %
-     * of the height): 0 top right, 1 top left, 2 bottom right, 3 bottom left.
-     */
-    static int quietCorner(Panel p) {
-        double xLo = Double.POSITIVE_INFINITY, xHi = Double.NEGATIVE_INFINITY, yLo = xLo, yHi = xHi;
-        for (Trace t : p.traces()) {
-            double[] x = t.xs(), y = t.ys();
-            for (int i = 0; i < x.length; i++) {
-                if (!Double.isFinite(x[i]) || !Double.isFinite(y[i])) continue;
-                xLo = Math.min(xLo, x[i]); xHi = Math.max(xHi, x[i]);
-                yLo = Math.min(yLo, y[i]); yHi = Math.max(yHi, y[i]);
-            }
-        }
-        if (!(xHi > xLo) || !(yHi > yLo)) return 0;
-        int[] count = new int[4];
-        for (Trace t : p.traces()) {
-            double[] x = t.xs(), y = t.ys();
-            int stride = Math.max(1, x.length / 2000);
-            for (int i = 0; i < x.length; i += stride) {
-                double fx = (x[i] - xLo) / (xHi - xLo), fy = (y[i] - yLo) / (yHi - yLo);
-                if (!(fx >= 0) || !(fy >= 0)) continue;
-                boolean right = fx > 0.6, left = fx < 0.4, top = fy > 0.7, bottom = fy < 0.3;
-                if (top && right) count[0]++;
-                if (top && left) count[1]++;
-                if (bottom && right) count[2]++;
-                if (bottom && left) count[3]++;
-            }
-        }
-        int best = 0;
-        for (int c = 1; c < 4; c++) if (count[c] < count[best]) best = c;
-        return best;
-    }
-
-    private static void legendInside(XYPlot plot, int corner) {
-        LegendTitle legend = new LegendTitle(plot);
-        legend.setItemFont(Style.LEGEND);
-        legend.setItemPaint(Style.INK);
-        legend.setBackgroundPaint(new Color(255, 255, 255, 215));
-        legend.setFrame(new BlockBorder(new RectangleInsets(0.8, 0.8, 0.8, 0.8), Style.GRID));
-        legend.setItemLabelPadding(new RectangleInsets(2, 4, 2, 6));
-        legend.setMargin(new RectangleInsets(2, 2, 2, 2));
-        boolean right = corner == 0 || corner == 2, top = corner < 2;
-        XYTitleAnnotation a = new XYTitleAnnotation(right ? 0.995 : 0.005, top ? 0.98 : 0.02, legend,
-                top ? (right ? RectangleAnchor.TOP_RIGHT : RectangleAnchor.TOP_LEFT)
-                    : (right ? RectangleAnchor.BOTTOM_RIGHT : RectangleAnchor.BOTTOM_LEFT));
-        a.setMaxWidth(0.5);
-        plot.addAnnotation(a);
     }
 
     private static ValueMarker marker(double at, Color c, java.awt.Stroke s) {

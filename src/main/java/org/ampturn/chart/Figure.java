@@ -53,8 +53,9 @@ public final class Figure {
     public Figure save(Path path, int width, int height) {
         Render.checkSize(width, height);
         Render.formatOf(path);
+        Display.settle();
         Render.write(Build.chart(data), path, width, height);
-        files.add(path);
+        if (!files.contains(path)) files.add(path);
         return this;
     }
 

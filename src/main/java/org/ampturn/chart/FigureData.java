@@ -17,10 +17,12 @@ public sealed interface FigureData {
     /**
      * Line panels stacked one above the other, sharing the x axis.
      *
-     * @param marks vertical marks with no trace go through every panel; the others go to the panel
-     *              holding their trace (or quantity), else the first
+     * @param marks   vertical marks with no trace go through every panel; the others go to the panel
+     *                holding their trace (or quantity), else the first
+     * @param xLabels tick labels for x = 0, 1, 2 … when x is a list of named choices (wire sizes);
+     *                empty for a numeric x
      */
-    record Lines(String title, String xQuantity, Dimension xDimension, List<Panel> panels, List<Mark> marks)
+    record Lines(String title, String xQuantity, Dimension xDimension, List<Panel> panels, List<Mark> marks, List<String> xLabels)
             implements FigureData {
         public Lines {
             if (title == null) title = "";
@@ -28,6 +30,12 @@ public sealed interface FigureData {
             if (panels == null || panels.isEmpty()) throw new IllegalArgumentException("a line figure needs at least one panel");
             panels = List.copyOf(panels);
             marks = marks == null ? List.of() : List.copyOf(marks);
+            xLabels = xLabels == null ? List.of() : List.copyOf(xLabels);
+        }
+
+        /** Panels over a numeric x axis. */
+        public Lines(String title, String xQuantity, Dimension xDimension, List<Panel> panels, List<Mark> marks) {
+            this(title, xQuantity, xDimension, panels, marks, List.of());
         }
 
         @Override public String kind() { return "lines"; }
@@ -35,7 +43,7 @@ public sealed interface FigureData {
         public Lines withMarks(List<Mark> more) {
             java.util.ArrayList<Mark> all = new java.util.ArrayList<>(marks);
             all.addAll(more);
-            return new Lines(title, xQuantity, xDimension, panels, all);
+            return new Lines(title, xQuantity, xDimension, panels, all, xLabels);
         }
     }
 

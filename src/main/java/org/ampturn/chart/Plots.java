@@ -32,10 +32,20 @@ public final class Plots {
         return Figures.show(Figure.of(name, data(x)));
     }
 
+    /** What {@link #plot(Object)} would draw for {@code x}, without showing it. */
+    public static FigureData dataOf(Object x) {
+        if (x == null) throw new IllegalArgumentException("nothing to plot (null)");
+        return data(x);
+    }
+
     static FigureData data(Object x) {
         if (x instanceof Figure f) return f.data();
         if (x instanceof FigureData d) return d;
         if (x instanceof MagneticMaterial m) return Adapt.bhData(m, null);
+        if (x instanceof org.ampturn.drive.Transient t) return Typed.of(t);
+        if (x instanceof org.ampturn.drive.Signal s) return Typed.of(s);
+        if (x instanceof org.ampturn.study.Table t) return Typed.of(t);
+        if (x instanceof org.ampturn.study.MonteCarlo mc) return Typed.of(mc);
         if (x instanceof double[] v) {
             double[] i = new double[v.length];
             Arrays.setAll(i, k -> k);
@@ -56,6 +66,10 @@ public final class Plots {
         if (x instanceof Figure f) return f.name();
         if (x instanceof FigureData d) return d.kind();
         if (x instanceof MagneticMaterial) return "B-H";
+        if (x instanceof org.ampturn.drive.Transient) return "transient";
+        if (x instanceof org.ampturn.drive.Signal s) return s.name();
+        if (x instanceof org.ampturn.study.Table t) return t.parameterNames().size() == 2 ? "map" : "sweep";
+        if (x instanceof org.ampturn.study.MonteCarlo) return "histogram";
         if (x instanceof double[]) return "values";
         if (Adapt.isTransient(x)) return "transient";
         if (Adapt.isTable(x)) return "sweep";
@@ -65,12 +79,14 @@ public final class Plots {
     /** Columns {@code y} (all others when none are named) of a table against column {@code x}: a sweep. */
     public static Figure plot(Object table, String x, String... y) {
         if (table == null) throw new IllegalArgumentException("no table to plot (null)");
+        if (table instanceof org.ampturn.study.Table t) return Figures.show(Figure.of("sweep", Typed.lines(t, x, List.of(y))));
         return Figures.show(Figure.of("sweep", Adapt.tableData(table, x, List.of(y))));
     }
 
     /** A heat map of column {@code z} over columns {@code x} and {@code y} of a two-parameter sweep. */
     public static Figure heatmap(Object table, String x, String y, String z) {
         if (table == null) throw new IllegalArgumentException("no table to map (null)");
+        if (table instanceof org.ampturn.study.Table t) return Figures.show(Figure.of("map", Typed.heatMap(t, x, y, z)));
         return Figures.show(Figure.of("map", Adapt.heatMapData(table, x, y, z)));
     }
 
@@ -88,6 +104,7 @@ public final class Plots {
     /** A histogram of one output of a tolerance run (or a table column), with its limits when the result has them. */
     public static Figure histogram(Object result, String output) {
         if (result == null) throw new IllegalArgumentException("no result to draw (null)");
+        if (result instanceof org.ampturn.study.MonteCarlo mc) return Figures.show(Figure.of("histogram", Typed.of(mc, output)));
         return Figures.show(Figure.of("histogram", Adapt.histogramData(result, output)));
     }
 

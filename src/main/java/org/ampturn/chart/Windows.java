@@ -27,7 +27,55 @@ final class Windows {
 
     private record Frame(JFrame frame, ChartPanel panel) {}
 
+    private static volatile boolean prepared;
+
+    /** The display is named but cannot be reached (or refuses windows): figures go to files instead. */
+    static final class Unavailable extends RuntimeException {
+        Unavailable(Throwable cause) {
+            super("no window: " + (cause.getMessage() != null ? cause.getMessage() : cause.toString()), cause);
+        }
+    }
+
+    /**
+     * Starts the window system from a thread of the top thread group. The event thread takes the
+     * thread group of whoever first touches the window system; when that is a JShell snippet, the
+     * event thread lands in the shell's execution group, and the shell stops the threads of that
+     * group (seen on Java 17: windows then stay blank). So the first touch is made here instead.
+     */
+    static void prepare() {
+        if (prepared) return;
+        synchronized (Windows.class) {
+            if (prepared) return;
+            ThreadGroup top = Thread.currentThread().getThreadGroup();
+            while (top.getParent() != null) top = top.getParent();
+            Throwable[] failed = new Throwable[1];
+            Thread t = new Thread(top, () -> {
+                try {
+                    SwingUtilities.invokeAndWait(() -> { });
+                } catch (Throwable e) {
+                    failed[0] = e;
+                }
+            }, "ampturn-window-start");
+            t.setDaemon(true);
+            t.setContextClassLoader(Windows.class.getClassLoader());
+            t.start();
+            try {
+                t.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                return;
+            }
+            if (failed[0] != null) {
+                Throwable c = failed[0] instanceof java.lang.reflect.InvocationTargetException ite && ite.getCause() != null
+                        ? ite.getCause() : failed[0];
+                throw new Unavailable(c);
+            }
+            prepared = true;
+        }
+    }
+
     static void show(Figure f) {
+        prepare();
         JFreeChart chart = Build.chart(f.data()); // built here, so a bad figure fails in the caller's thread
         SwingUtilities.invokeLater(() -> {
             Frame w = OPEN.get(f.name());

@@ -74,22 +74,22 @@ final class Elliptic {
      */
     static double nagaoka(double k, double kc) {
         double k2 = k * k;
+        double c = 0.5 * k2 / (1 + kc); // c1 = (1 - k')/2 without cancellation
         double a = 0.5 * (1 + kc);
         double b = Math.sqrt(kc);
-        double c = 0.5 * k2 / (1 + kc); // c1
-        double tail = c * c;
-        double w = 1;
+        double tail = c * c; // sum over n >= 1 of 2^(n-1) c_n^2
+        double w = 2;
+        // c_{n+1} = (a_n - b_n)/2: its rounding error is far below the terms that matter, and once
+        // c <= 1e-9 a the next term is below 1e-18 of the sum and (a + b)/2 is the limit to 1e-18.
         while (true) {
-            c = c * c / (2 * (a + b));
+            c = 0.5 * (a - b);
+            tail += w * c * c;
+            if (c <= 1e-9 * a) break;
             double an = 0.5 * (a + b);
             b = Math.sqrt(a * b);
             a = an;
             w *= 2;
-            double t = w * c * c;
-            tail += t;
-            if (t <= 1e-17 * tail) break;
         }
-        // a and b now agree to far below rounding; K = pi / (2 a)
         double kk = Math.PI / (a + b);
         double kMinusE = kk * (0.5 * k2 + tail);
         double e = kk - kMinusE;

@@ -159,8 +159,8 @@ public final class Solenoid implements AirCoil {
 
     /** Current-sheet inductance (H) of N turns over length l (m) at mean diameter D (m). */
     public static double inductanceAt(double turns, double length, double diameter) {
-        double h = Math.hypot(diameter, length);
-        double kn = Elliptic.nagaoka(diameter / h, length / h);
+        double inv = 1 / Math.sqrt(diameter * diameter + length * length);
+        double kn = Elliptic.nagaoka(diameter * inv, length * inv);
         return Elliptic.MU0 * turns * turns * Math.PI * diameter * diameter / (4 * length) * kn;
     }
 
@@ -172,8 +172,12 @@ public final class Solenoid implements AirCoil {
 
     /** Wheeler 1982 (H). */
     public static double wheeler1982At(double turns, double length, double diameter) {
-        double a = diameter / 2, r = length / a;
-        return Elliptic.MU0 * turns * turns * a * (Math.log(1 + Math.PI * a / length) + 1 / (2.3 + 1.6 * r + 0.44 * r * r));
+        double a = diameter / 2, l = length;
+        // ln(1 + πa/l) + 1/(2.3 + 1.6 l/a + 0.44 (l/a)²), the second term as a²/(2.3a² + 1.6al + 0.44l²):
+        // two independent divisions, which the processor overlaps
+        double u = a / l;
+        double t2 = a * a / (a * (2.3 * a + 1.6 * l) + 0.44 * l * l);
+        return Elliptic.MU0 * turns * turns * a * (Math.log(1 + Math.PI * u) + t2);
     }
 
     /** Rosa's correction μ0·a·N·(A + B) in H. */

@@ -1,6 +1,7 @@
 package org.ampturn.coil;
 
 import org.ampturn.units.Dimension;
+import org.ampturn.wire.Winding;
 import org.ampturn.units.Quantity;
 import org.ampturn.units.Require;
 
@@ -11,21 +12,40 @@ import org.ampturn.units.Require;
  *
  * <p>Magnetics: λ(i) = N·Φ(N·i) through the {@link MagneticCircuit} (Hopkinson's law, nonlinear when
  * a material is). Stored energy W = ∫i dλ = λ·i − ∫λ di (co-energy form; ½·L·i² when linear).
- * Resistance: copper, R(T) = R20·(1 + α20·(T − 20 °C)) with α20 = 0.00393 /K (IEC 60028:1925,
- * annealed copper, which gives α20 = 1/254.45 K); valid from about −50 to 200 °C for magnet wire.
+ * Resistance: from a {@link Winding} its own R(T) = ρ(T)·ℓ/A (the conductor's IEC 60028 values for
+ * copper); given directly, copper R(T) = R20·(1 + α20·(T − 20 °C)) with α20 = 0.00393 /K (IEC
+ * 60028:1925, annealed copper); valid from about −50 to 200 °C for magnet wire.
  * Copper loss P = i²·R(T).
  */
 public final class WoundCoil implements Coil {
     private final int turns;
     private final double r20;
+    private final Winding winding; // null when turns and resistance were given directly
     private final MagneticCircuit circuit;
     private final double kelvin;
 
-    private WoundCoil(int turns, double r20, MagneticCircuit circuit, double kelvin) {
+    private WoundCoil(int turns, double r20, Winding winding, MagneticCircuit circuit, double kelvin) {
         this.turns = turns;
         this.r20 = r20;
+        this.winding = winding;
         this.circuit = circuit;
         this.kelvin = kelvin;
+    }
+
+    /**
+     * A {@link Winding} (wire, turns, bobbin) on {@code circuit}: the turns link the whole circuit,
+     * and the resistance at a temperature is the winding's own (its conductor's resistivity, IEC 60028
+     * for copper).
+     */
+    public static WoundCoil of(Winding winding, MagneticCircuit circuit) {
+        if (winding == null) throw new IllegalArgumentException("winding is missing (null)");
+        if (circuit == null) throw new IllegalArgumentException("magnetic circuit is missing (null)");
+        return new WoundCoil(winding.turns(), winding.resistanceAt(LumpedCoil.T20), winding, circuit, LumpedCoil.T20);
+    }
+
+    /** The winding, when the coil was made from one. */
+    public java.util.Optional<Winding> winding() {
+        return java.util.Optional.ofNullable(winding);
     }
 
     /** {@code turns} turns of copper of {@code resistance20} (at 20 °C) on {@code circuit}. */
@@ -33,7 +53,7 @@ public final class WoundCoil implements Coil {
         Require.positive("turns", turns);
         double r = Require.positive("resistance at 20 °C", resistance20, Dimension.RESISTANCE);
         if (circuit == null) throw new IllegalArgumentException("magnetic circuit is missing (null)");
-        return new WoundCoil(turns, r, circuit, LumpedCoil.T20);
+        return new WoundCoil(turns, r, null, circuit, LumpedCoil.T20);
     }
 
     public int turns() { return turns; }
@@ -129,6 +149,7 @@ public final class WoundCoil implements Coil {
 
     @Override
     public double resistanceAt(double k) {
+        if (winding != null) return winding.resistanceAt(k);
         return r20 * (1 + LumpedCoil.ALPHA20 * (k - LumpedCoil.T20));
     }
 
@@ -148,7 +169,7 @@ public final class WoundCoil implements Coil {
 
     @Override
     public Coil atTemperature(Quantity temperature) {
-        return new WoundCoil(turns, r20, circuit, kelvin(temperature));
+        return new WoundCoil(turns, r20, winding, circuit, kelvin(temperature));
     }
 
     private static double kelvin(Quantity t) {

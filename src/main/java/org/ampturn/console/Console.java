@@ -2,6 +2,7 @@ package org.ampturn.console;
 
 import java.io.IOException;
 import java.io.PrintWriter;
+import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -54,18 +55,24 @@ public final class Console implements SessionConsole {
      * @param extensions  the plug-ins that add worksheet commands
      */
     public Console(Terminal terminal, CompletableFuture<Session> engine, Path historyFile, List<SessionExtension> extensions, HelpPages help) {
+        this(terminal, engine, historyFile, extensions, help, null);
+    }
+
+    /** As above; {@code localeCharset} is the charset of the user's locale when known (the prompt then avoids what it cannot show). */
+    Console(Terminal terminal, CompletableFuture<Session> engine, Path historyFile, List<SessionExtension> extensions, HelpPages help,
+            String localeCharset) {
         this.terminal = terminal;
         this.engine = engine;
         this.extensions = List.copyOf(extensions);
         this.help = help;
-        this.arrow = terminal.encoding() != null && terminal.encoding().newEncoder().canEncode('\u203A') ? "\u203A" : ">";
+        this.arrow = canShow('\u203A', terminal.encoding(), localeCharset) ? "\u203A" : ">";
         for (SessionCommand c : ConsoleBuiltins.of(this)) commands.register(c);
         for (SessionCommand c : ConsoleCommands.worksheetPlaceholders()) commands.register(c);
         commands.registerAll(this.extensions);
         LineReaderBuilder b = LineReaderBuilder.builder()
                 .terminal(terminal)
                 .appName("ampturn")
-                .parser(new ConsoleParser(text -> session().needsMore(text)))
+                .parser(new ConsoleParser(this::needsMore))
                 .completer(new ConsoleCompleter(this::readySession, commands::words))
                 .highlighter(new ConsoleHighlighter())
                 .variable(LineReader.SECONDARY_PROMPT_PATTERN, "%P ")
@@ -91,7 +98,9 @@ public final class Console implements SessionConsole {
             } catch (IOException e) {
                 System.err.println("ampturn: history is not kept (" + e.getMessage() + ")");
             }
-            Console c = new Console(terminal, engine, hist, SessionExtensions.all(), HelpPages.find());
+            // JLine writes UTF-8 unless told otherwise; the locale says what the terminal shows
+            String locale = System.getProperty("stdout.encoding", System.getProperty("sun.stdout.encoding"));
+            Console c = new Console(terminal, engine, hist, SessionExtensions.all(), HelpPages.find(), locale);
             return c.loop(fileName == null ? null : Path.of(fileName));
         } catch (IOException e) {
             System.err.println("ampturn: no terminal: " + e.getMessage());
@@ -116,6 +125,17 @@ public final class Console implements SessionConsole {
         return f;
     }
 
+    /** True when both the terminal's charset and the locale's (when known) can encode {@code c}. */
+    static boolean canShow(char c, Charset terminal, String localeCharset) {
+        if (terminal != null && !terminal.newEncoder().canEncode(c)) return false;
+        if (localeCharset == null) return true;
+        try {
+            return Charset.forName(localeCharset).newEncoder().canEncode(c);
+        } catch (IllegalArgumentException | UnsupportedOperationException e) {
+            return true;
+        }
+    }
+
     /** The folder for history and per-user files: {@code ~/.ampturn}, or the property {@code ampturn.user}. */
     static Path userDir() {
         String p = System.getProperty("ampturn.user");
@@ -138,8 +158,12 @@ public final class Console implements SessionConsole {
                 continue;
             }
             if (line.isBlank()) continue;
-            if (line.stripLeading().startsWith("#")) command(line.strip());
-            else enter(line, false);
+            try {
+                if (line.stripLeading().startsWith("#")) command(line.strip());
+                else enter(line, false);
+            } catch (RuntimeException e) {
+                error(e.getMessage() != null ? e.getMessage() : e.toString()); // e.g. the engine did not start
+            }
         }
         try {
             reader.getHistory().save();
@@ -157,6 +181,15 @@ public final class Console implements SessionConsole {
             return engine.join();
         } catch (CompletionException e) {
             throw new IllegalStateException("the Java engine did not start: " + e.getCause(), e.getCause());
+        }
+    }
+
+    /** True when the typed text continues on the next line; false when the engine could not start (the entry then shows why). */
+    private boolean needsMore(String text) {
+        try {
+            return session().needsMore(text);
+        } catch (RuntimeException e) {
+            return false;
         }
     }
 

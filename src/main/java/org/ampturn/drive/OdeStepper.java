@@ -3,6 +3,7 @@ package org.ampturn.drive;
 import static org.ampturn.drive.Solver.*;
 
 import java.util.List;
+import java.util.concurrent.CancellationException;
 import org.apache.commons.math3.exception.MaxCountExceededException;
 import org.apache.commons.math3.exception.NumberIsTooSmallException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
@@ -28,6 +29,10 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     private final AdaptiveStepsizeIntegrator integrator;
     private final double minStep;
     private long evaluations;
+    private final Sampler sampler = new Sampler();
+    private final double[] lastStep = new double[Elec.values().length];
+    private long steps;
+    private long calls;
 
     OdeStepper(Solver sv, double rtol) {
         this.sv = sv;
@@ -54,6 +59,12 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         this.integrator = new DormandPrince853Integrator(minStep, sv.tEnd, abs, rel);
     }
 
+    private int mode() { return sv.elec.ordinal(); }
+
+    long evaluations() { return evaluations; }
+
+    long steps() { return steps; }
+
     String describe() {
         return "Dormand-Prince 8(5,3), relative tolerance " + rtol;
     }
@@ -66,6 +77,10 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     @Override
     public void computeDerivatives(double t, double[] y, double[] yDot) {
         sv.t = t;
+        // rejected steps never reach the step handler, so a struggling solve polls here too
+        if ((++calls & 255) == 0 && Thread.currentThread().isInterrupted()) {
+            throw new CancellationException("transient stopped near t = " + Quantity.of(t, Dimension.TIME) + ": the thread was interrupted");
+        }
         sv.derivatives(y, yDot);
     }
 
@@ -80,7 +95,9 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         integrator.clearEventHandlers();
         integrator.clearStepHandlers();
         integrator.setMaxEvaluations((int) Math.max(1000, MAX_EVALUATIONS - evaluations));
-        integrator.addStepHandler(new Sampler());
+        integrator.addStepHandler(sampler);
+        // start from the last accepted step (segments of a switching drive are alike), else let the integrator estimate one
+        integrator.setInitialStepSize(lastStep[mode()] > 0 ? Math.min(lastStep[mode()], t1 - t0) : -1);
         Handler[] hs = new Handler[evs.size()];
         double maxCheck = (t1 - t0) / 8;
         double convergence = Math.max(1e-12 * sv.tEnd, 4 * Math.ulp(t1));
@@ -92,11 +109,13 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         try {
             tStop = integrator.integrate(this, t0, y, t1, y);
         } catch (MaxCountExceededException ex) {
-            throw new SolveException("the solve needed more than " + MAX_EVALUATIONS + " derivative evaluations and stopped near t = "
+            if (!Double.isNaN(sv.nonFiniteLambda)) throw new TransientException(sv.noCurrentMessage(), ex);
+            throw new TransientException("the solve needed more than " + MAX_EVALUATIONS + " derivative evaluations and stopped near t = "
                     + Quantity.of(sv.t, Dimension.TIME) + ": the circuit is stiff (very different time constants, e.g. a small snubber "
                     + "capacitor with a large coil) or the tolerance is too tight; loosen .tolerance(..) or change the snubber", ex);
         } catch (NumberIsTooSmallException ex) {
-            throw new SolveException("the step size fell below " + Quantity.of(minStep, Dimension.TIME) + " near t = "
+            if (!Double.isNaN(sv.nonFiniteLambda)) throw new TransientException(sv.noCurrentMessage(), ex);
+            throw new TransientException("the step size fell below " + Quantity.of(minStep, Dimension.TIME) + " near t = "
                     + Quantity.of(sv.t, Dimension.TIME) + " (current " + Quantity.of(sv.load.currentAt(y[LAM], y[X]), Dimension.CURRENT)
                     + "): the circuit is stiff or the solution diverges", ex);
         } finally {
@@ -119,6 +138,8 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         @Override
         public void handleStep(StepInterpolator in, boolean isLast) {
             double tEnd = in.getCurrentTime();
+            if (!isLast) lastStep[mode()] = tEnd - in.getPreviousTime();
+            steps++;
             for (int k = sv.nextSample(); k < sv.n && sv.sampleTime(k) <= tEnd; k++) {
                 in.setInterpolatedTime(sv.sampleTime(k));
                 sv.record(k, in.getInterpolatedState());

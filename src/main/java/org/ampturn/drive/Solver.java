@@ -30,6 +30,14 @@ final class Solver {
     /** A current beyond this (A) on an accepted step is taken as a diverging solution. */
     static final double DIVERGED_AMPS = 1e7;
 
+    /** Last flux linkage at which the coil model gave a non-finite current (NaN if never). */
+    double nonFiniteLambda = Double.NaN;
+
+    String noCurrentMessage() {
+        return "the coil current is not finite at flux linkage " + q(nonFiniteLambda, Dimension.FLUX) + " near t = " + sec(t)
+                + ": the core model gives no current there, so the solution diverges (check the resistance and the core's saturation)";
+    }
+
     final Circuit circuit;
     final Drive drive;
     final Load load;
@@ -145,8 +153,9 @@ final class Solver {
         double lam = s[LAM], x = s[X], v = s[V];
         double i = e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
         if (!Double.isFinite(i)) {
-            throw new SolveException("the coil current is not finite at flux linkage " + q(lam, Dimension.FLUX) + " near t = " + sec(t)
-                    + ": the core model gave no current there, so the solution diverges (check the resistance and the core's saturation)");
+            // a trial stage beyond the core model's range: a huge current makes the integrator reject the step
+            nonFiniteLambda = lam;
+            i = Math.copySign(1e150, lam);
         }
         double vsw, dl, psup = 0, pdrv = 0, pcl = 0, dvc = 0;
         switch (e) {
@@ -241,7 +250,12 @@ final class Solver {
         switch (ev.kind) {
             case CURRENT: return load.currentAt(s[LAM], s[X]) - ev.level;
             case POSITION: return s[X] - ev.level;
-            default: return load.forceAt(s[LAM], s[X]) - load.restoringForceAt(s[X], 0);
+            default:
+                // the magnetic force grows as λ², so F − Fr can dip below zero and back within one step as λ
+                // swings through zero; ±√F − √Fr changes sign once, where F − Fr does
+                double f = load.forceAt(s[LAM], s[X]), fr = load.restoringForceAt(s[X], 0);
+                if (fr < 0 || f < 0) return f - fr;
+                return Math.copySign(Math.sqrt(f), s[LAM]) - Math.sqrt(fr);
         }
     }
 
@@ -273,8 +287,9 @@ final class Solver {
 
     private void observe(double tt, double[] s, double[] o, double stored) {
         double vsw = o[O_VSW], i = o[O_I];
-        if (Math.abs(i) > DIVERGED_AMPS) {
-            throw new SolveException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
+        if (!(Math.abs(i) <= DIVERGED_AMPS)) {
+            if (Math.abs(i) >= 1e150) throw new TransientException(noCurrentMessage());
+            throw new TransientException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
                     + q(s[LAM], Dimension.FLUX) + "): the solution diverges (check the resistance and the core's saturation)");
         }
         if (vsw > peakSw) { peakSw = vsw; peakSwT = tt; }
@@ -340,6 +355,11 @@ final class Solver {
         if (!finalOff && !Double.isNaN(offAt) && Math.abs(t - offAt) <= 1e-12 * Math.max(tEnd, 1e-300)) {
             finalOff = true;
             offCurrent = currentNow();
+            double w = storedAt(y);
+            if (w > peakStored) {
+                peakStored = w;
+                peakStoredT = t;
+            }
             if (cycleOpen) cycleOpen = false;
             setSwitch(false);
             markers.add(new Marker("switch off", tq(t), Quantity.of(offCurrent, Dimension.CURRENT), "current"));
@@ -488,7 +508,10 @@ final class Solver {
                     pullIn = t;
                     markers.add(new Marker("pull-in", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
                 }
-                if (netForce() < 0) mech = Mech.FREE;
+                if (netForce() < 0) {
+                    mech = Mech.FREE;
+                    markers.add(new Marker("release", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
+                }
                 break;
             case RELEASE_OPEN:
                 mech = Mech.FREE;
@@ -499,6 +522,7 @@ final class Solver {
                 break;
             case RELEASE_CLOSED:
                 mech = Mech.FREE;
+                markers.add(new Marker("release", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
                 break;
             default:
                 throw new IllegalStateException(ev.act.toString());
@@ -541,7 +565,7 @@ final class Solver {
             observe(t, y);
             if (t == lastT) {
                 if (++stuck > 200) {
-                    throw new SolveException("the switching chatters at t = " + sec(t) + " (current " + amp(currentNow())
+                    throw new TransientException("the switching chatters at t = " + sec(t) + " (current " + amp(currentNow())
                             + "): events repeat without time advancing; widen the hysteresis band or lower the PWM frequency");
                 }
             } else {
@@ -550,6 +574,10 @@ final class Solver {
             }
         }
         while (nextSample < n) record(nextSample, y);
+        if (stepper instanceof OdeStepper) {
+            OdeStepper o = (OdeStepper) stepper;
+            notes.add(o.steps() + " accepted steps, " + o.evaluations() + " derivative evaluations");
+        }
         return Transient.of(this);
     }
 

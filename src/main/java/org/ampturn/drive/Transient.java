@@ -48,7 +48,7 @@ public final class Transient {
         pCoil = add(all, "coil resistance power", Dimension.POWER, t, r.pCoil);
         pDrive = add(all, "drive loss power", Dimension.POWER, t, r.pDrive);
         pClamp = add(all, "clamp power", Dimension.POWER, t, r.pClamp);
-        pMech = sv.moves ? add(all, "mechanical power", Dimension.POWER, t, r.pMech) : Signal.wrap("mechanical power", Dimension.POWER, t, r.pMech);
+        pMech = sv.moves ? add(all, "mechanical power", Dimension.POWER, t, r.pMech) : Signal.wrap("mechanical power", Dimension.POWER, t, new double[t.length]);
         eSup = add(all, "supplied energy", Dimension.ENERGY, t, r.eSup);
         eDiss = add(all, "dissipated energy", Dimension.ENERGY, t, r.eDiss);
         eClamp = add(all, "clamp energy", Dimension.ENERGY, t, r.eClamp);
@@ -81,7 +81,7 @@ public final class Transient {
         markers = Collections.unmodifiableList(mk);
 
         List<String> nt = new ArrayList<>(sv.notes);
-        if (sv.finalOff && Double.isNaN(sv.decayZero)) {
+        if (sv.finalOff && Double.isNaN(sv.decayZero) && sv.offCurrent > 0) {
             nt.add(Double.isNaN(sv.decay1pct) ? "the current had not decayed to 1 % of its turn-off value by the end of the run"
                     : "the current only approaches zero; the decay time is the time to 1 % of the turn-off current");
         }

@@ -85,8 +85,10 @@ public final class Candidate {
         for (int i = 0; i < limits.size(); i++) {
             if (i > 0) sb.append("; ");
             Limit l = limits.get(i);
-            double v = l.bound().si() + (l.isLowerBound() ? margins[i] : -margins[i]);
-            sb.append(l).append(": ").append(margins[i] >= 0 ? "margin " : "short by ").append(l.describeMargin(v).replaceFirst("^-", ""));
+            double m = margins[i];
+            Quantity q = Quantity.of(Math.abs(m), l.bound().dimension());
+            sb.append(l).append(": ").append(m >= 0 ? "margin " : "short by ").append(q);
+            if (l.bound().si() != 0) sb.append(String.format(java.util.Locale.ROOT, " (%.2f %%)", 100 * Math.abs(m / l.bound().si())));
         }
         return sb.toString();
     }

@@ -116,16 +116,6 @@ public final class Limit {
         }
     }
 
-    /** A margin shown as a quantity and a percentage of the bound: "+2.000 µH (+0.20 %)". */
-    String describeMargin(double si) {
-        if (Double.isNaN(si)) return "no value";
-        double m = marginAt(si);
-        String q = Quantity.of(m, bound.dimension()).toString();
-        if (m >= 0 && !q.startsWith("-")) q = "+" + q;
-        if (bound.si() != 0) q += String.format(java.util.Locale.ROOT, " (%+.2f %%)", 100 * relativeMarginAt(si));
-        return q;
-    }
-
     @Override
     public String toString() {
         return output + (atLeast ? " ≥ " : " ≤ ") + bound;

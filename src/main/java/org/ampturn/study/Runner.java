@@ -23,11 +23,80 @@ final class Runner {
     static final int CORES = Runtime.getRuntime().availableProcessors();
     private static volatile Progress installed = Progress.NONE;
     private static final AtomicInteger THREAD_NUMBER = new AtomicInteger();
+    /**
+     * The workers' own thread group, under the top-level group: stopping the shell's thread group
+     * (how the JDK 17 shell stops an entry) does not reach them, so they can hand back what they
+     * have computed.
+     */
+    private static final ThreadGroup GROUP = new ThreadGroup(topGroup(), "ampturn-study");
     private static final ExecutorService POOL = Executors.newCachedThreadPool(r -> {
-        Thread t = new Thread(r, "ampturn-study-" + THREAD_NUMBER.incrementAndGet());
+        Thread t = new Thread(GROUP, r, "ampturn-study-" + THREAD_NUMBER.incrementAndGet());
         t.setDaemon(true);
         return t;
     });
+
+    private static ThreadGroup topGroup() {
+        ThreadGroup g = Thread.currentThread().getThreadGroup();
+        while (g.getParent() != null) g = g.getParent();
+        return g;
+    }
+
+    /**
+     * Runs a whole study on a worker thread and waits for it. When the waiting thread is
+     * interrupted, or stopped by force, the study is told to stop (its thread is interrupted) and
+     * its result, marked incomplete, is still returned; the caller's interrupt flag is then set
+     * again. Studies started from inside a study run in place.
+     */
+    static <T> T guarded(java.util.function.Supplier<T> body) {
+        if (Thread.currentThread().getThreadGroup() == GROUP) return body.get();
+        java.util.concurrent.CompletableFuture<T> result = new java.util.concurrent.CompletableFuture<>();
+        Object lock = new Object();
+        Thread[] worker = new Thread[1];
+        boolean[] stop = new boolean[1];
+        POOL.execute(() -> {
+            synchronized (lock) {
+                worker[0] = Thread.currentThread();
+                if (stop[0]) worker[0].interrupt();
+            }
+            try {
+                result.complete(body.get());
+            } catch (Throwable e) {
+                result.completeExceptionally(e);
+            } finally {
+                synchronized (lock) {
+                    worker[0] = null;
+                    Thread.interrupted(); // the pool thread goes back clean
+                }
+            }
+        });
+        boolean interrupted = false;
+        while (true) {
+            try {
+                T r = result.get();
+                if (interrupted) Thread.currentThread().interrupt();
+                return r;
+            } catch (InterruptedException e) {
+                interrupted = true;
+                requestStop(lock, worker, stop);
+            } catch (ExecutionException e) {
+                if (interrupted) Thread.currentThread().interrupt();
+                Throwable c = e.getCause();
+                if (c instanceof RuntimeException) throw (RuntimeException) c;
+                if (c instanceof Error) throw (Error) c;
+                throw new IllegalStateException(c);
+            } catch (Error e) {
+                if (!isForcedStop(e)) throw e;
+                requestStop(lock, worker, stop);
+            }
+        }
+    }
+
+    private static void requestStop(Object lock, Thread[] worker, boolean[] stop) {
+        synchronized (lock) {
+            stop[0] = true;
+            if (worker[0] != null) worker[0].interrupt();
+        }
+    }
 
     static Progress install(Progress p) {
         Objects.requireNonNull(p, "progress listener");
@@ -55,7 +124,6 @@ final class Runner {
 
     /** Shared by the workers of one run: the stop flag and the progress count. */
     static final class Control {
-        private final Thread caller;
         private volatile boolean stop;
         private final AtomicLong done = new AtomicLong();
         private final AtomicLong lastReport;
@@ -65,7 +133,6 @@ final class Runner {
         private final Progress progress;
 
         Control(String task, long total, Progress progress) {
-            this.caller = Thread.currentThread();
             this.task = task;
             this.total = total;
             this.progress = progress;
@@ -151,10 +218,12 @@ final class Runner {
                     done[b] = body.run(b, from, to, control);
                 }
             } catch (RuntimeException | Error e) {
-                synchronized (failure) {
-                    if (failure[0] == null) failure[0] = e;
-                }
                 control.stop = true;
+                if (!isForcedStop(e)) {
+                    synchronized (failure) {
+                        if (failure[0] == null) failure[0] = e;
+                    }
+                }
             }
         };
         int helpers = Math.min(checkThreads(threads), blocks) - 1;
@@ -173,6 +242,9 @@ final class Runner {
                         control.stop = true;
                     } catch (ExecutionException e) {
                         break; // the worker records its own failure
+                    } catch (Error e) {
+                        if (!isForcedStop(e)) throw e;
+                        control.stop = true; // stopped by force while waiting: wait for the workers, then return
                     }
                 }
             }
@@ -187,6 +259,15 @@ final class Runner {
         if (failure[0] instanceof RuntimeException) throw (RuntimeException) failure[0];
         if (failure[0] instanceof Error) throw (Error) failure[0];
         return new Outcome(n, blockSize, done);
+    }
+
+    /**
+     * True for the error a thread gets when it is stopped by force ({@code Thread.stop}, which the
+     * JDK 17 shell uses for Ctrl-C). A run treats it as a request to stop and returns what it has,
+     * so a stopped sweep still hands back its rows.
+     */
+    static boolean isForcedStop(Throwable e) {
+        return e.getClass().getName().equals("java.lang.ThreadDeath");
     }
 
     /** A block size that gives each thread several blocks for even loads; it depends on {@code n} only. */

@@ -62,10 +62,10 @@ public final class Sweep {
         List<A> as = axis.values();
         Object[][] params = new Object[as.size()][];
         for (int i = 0; i < as.size(); i++) params[i] = new Object[] {as.get(i)};
-        return run("sweep of " + axis.name(), List.of(axis.name()), params, p -> {
+        return Runner.guarded(() -> run("sweep of " + axis.name(), List.of(axis.name()), params, p -> {
             @SuppressWarnings("unchecked") A a = (A) p[0];
             return f.apply(a);
-        });
+        }));
     }
 
     /** The function over the grid of two parameters: every value of {@code b} for each value of {@code a}. */
@@ -79,11 +79,11 @@ public final class Sweep {
         Object[][] params = new Object[(int) n][];
         int k = 0;
         for (A x : a.values()) for (B y : b.values()) params[k++] = new Object[] {x, y};
-        return run("sweep of " + a.name() + " and " + b.name(), List.of(a.name(), b.name()), params, p -> {
+        return Runner.guarded(() -> run("sweep of " + a.name() + " and " + b.name(), List.of(a.name(), b.name()), params, p -> {
             @SuppressWarnings("unchecked") A x = (A) p[0];
             @SuppressWarnings("unchecked") B y = (B) p[1];
             return f.apply(x, y);
-        });
+        }));
     }
 
     /** The fast path: {@code count} evenly spaced pure numbers from {@code from} to {@code to}, output column "result". */
@@ -103,6 +103,10 @@ public final class Sweep {
         if (xs == null || xs.length == 0) throw new IllegalArgumentException("the list of values for " + name + " is empty");
         if (name.equals(output)) throw new IllegalArgumentException("the parameter and the output have the same name, " + name);
         double[] x = xs.clone();
+        return Runner.guarded(() -> doubles(name, xDimension, x, output, outputDimension, f));
+    }
+
+    private Table doubles(String name, Dimension xDimension, double[] x, String output, Dimension outputDimension, DoubleUnaryOperator f) {
         int n = x.length;
         double[] y = new double[n];
         String[] errors = new String[n];

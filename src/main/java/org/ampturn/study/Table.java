@@ -134,6 +134,11 @@ public final class Table {
         return n;
     }
 
+    /** Why the table is incomplete ("stopped after 345 of 1000 points"), or null when it is complete. */
+    String incompleteNote() {
+        return incomplete;
+    }
+
     /** False when the run was stopped before every point was computed. */
     public boolean isComplete() {
         return incomplete == null;
@@ -302,6 +307,7 @@ public final class Table {
     }
 
     private void appendLine(StringBuilder sb, String[] cells, int[] width, int n) {
+        int start = sb.length();
         sb.append(' ');
         for (int j = 0; j < cells.length; j++) {
             boolean right = j < n && columns.get(j).numeric();
@@ -312,6 +318,9 @@ public final class Table {
             else sb.append(right ? pad + c : c + pad);
             if (j < cells.length - 1) sb.append(' ');
         }
+        int end = sb.length();
+        while (end > start && sb.charAt(end - 1) == ' ') end--;
+        sb.setLength(end);
         sb.append('\n');
     }
 

@@ -105,6 +105,10 @@ public final class Tolerance {
      */
     public Corners corners() {
         requireParameters();
+        return Runner.guarded(this::runCorners);
+    }
+
+    private Corners runCorners() {
         int k = varied.size();
         if (k > MAX_CORNER_PARAMS) {
             throw new IllegalArgumentException(k + " toleranced parameters give 2^" + k + " corners, more than 2^" + MAX_CORNER_PARAMS
@@ -145,6 +149,10 @@ public final class Tolerance {
     public MonteCarlo monteCarlo(int runs, long seed) {
         requireParameters();
         if (runs < 2) throw new IllegalArgumentException("runs (" + runs + ") must be at least 2");
+        return Runner.guarded(() -> runMonteCarlo(runs, seed));
+    }
+
+    private MonteCarlo runMonteCarlo(int runs, long seed) {
         int k = varied.size();
         Object[][] params = new Object[runs][];
         double[][] inputs = new double[k][runs];

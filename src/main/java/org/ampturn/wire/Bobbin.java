@@ -85,10 +85,10 @@ public final class Bobbin {
         double d = wire.overallDiameterM();
         int perLayer = Layout.turnsPerLayer(width, d, 1, packing);
         if (perLayer <= 0) return 0;
-        int layers = Layout.layersThatFit(depth, d, packing);
-        int total = 0;
-        for (int k = 1; k <= layers; k++) total += Layout.turnsPerLayer(width, d, k, packing);
-        return total;
+        long layers = Layout.layersThatFit(depth, d, packing);
+        long odd = perLayer, even = Layout.turnsPerLayer(width, d, 2, packing);
+        long total = packing == Packing.LAYERED ? layers * odd : (layers + 1) / 2 * odd + layers / 2 * even;
+        return (int) Math.min(Integer.MAX_VALUE, total);
     }
 
     // ---- kernels ----
@@ -105,6 +105,15 @@ public final class Bobbin {
     double perimeterAt(double build) {
         return turnLengthAt(build);
     }
+
+    @Override
+    public boolean equals(Object o) {
+        return o instanceof Bobbin b && b.width == width && b.depth == depth && Double.compare(b.innerDiameter, innerDiameter) == 0
+                && Double.compare(b.sideA, sideA) == 0 && Double.compare(b.sideB, sideB) == 0;
+    }
+
+    @Override
+    public int hashCode() { return java.util.Objects.hash(width, depth, innerDiameter, sideA, sideB); }
 
     @Override
     public String toString() {

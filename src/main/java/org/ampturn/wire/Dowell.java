@@ -1,5 +1,7 @@
 package org.ampturn.wire;
 
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
 import org.ampturn.units.Require;
 
 /**
@@ -23,6 +25,20 @@ import org.ampturn.units.Require;
  */
 public final class Dowell {
     private Dowell() {}
+
+    /**
+     * F_R of a winding portion of {@code layers} layers of {@code wire} at turn pitch {@code pitch}
+     * (overall diameter for close-wound turns), sinusoidal current of {@code frequency}, at 20 °C.
+     */
+    public static double factor(Wire wire, Quantity pitch, int layers, Quantity frequency) {
+        double s = Require.positive("turn pitch", pitch, Dimension.LENGTH);
+        double f = Require.positive("frequency", frequency, Dimension.FREQUENCY);
+        if (s < wire.bareDiameterM()) {
+            throw new IllegalArgumentException("turn pitch must be at least the bare diameter " + wire.bareDiameter() + ", got " + pitch);
+        }
+        double delta = SkinEffect.depthAt(wire.conductor().rho20(), f);
+        return factorAt(deltaOfRoundWire(wire.bareDiameterM(), s, delta), layers);
+    }
 
     /** Kernel: normalised layer thickness Δ of round wire of diameter d at pitch s, skin depth δ (all m). */
     public static double deltaOfRoundWire(double diameter, double pitch, double skinDepth) {

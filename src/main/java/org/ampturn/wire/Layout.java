@@ -16,8 +16,18 @@ final class Layout {
     /** Layers that fit in a depth h. */
     static int layersThatFit(double h, double d, Packing p) {
         if (h < d * (1 - EPS)) return 0;
+        if (h / d > 1e8) throw new IllegalArgumentException("the winding depth is more than 1e8 wire diameters; check the units");
         if (p == Packing.LAYERED) return (int) Math.floor(h / d * (1 + EPS));
         return 1 + (int) Math.floor((h - d) / (d * ROOT3_2) * (1 + EPS) + EPS);
+    }
+
+    /** Layers needed for n turns (layer 1 holding a turns, even layers b when orthocyclic). */
+    static long layersNeeded(long n, int a, int b, Packing p) {
+        if (p == Packing.LAYERED) return (n + a - 1) / a;
+        if (b == 0) return 2 * ((n + a - 1) / a) - 1;
+        long pairs = n / (a + b), rem = n - pairs * (a + b);
+        if (rem == 0) return 2 * pairs;
+        return rem <= a ? 2 * pairs + 1 : 2 * pairs + 2;
     }
 
     /** Height of the centre of layer k above the tube. */

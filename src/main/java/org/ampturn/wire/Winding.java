@@ -37,28 +37,29 @@ public final class Winding {
             throw new IllegalArgumentException("the wire (" + wire.size() + ", " + wire.overallDiameter()
                     + " overall) is wider than the winding width " + bobbin.width() + ": not one turn fits in a layer");
         }
-        int[] layers = new int[16];
-        int n = 0;
-        int left = turns;
-        double len = 0;
-        while (left > 0) {
-            int k = n + 1;
-            int in = Math.min(left, Layout.turnsPerLayer(bobbin.widthM(), d, k, packing));
-            if (n == layers.length) layers = java.util.Arrays.copyOf(layers, n * 2);
-            layers[n++] = in;
-            left -= in;
-            len += in * bobbin.turnLengthAt(Layout.layerCentre(d, k, packing));
-        }
-        this.perLayer = java.util.Arrays.copyOf(layers, n);
-        this.length = len;
-        double build = Layout.build(d, n, packing);
+        int second = Layout.turnsPerLayer(bobbin.widthM(), d, 2, packing);
+        long needed = Layout.layersNeeded(turns, first, second, packing);
+        double build = Layout.build(d, (int) Math.min(Integer.MAX_VALUE, needed), packing);
         if (build > bobbin.depthM() * (1 + 1e-9)) {
             int cap = bobbin.capacity(wire, packing);
             throw new IllegalArgumentException(turns + " turns of " + wire.size() + " (" + wire.overallDiameter() + " overall) do not fit: "
-                    + "they need " + n + " layers of up to " + first + " turns (" + packing + "), "
+                    + "they need " + needed + " layers of up to " + first + " turns (" + packing + "), "
                     + q(build) + " deep, and the bobbin is " + bobbin.depth() + " deep, " + q(build - bobbin.depthM())
                     + " too shallow. It holds at most " + cap + " turns, " + (turns - cap) + " fewer than asked");
         }
+        int n = (int) needed;
+        int[] layers = new int[n];
+        int left = turns;
+        double len = 0;
+        for (int i = 0; i < n; i++) {
+            int k = i + 1;
+            int in = Math.min(left, Layout.turnsPerLayer(bobbin.widthM(), d, k, packing));
+            layers[i] = in;
+            left -= in;
+            len += in * bobbin.turnLengthAt(Layout.layerCentre(d, k, packing));
+        }
+        this.perLayer = layers;
+        this.length = len;
     }
 
     private static Quantity q(double metres) { return Quantity.of(metres, Dimension.LENGTH); }
@@ -145,6 +146,39 @@ public final class Winding {
         return q(bobbin.innerDiameter().si() + 2 * buildM());
     }
 
+    /** Mean diameter of a winding on a round bobbin (inner diameter + build): the D of Wheeler's and Brooks's formulas. */
+    public Quantity meanDiameter() {
+        return q(bobbin.innerDiameter().si() + buildM());
+    }
+
+    /** Axial length the turns occupy: turns per layer × overall diameter (plus half a diameter when orthocyclic, more than one layer). */
+    public Quantity windingLength() {
+        double d = wire.overallDiameterM();
+        double l = turnsPerLayer() * d + (packing == Packing.ORTHOCYCLIC && layers() > 1 && turnsPerLayer() * d + d / 2 <= bobbin.widthM() ? d / 2 : 0);
+        return q(l);
+    }
+
+    /**
+     * Kernel: the position of every turn's centre on a round bobbin, as {radii[], axial positions[]}
+     * in metres, axial positions measured from the middle of the winding width; for filament sums.
+     */
+    public double[][] turnCentres() {
+        double di = bobbin.innerDiameter().si();
+        double d = wire.overallDiameterM();
+        double[] r = new double[turns], z = new double[turns];
+        int t = 0;
+        for (int i = 0; i < perLayer.length; i++) {
+            int k = i + 1;
+            double radius = di / 2 + Layout.layerCentre(d, k, packing);
+            double start = -bobbin.widthM() / 2 + d / 2 + (packing == Packing.ORTHOCYCLIC && k % 2 == 0 ? d / 2 : 0);
+            for (int j = 0; j < perLayer[i]; j++, t++) {
+                r[t] = radius;
+                z[t] = start + j * d;
+            }
+        }
+        return new double[][] {r, z};
+    }
+
     /**
      * Outside surface of the winding that can shed heat: the outer face (outer perimeter × width)
      * plus the two end faces (perimeter at mid-build × build, each). The inner face, on the tube or
@@ -162,8 +196,21 @@ public final class Winding {
      * MMF portion (a single winding whose field rises from zero at the tube to the outside), at 20 °C.
      */
     public double acResistanceFactor(Quantity frequency) {
+        return acFactorAt(Require.positive("frequency", frequency, Dimension.FREQUENCY), Conductor.T20);
+    }
+
+    /**
+     * AC resistance at a frequency and temperature: R_dc(T) × F_R (Dowell, with the skin depth of the
+     * conductor at T), for a sinusoidal current of that frequency.
+     */
+    public Quantity acResistance(Quantity frequency, Quantity temperature) {
         double f = Require.positive("frequency", frequency, Dimension.FREQUENCY);
-        double delta = SkinEffect.depthAt(wire.conductor().rho20(), f);
+        double k = Wire.kelvin(temperature);
+        return Quantity.of(resistanceAt(k) * acFactorAt(f, k), Dimension.RESISTANCE);
+    }
+
+    private double acFactorAt(double f, double kelvin) {
+        double delta = SkinEffect.depthAt(wire.conductor().resistivityAt(kelvin), f);
         double pitch = bobbin.widthM() / turnsPerLayer();
         double dd = Dowell.deltaOfRoundWire(wire.bareDiameterM(), pitch, delta);
         return Dowell.factorAt(dd, layers());
@@ -181,7 +228,7 @@ public final class Winding {
 
     @Override
     public boolean equals(Object o) {
-        return o instanceof Winding w && w.turns == turns && w.wire.equals(wire) && w.bobbin == bobbin && w.packing == packing;
+        return o instanceof Winding w && w.turns == turns && w.wire.equals(wire) && w.bobbin.equals(bobbin) && w.packing == packing;
     }
 
     @Override

@@ -90,7 +90,14 @@ public final class Wire {
     public static Wire metric(Quantity bareDiameter) {
         double d = Require.positive("bare diameter", bareDiameter, Dimension.LENGTH);
         if (d > 0.02) throw new IllegalArgumentException("bare diameter must be at most 20 mm for a round magnet wire, got " + bareDiameter);
-        return new Wire(String.format(Locale.ROOT, "Ø%.3f mm", d * 1e3), d, Conductor.COPPER, Insulation.HEAVY, Double.NaN);
+        return new Wire(metricName(d), d, Conductor.COPPER, Insulation.HEAVY, Double.NaN);
+    }
+
+    /** "Ø0.500 mm", "Ø0.0315 mm", "Ø1.250 mm": four significant figures, at least three decimals. */
+    private static String metricName(double metres) {
+        java.math.BigDecimal mm = new java.math.BigDecimal(metres * 1e3).round(new java.math.MathContext(4)).stripTrailingZeros();
+        if (mm.scale() < 3) mm = mm.setScale(3);
+        return "Ø" + mm.toPlainString() + " mm";
     }
 
     /** The same size in another conductor, e.g. {@code .withConductor(Conductor.ALUMINIUM)}. */

@@ -70,6 +70,7 @@ public final class Session implements AutoCloseable {
     private final Object lock = new Object();
     private volatile boolean running;
     private volatile boolean stopRequested;
+    private volatile long generation;
 
     private Session(JShell shell, List<String> imports, Set<Snippet> preloaded) {
         this.shell = shell;
@@ -152,6 +153,7 @@ public final class Session implements AutoCloseable {
                 int pieceStart = locate(entrySource, piece, consumed);
                 List<SnippetEvent> events;
                 stopRequested = false;
+                generation++;
                 running = true;
                 try {
                     events = shell.eval(piece);
@@ -189,10 +191,30 @@ public final class Session implements AutoCloseable {
         }
     }
 
-    /** Interrupts the entry that is running, if any; safe to call from any thread. */
+    /**
+     * Interrupts the entry that is running, if any; safe to call from any thread. A stop that
+     * arrives while the entry is still being compiled is repeated until its code runs and stops.
+     */
     public void stop() {
         if (!running) return;
+        long gen = generation;
         stopRequested = true;
+        stopEngine();
+        Thread again = new Thread(() -> {
+            while (running && generation == gen) {
+                try {
+                    Thread.sleep(50);
+                } catch (InterruptedException e) {
+                    return;
+                }
+                if (running && generation == gen) stopEngine();
+            }
+        }, "ampturn-stop");
+        again.setDaemon(true);
+        again.start();
+    }
+
+    private void stopEngine() {
         try {
             shell.stop();
         } catch (RuntimeException ignored) {

@@ -66,6 +66,17 @@ class ElectromagnetForceTest {
         assertTrue(em.gapFluxDensity(mm(0.2), A(i)).si() > 0);
     }
 
+    /** A B-H table material from the material package (low-carbon steel, typical values): the two methods still agree. */
+    @Test
+    void tableMaterialMethodsAgree() {
+        MagneticCircuit path = Core.of("yoke", mm(150), mm2(100), org.ampturn.material.Materials.LOW_CARBON_STEEL);
+        Electromagnet em = Electromagnet.of(600, path, mm2(100), 2);
+        for (double i : new double[] {0.3, 2, 8}) {
+            double f1 = em.forceAt(0.3e-3, i), f2 = em.forceByCoenergyAt(0.3e-3, i);
+            assertEquals(f1, f2, 1e-4 * f1, "i = " + i);
+        }
+    }
+
     @Test
     void badInput() {
         MagneticCircuit path = Core.of("iron", mm(120), mm2(150), MagneticMaterial.linear("iron", 1500, T(1.6)));

@@ -35,6 +35,23 @@ class SolenoidTest {
         assertEquals(k, s.nagaoka(), 0.6e-4, source);
     }
 
+    /**
+     * The fast kernel against Nagaoka's formula evaluated with K and E from Commons Math
+     * Gauss-Legendre quadrature of their defining integrals (independent of the AGM), to 1e-12.
+     */
+    @ParameterizedTest(name = "D/l = {0}")
+    @ValueSource(doubles = {0.001, 0.03, 0.3, 1, 3, 30})
+    void kernelMatchesFormulaWithQuadratureIntegrals(double x) {
+        double k2 = x * x / (1 + x * x), k = Math.sqrt(k2), kc = Math.sqrt(1 - k2);
+        var quad = new org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator(32, 1e-15, 1e-15);
+        double kk = quad.integrate(1_000_000, t -> 1 / Math.sqrt(1 - k2 * Math.sin(t) * Math.sin(t)), 0, Math.PI / 2);
+        double ee = quad.integrate(1_000_000, t -> Math.sqrt(1 - k2 * Math.sin(t) * Math.sin(t)), 0, Math.PI / 2);
+        double ref = 4 / (3 * Math.PI * kc) * ((kc * kc / k2) * (kk - ee) + ee - k);
+        // the reference itself loses digits to cancellation for long coils (small x): allow for it
+        double tol = 1e-12 + 1e-15 / (k2);
+        assertEquals(ref, Solenoid.nagaokaAt(x), tol * ref);
+    }
+
     /** Limits of the current sheet: K → 1 − 4D/(3πl) for a long coil (Grover 1946, ch. 14, series for long coils). */
     @Test
     void longCoilSeries() {
@@ -99,6 +116,19 @@ class SolenoidTest {
     @MethodSource("rosaTable")
     void rosaBMatchesTable(int n, double b, String source) {
         assertEquals(b, Solenoid.rosaB(n), 0.6e-4, source);
+    }
+
+    /**
+     * Grover's series for Rosa's B at large N (Grover 1929, as discussed by Knight, "Rosa's mutual
+     * inductance correction", 2010; coefficients from memory):
+     * B ≈ ln(2π) − 3/2 − ln N/(6N) − 0.33084236/N − 1/(120N³) + 1/(504N⁵).
+     */
+    @ParameterizedTest(name = "N = {0}")
+    @ValueSource(ints = {50, 100, 1000, 20000})
+    void rosaBMatchesGroverSeries(int n) {
+        double series = Math.log(2 * Math.PI) - 1.5 - Math.log(n) / (6.0 * n) - 0.33084236 / n - 1 / (120.0 * n * n * n)
+                + 1 / (504.0 * Math.pow(n, 5));
+        assertEquals(series, Solenoid.rosaB(n), 2e-9);
     }
 
     /**

@@ -58,6 +58,22 @@ class WoundCoilTest {
         assertEquals("steel", coil.saturation().first().name());
     }
 
+    /** From a Winding of the wire package: turns and resistance (cold and hot) are the winding's own. */
+    @Test
+    void fromAWinding() {
+        var w = org.ampturn.wire.Winding.of(org.ampturn.wire.Wire.awg(28), 300, org.ampturn.wire.Bobbin.of(mm(20), mm(10), mm(5)));
+        MagneticCircuit c = Core.of("steel", mm(80), mm2(80), org.ampturn.material.Materials.LOW_CARBON_STEEL).withGap(mm(0.3));
+        WoundCoil coil = WoundCoil.of(w, c);
+        assertEquals(300, coil.turns());
+        assertEquals(w.resistance().si(), coil.coldResistance().si(), 1e-12);
+        assertEquals(w.resistance(degC(120)).si(), coil.resistance(degC(120)).si(), 1e-12);
+        assertTrue(coil.winding().isPresent());
+        assertFalse(coil.isLinear());
+        // B-H table material: λ(i) inverts through the circuit
+        assertEquals(0.7, coil.currentAt(coil.fluxLinkageAt(0.7)), 1e-9);
+        assertEquals("steel", coil.saturation().first().name());
+    }
+
     @Test
     void badInput() {
         MagneticCircuit c = AirGap.of(mm(1), mm2(10));

@@ -83,4 +83,13 @@ class ConsoleEntryTest {
         assertFalse(h.screen().contains("Exception"), h.screen());
         h.close();
     }
+
+    @Test
+    void thePromptFallsBackToAsciiWhereTheLocaleCannotShowTheArrow() {
+        java.nio.charset.Charset utf8 = java.nio.charset.StandardCharsets.UTF_8;
+        assertTrue(Console.canShow('\u203A', utf8, null));
+        assertTrue(Console.canShow('\u203A', utf8, "UTF-8"));
+        assertFalse(Console.canShow('\u203A', utf8, "ANSI_X3.4-1968"));
+        assertFalse(Console.canShow('\u203A', java.nio.charset.StandardCharsets.US_ASCII, null));
+    }
 }

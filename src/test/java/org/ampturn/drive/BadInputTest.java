@@ -83,6 +83,30 @@ class BadInputTest {
         } finally {
             Thread.interrupted();
         }
+        // from another thread, while a long numeric run is under way (as the console's Ctrl-C does)
+        Circuit longRun = Drive.pwm(V(12), kHz(20), 0.5).into(new SaturatingCoil(10e-3, 1, 0.5e-3, 5)).clamp(Clamp.diode());
+        java.util.concurrent.atomic.AtomicReference<Throwable> seen = new java.util.concurrent.atomic.AtomicReference<>();
+        Thread worker = new Thread(() -> {
+            try {
+                longRun.simulate(s(100)); // 2,000,000 periods: minutes of work unless stopped
+            } catch (Throwable t) {
+                seen.set(t);
+            }
+        });
+        worker.start();
+        try {
+            Thread.sleep(300);
+        } catch (InterruptedException e) {
+            throw new AssertionError(e);
+        }
+        worker.interrupt();
+        try {
+            worker.join(10_000);
+        } catch (InterruptedException e) {
+            throw new AssertionError(e);
+        }
+        assertFalse(worker.isAlive(), "the run did not stop within 10 s of the interrupt");
+        assertTrue(seen.get() instanceof CancellationException, String.valueOf(seen.get()));
         // and a fresh run afterwards works
         assertEquals(Quantity.of(2.4, "A").si(), Drive.dc(V(12)).into(coil).simulate(ms(50)).finalCurrent().si(), 1e-12);
     }

@@ -59,6 +59,14 @@ class DowellTest {
         assertEquals(Dowell.factorAt(dd, 6), w.acResistanceFactor(Quantity.of(100, "kHz")), 1e-12);
         assertTrue(w.acResistanceFactor(Quantity.of(100, "kHz")) > Wire.awg(24).acResistanceFactor(Quantity.of(100, "kHz")),
                 "proximity makes a 6-layer winding worse than the isolated wire");
+        assertEquals(w.acResistanceFactor(Quantity.of(100, "kHz")),
+                Dowell.factor(Wire.awg(24), Quantity.of(20.0 / 35, "mm"), 6, Quantity.of(100, "kHz")), 1e-12);
+        assertThrows(IllegalArgumentException.class, () -> Dowell.factor(Wire.awg(24), Quantity.of(0.3, "mm"), 6, Quantity.of(100, "kHz")));
+        // hot copper: larger R_dc but a deeper skin, so a smaller factor
+        Quantity f100k = Quantity.of(100, "kHz");
+        double hot = w.acResistance(f100k, Quantity.celsius(100)).si(), cold = w.acResistance(f100k, Quantity.celsius(20)).si();
+        assertEquals(w.resistance().si() * w.acResistanceFactor(f100k), cold, cold * 1e-12);
+        assertTrue(hot / w.resistance(Quantity.celsius(100)).si() < w.acResistanceFactor(f100k));
         var e = assertThrows(IllegalArgumentException.class, () -> Dowell.factorAt(1, 0));
         assertTrue(e.getMessage().contains("layers"), e.getMessage());
     }

@@ -106,4 +106,42 @@ class WindingTest {
         assertTrue(wd.withPacking(Packing.ORTHOCYCLIC).wireLength().si() < wd.wireLength().si());
         assertTrue(wd.toString().startsWith("winding: 200 turns AWG 24 copper, 6 layers of up to 35 (layer-wound)"), wd.toString());
     }
+
+    @Test
+    void capacityIsExactForBothPackings() {
+        Bobbin b = Bobbin.of(mm(20), mm(10), mm(5));
+        for (Packing p : Packing.values()) {
+            for (double g = 18; g <= 36; g += 0.5) {
+                Wire w = Wire.awg(g);
+                int cap = b.capacity(w, p);
+                assertEquals(cap, Winding.full(w, b, p).turns());
+                assertThrows(IllegalArgumentException.class, () -> Winding.of(w, cap + 1, b, p), "AWG " + g + " " + p);
+                assertTrue(Winding.of(w, cap, b, p).spareDepth().si() >= -1e-12);
+            }
+        }
+    }
+
+    @Test
+    void absurdTurnCountsFailAtOnce() {
+        Bobbin b = Bobbin.of(mm(20), mm(10), mm(5));
+        var e = assertThrows(IllegalArgumentException.class, () -> Winding.of(Wire.awg(24), Integer.MAX_VALUE, b));
+        assertTrue(e.getMessage().contains("do not fit") && e.getMessage().contains("61356676 layers"), e.getMessage());
+    }
+
+    @Test
+    void turnCentresForFilamentSums() {
+        Wire w = Wire.awg(24);
+        double d = w.overallDiameterM();
+        Winding wd = Winding.of(w, 70, Bobbin.of(mm(20), mm(10), mm(5))); // two full layers of 35
+        double[][] rz = wd.turnCentres();
+        assertEquals(70, rz[0].length);
+        double sumR = 0;
+        for (double r : rz[0]) sumR += r;
+        assertEquals(wd.meanDiameter().si() / 2, sumR / 70, 1e-15);
+        assertEquals(-10e-3 + d / 2, rz[1][0], 1e-15);
+        assertEquals(rz[1][0] + 34 * d, rz[1][34], 1e-15);
+        assertEquals(35 * d, wd.windingLength().si(), 1e-15);
+        // the mean turn length is π × the mean diameter when all layers are full
+        assertEquals(Math.PI * wd.meanDiameter().si(), wd.meanTurnLength().si(), 1e-15);
+    }
 }

@@ -133,6 +133,9 @@ class WireTest {
         assertEquals("AWG 24 copper wire, 510.6 µm bare, 566.5 µm over heavy build, 84.22 mΩ/m at 20 °C", s);
         assertEquals("AWG 00 copper wire", Wire.awg("2/0").toString().substring(0, 18));
         assertTrue(Wire.metric(Quantity.of(0.5, "mm")).toString().startsWith("Ø0.500 mm copper wire"));
+        assertEquals("Ø0.0315 mm", Wire.metric(Quantity.of(0.0315, "mm")).size());
+        assertEquals("Ø1.250 mm", Wire.metric(Quantity.of(1.25, "mm")).size());
+        assertEquals("Ø12.000 mm", Wire.metric(Quantity.of(12, "mm")).size());
     }
 
     @Test

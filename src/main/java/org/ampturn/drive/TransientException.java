@@ -5,14 +5,14 @@ package org.ampturn.drive;
  * or a diverging solution), it ran out of evaluations, or the state left the physical range. The
  * message says which quantity, at what time and by how much.
  */
-public final class SolveException extends RuntimeException {
+public final class TransientException extends RuntimeException {
     private static final long serialVersionUID = 1L;
 
-    SolveException(String message) {
+    TransientException(String message) {
         super(message);
     }
 
-    SolveException(String message, Throwable cause) {
+    TransientException(String message, Throwable cause) {
         super(message, cause);
     }
 }
