@@ -68,6 +68,7 @@ final class Build {
         NumberAxis xAxis = d.xLabels().isEmpty() ? axis(xu.label(d.xQuantity()))
                 : style(new SymbolAxis(d.xQuantity(), d.xLabels().toArray(new String[0])));
         xAxis.setAutoRangeIncludesZero(false);
+        xAxis.setAutoRangeMinimumSize(xMax > 0 ? 0.1 * xu.toDisplay(xMax) : 1);
         xAxis.setLowerMargin(d.xLabels().isEmpty() ? 0 : 0.03);
         xAxis.setUpperMargin(d.xLabels().isEmpty() ? 0 : 0.03);
         CombinedDomainXYPlot combined = new CombinedDomainXYPlot(xAxis);
@@ -83,6 +84,9 @@ final class Build {
             AxisUnit yu = AxisUnit.forRange(p.dimension(), p.maxAbsY());
             NumberAxis yAxis = axis(yu.label(p.quantity()));
             yAxis.setAutoRangeIncludesZero(false);
+            // a flat curve gets a readable span (±5 % of its level) instead of a range of rounding error
+            double level = yu.toDisplay(p.maxAbsY());
+            yAxis.setAutoRangeMinimumSize(level > 0 ? 0.1 * level : 1);
             DefaultXYDataset ds = new DefaultXYDataset();
             Set<String> keys = new HashSet<>();
             boolean dense = false;

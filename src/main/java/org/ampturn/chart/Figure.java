@@ -53,6 +53,7 @@ public final class Figure {
     public Figure save(Path path, int width, int height) {
         Render.checkSize(width, height);
         Render.formatOf(path);
+        Display.settle();
         Render.write(Build.chart(data), path, width, height);
         if (!files.contains(path)) files.add(path);
         return this;

@@ -66,8 +66,11 @@ public final class Figures {
 
     /** True when figures open in windows: a display exists and windows are on. */
     public static boolean windowsShown() {
-        return windows && !GraphicsEnvironment.isHeadless();
+        Display.settle();
+        return windows && !windowsFailed && !GraphicsEnvironment.isHeadless();
     }
+
+    private static volatile boolean windowsFailed;
 
     /**
      * Starts the window system ahead of the first plot (call from a background thread at start-up
@@ -111,12 +114,18 @@ public final class Figures {
     public static Figure show(Figure f) {
         MADE.add(f);
         boolean shown = false;
+        Display.settle();
+        String note = Display.takeNote();
+        if (note != null) print(note);
         if (windowsShown()) {
             try {
                 Windows.show(f);
                 shown = true;
-            } catch (java.awt.HeadlessException e) {
-                shown = false;
+            } catch (java.awt.HeadlessException | java.awt.AWTError | Windows.Unavailable e) {
+                // a display is named but cannot be reached: say so once, then write files like a headless run
+                windowsFailed = true;
+                print(e instanceof Windows.Unavailable ? e.getMessage() + "; writing figure files instead"
+                        : "no window (" + e.getMessage() + "); writing figure files instead");
             }
         }
         if (!shown) {

@@ -71,8 +71,11 @@ public final class Preview {
             Trace t = p.traces().get(0);
             double[] r = range(t.ys());
             double[] xr = range(t.xs());
+            String over = l.xLabels().isEmpty()
+                    ? q(xr[0], l.xDimension()) + " … " + q(xr[1], l.xDimension())
+                    : l.xLabels().get(0) + " … " + l.xLabels().get(l.xLabels().size() - 1);
             return t.name() + " " + sparkline(t.xs(), t.ys(), WIDTH) + "  " + q(r[0], p.dimension()) + " … " + q(r[1], p.dimension())
-                    + " over " + l.xQuantity() + " " + q(xr[0], l.xDimension()) + " … " + q(xr[1], l.xDimension());
+                    + " over " + l.xQuantity() + " " + over;
         }
         if (d instanceof FigureData.Histogram h) {
             Bins b = Bins.of(h.raw(), h.lower(), h.upper());

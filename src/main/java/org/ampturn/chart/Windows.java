@@ -29,6 +29,13 @@ final class Windows {
 
     private static volatile boolean prepared;
 
+    /** The display is named but cannot be reached (or refuses windows): figures go to files instead. */
+    static final class Unavailable extends RuntimeException {
+        Unavailable(Throwable cause) {
+            super("no window: " + (cause.getMessage() != null ? cause.getMessage() : cause.toString()), cause);
+        }
+    }
+
     /**
      * Starts the window system from a thread of the top thread group. The event thread takes the
      * thread group of whoever first touches the window system; when that is a JShell snippet, the
@@ -58,8 +65,11 @@ final class Windows {
                 Thread.currentThread().interrupt();
                 return;
             }
-            if (failed[0] instanceof java.awt.HeadlessException h) throw h;
-            if (failed[0] != null) throw new IllegalStateException("cannot start the window system: " + failed[0], failed[0]);
+            if (failed[0] != null) {
+                Throwable c = failed[0] instanceof java.lang.reflect.InvocationTargetException ite && ite.getCause() != null
+                        ? ite.getCause() : failed[0];
+                throw new Unavailable(c);
+            }
             prepared = true;
         }
     }

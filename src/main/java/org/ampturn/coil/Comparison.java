@@ -56,7 +56,7 @@ public final class Comparison {
             String err = Double.isNaN(r.relativeError()) ? "n/a" : String.format(java.util.Locale.ROOT, "%+.3f %%", 100 * r.relativeError());
             sb.append(String.format(fmt, r.method(), Double.isNaN(r.henry()) ? "n/a" : r.inductance().toString(), err, r.validity()));
         }
-        return sb.toString().stripTrailing();
+        return sb.toString().lines().map(String::stripTrailing).collect(java.util.stream.Collectors.joining("\n"));
     }
 
     static final class Builder {

@@ -8,7 +8,7 @@ import org.ampturn.units.Quantity;
 
 /** Flux density in each part of a magnetic circuit at one current: a small immutable table. */
 public final class FluxReport {
-    /** One part: its name, flux density (T), and saturation flux density (T; NaN for a gap). */
+    /** One part: its name, flux density (T), and saturation flux density (T; NaN for a gap or air). */
     public record Part(String name, double tesla, double saturationTesla) {
         public Quantity fluxDensity() {
             return Quantity.of(tesla, Dimension.FLUX_DENSITY);
@@ -24,12 +24,14 @@ public final class FluxReport {
     private final double amps;
     private final double flux;
     private final List<Part> parts;
+    private final boolean[] isGap;
 
-    private FluxReport(int turns, double amps, double flux, List<Part> parts) {
+    private FluxReport(int turns, double amps, double flux, List<Part> parts, boolean[] isGap) {
         this.turns = turns;
         this.amps = amps;
         this.flux = flux;
         this.parts = List.copyOf(parts);
+        this.isGap = isGap;
     }
 
     static FluxReport of(MagneticCircuit c, int turns, double amps) {
@@ -38,12 +40,15 @@ public final class FluxReport {
         double[] b = new double[leaves.size()];
         c.fluxDensities(phi, b, new int[1]);
         List<Part> rows = new ArrayList<>();
+        boolean[] gap = new boolean[b.length];
         for (int i = 0; i < b.length; i++) {
             MagneticCircuit p = leaves.get(i);
+            gap[i] = p instanceof AirGap;
             double bsat = p instanceof Core ? ((Core) p).saturationSI() : Double.NaN;
+            if (!(bsat < 1e300)) bsat = Double.NaN; // air, or no saturation flux density given
             rows.add(new Part(p.name(), b[i], bsat));
         }
-        return new FluxReport(turns, amps, phi, rows);
+        return new FluxReport(turns, amps, phi, rows, gap);
     }
 
     public List<Part> parts() { return parts; }
@@ -60,7 +65,7 @@ public final class FluxReport {
     /** The highest |B| in any core piece (gaps excluded). */
     public Quantity peakCoreFluxDensity() {
         double m = 0;
-        for (Part p : parts) if (!Double.isNaN(p.saturationTesla())) m = Math.max(m, Math.abs(p.tesla()));
+        for (int i = 0; i < parts.size(); i++) if (!isGap[i]) m = Math.max(m, Math.abs(parts.get(i).tesla()));
         return Quantity.of(m, Dimension.FLUX_DENSITY);
     }
 

@@ -45,6 +45,7 @@ public final class Saturation {
             if (!(leaves.get(i) instanceof Core)) continue;
             Core core = (Core) leaves.get(i);
             double bsat = core.saturationSI();
+            if (!(bsat < 1e300)) continue; // air or a core given without a saturation flux density
             double amps;
             if (c.isLinear()) {
                 amps = bsat / Math.abs(perAmp[i]);

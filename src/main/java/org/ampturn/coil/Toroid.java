@@ -35,7 +35,7 @@ public final class Toroid {
     /** Rectangular section with a linear core of relative permeability μr (1 for air). */
     public static Toroid rectangular(int turns, Quantity innerDiameter, Quantity outerDiameter, Quantity height, double relativePermeability) {
         Require.positive("relative permeability", relativePermeability);
-        return rectangular(turns, innerDiameter, outerDiameter, height, MagneticMaterial.linear("μr " + relativePermeability, relativePermeability, Quantity.of(Double.MAX_VALUE, Dimension.FLUX_DENSITY)));
+        return rectangular(turns, innerDiameter, outerDiameter, height, MagneticMaterial.linear("core of μr " + Quantity.number(relativePermeability), relativePermeability, Quantity.of(UNSATURABLE, Dimension.FLUX_DENSITY)));
     }
 
     /** Rectangular section on a core of {@code material}. */
@@ -55,7 +55,7 @@ public final class Toroid {
     /** Circular section of diameter {@code sectionDiameter} centred on {@code meanDiameter}, linear core μr. */
     public static Toroid circular(int turns, Quantity meanDiameter, Quantity sectionDiameter, double relativePermeability) {
         Require.positive("relative permeability", relativePermeability);
-        return circular(turns, meanDiameter, sectionDiameter, MagneticMaterial.linear("μr " + relativePermeability, relativePermeability, Quantity.of(Double.MAX_VALUE, Dimension.FLUX_DENSITY)));
+        return circular(turns, meanDiameter, sectionDiameter, MagneticMaterial.linear("core of μr " + Quantity.number(relativePermeability), relativePermeability, Quantity.of(UNSATURABLE, Dimension.FLUX_DENSITY)));
     }
 
     /** Circular section on a core of {@code material}. */
@@ -70,6 +70,9 @@ public final class Toroid {
         if (material == null) throw new IllegalArgumentException("material is missing (null)");
         return new Toroid(turns, true, d / 2, s / 2, 0, material);
     }
+
+    /** Stand-in saturation flux density for a core given only by μr: never reached. */
+    private static final double UNSATURABLE = 1e300;
 
     public int turns() { return turns; }
     public MagneticMaterial material() { return material; }
@@ -119,7 +122,12 @@ public final class Toroid {
 
     /** The current at which the inner edge reaches the material's saturation flux density. */
     public Quantity saturationCurrent() {
-        double hs = material.fieldAt(material.saturationFluxDensity().si());
+        double bs = material.saturationFluxDensity().si();
+        if (!(bs < UNSATURABLE)) {
+            throw new IllegalStateException("this toroid's core was given only as μr = " + Quantity.number(material.relativePermeability())
+                    + ", with no saturation flux density; give a MagneticMaterial for the saturation check");
+        }
+        double hs = material.fieldAt(bs);
         return Quantity.of(hs * 2 * Math.PI * innerRadius() / turns, Dimension.CURRENT);
     }
 

@@ -72,7 +72,7 @@ public final class Console implements SessionConsole {
         LineReaderBuilder b = LineReaderBuilder.builder()
                 .terminal(terminal)
                 .appName("ampturn")
-                .parser(new ConsoleParser(text -> session().needsMore(text)))
+                .parser(new ConsoleParser(this::needsMore))
                 .completer(new ConsoleCompleter(this::readySession, commands::words))
                 .highlighter(new ConsoleHighlighter())
                 .variable(LineReader.SECONDARY_PROMPT_PATTERN, "%P ")
@@ -158,8 +158,12 @@ public final class Console implements SessionConsole {
                 continue;
             }
             if (line.isBlank()) continue;
-            if (line.stripLeading().startsWith("#")) command(line.strip());
-            else enter(line, false);
+            try {
+                if (line.stripLeading().startsWith("#")) command(line.strip());
+                else enter(line, false);
+            } catch (RuntimeException e) {
+                error(e.getMessage() != null ? e.getMessage() : e.toString()); // e.g. the engine did not start
+            }
         }
         try {
             reader.getHistory().save();
@@ -177,6 +181,15 @@ public final class Console implements SessionConsole {
             return engine.join();
         } catch (CompletionException e) {
             throw new IllegalStateException("the Java engine did not start: " + e.getCause(), e.getCause());
+        }
+    }
+
+    /** True when the typed text continues on the next line; false when the engine could not start (the entry then shows why). */
+    private boolean needsMore(String text) {
+        try {
+            return session().needsMore(text);
+        } catch (RuntimeException e) {
+            return false;
         }
     }
 

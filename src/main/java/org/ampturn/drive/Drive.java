@@ -58,7 +58,7 @@ public final class Drive {
     public static Drive pwm(Quantity supply, Quantity frequency, double duty) {
         double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
         double f = Require.positive("PWM frequency", frequency, Dimension.FREQUENCY);
-        if (!(duty > 0 && duty <= 1)) throw new IllegalArgumentException("PWM duty (" + duty + ") must be above 0 and at most 1");
+        if (!(duty >= 1e-4 && duty <= 1)) throw new IllegalArgumentException("PWM duty (" + duty + ") must be between 0.0001 and 1");
         return new Drive(Scheme.PWM, v, 0, 0, f, duty, 0, 0, 0, Regulation.HYSTERETIC);
     }
 

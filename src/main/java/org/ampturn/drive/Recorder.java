@@ -4,9 +4,9 @@ import static org.ampturn.drive.Solver.*;
 
 /** The output samples of one run, filled in time order (the mutable side of a {@link Transient}). */
 final class Recorder {
-    final double[] time, current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp, pMech,
-            eSup, eDiss, eClamp, eStored, eMech;
-    final double[] x, v, force, capV;
+    final double[] time, current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp,
+            eSup, eDiss, eClamp, eStored;
+    final double[] pMech, eMech, x, v, force, capV; // null unless the armature moves / there is a snubber
 
     Recorder(int n, boolean moves, boolean snub) {
         time = new double[n];
@@ -19,12 +19,12 @@ final class Recorder {
         pCoil = new double[n];
         pDrive = new double[n];
         pClamp = new double[n];
-        pMech = new double[n];
         eSup = new double[n];
         eDiss = new double[n];
         eClamp = new double[n];
         eStored = new double[n];
-        eMech = new double[n];
+        pMech = moves ? new double[n] : null;
+        eMech = moves ? new double[n] : null;
         x = moves ? new double[n] : null;
         v = moves ? new double[n] : null;
         force = moves ? new double[n] : null;
@@ -43,13 +43,13 @@ final class Recorder {
         pCoil[k] = o[O_PCOIL];
         pDrive[k] = o[O_PDRV];
         pClamp[k] = o[O_PCL];
-        pMech[k] = o[O_PMECH];
         eSup[k] = s[ESUP];
         eDiss[k] = s[ECOIL] + s[EDRV];
         eClamp[k] = s[ECL];
         eStored[k] = stored;
-        eMech[k] = s[EMECH];
         if (x != null) {
+            pMech[k] = o[O_PMECH];
+            eMech[k] = s[EMECH];
             x[k] = s[X];
             v[k] = s[V];
             force[k] = o[O_F];

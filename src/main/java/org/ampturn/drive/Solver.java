@@ -355,6 +355,11 @@ final class Solver {
         if (!finalOff && !Double.isNaN(offAt) && Math.abs(t - offAt) <= 1e-12 * Math.max(tEnd, 1e-300)) {
             finalOff = true;
             offCurrent = currentNow();
+            double w = storedAt(y);
+            if (w > peakStored) {
+                peakStored = w;
+                peakStoredT = t;
+            }
             if (cycleOpen) cycleOpen = false;
             setSwitch(false);
             markers.add(new Marker("switch off", tq(t), Quantity.of(offCurrent, Dimension.CURRENT), "current"));

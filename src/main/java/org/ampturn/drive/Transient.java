@@ -48,7 +48,7 @@ public final class Transient {
         pCoil = add(all, "coil resistance power", Dimension.POWER, t, r.pCoil);
         pDrive = add(all, "drive loss power", Dimension.POWER, t, r.pDrive);
         pClamp = add(all, "clamp power", Dimension.POWER, t, r.pClamp);
-        pMech = sv.moves ? add(all, "mechanical power", Dimension.POWER, t, r.pMech) : Signal.wrap("mechanical power", Dimension.POWER, t, r.pMech);
+        pMech = sv.moves ? add(all, "mechanical power", Dimension.POWER, t, r.pMech) : Signal.wrap("mechanical power", Dimension.POWER, t, new double[t.length]);
         eSup = add(all, "supplied energy", Dimension.ENERGY, t, r.eSup);
         eDiss = add(all, "dissipated energy", Dimension.ENERGY, t, r.eDiss);
         eClamp = add(all, "clamp energy", Dimension.ENERGY, t, r.eClamp);

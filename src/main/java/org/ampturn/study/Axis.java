@@ -24,8 +24,9 @@ public final class Axis<T> {
 
     /**
      * {@code count} evenly spaced numbers from {@code from} to {@code to}. When both ends are whole
-     * numbers ({@code Integer}) the values are rounded to whole numbers and stay {@code Integer}:
-     * {@code Axis.linear("turns", 100, 1000, 10)} gives 100, 200, … 1000.
+     * numbers ({@code Integer}, {@code Long}) the values are rounded to whole numbers of that type:
+     * {@code Axis.linear("turns", 100, 1000, 10)} gives 100, 200, … 1000. Ends of two different
+     * types give {@code Double} values.
      */
     public static <N extends Number> Axis<N> linear(String name, N from, N to, int count) {
         return numbers(name, from, to, count, false);
@@ -120,24 +121,28 @@ public final class Axis<T> {
         double b = to.doubleValue();
         checkEnds(name, a, b, log, String.valueOf(from), String.valueOf(to));
         checkCount(name, count, a, b);
-        boolean whole = (from instanceof Integer) && (to instanceof Integer);
+        Class<?> kind = from.getClass() == to.getClass() ? from.getClass() : Double.class;
+        boolean whole = kind == Integer.class || kind == Long.class || kind == Short.class || kind == Byte.class;
         List<Number> vs = new ArrayList<>(count);
         if (whole) {
-            long span = Math.abs((long) to.intValue() - from.intValue()) + 1;
+            long span = Math.abs(to.longValue() - from.longValue()) + 1;
             if (count > span) {
                 throw new IllegalArgumentException("count of " + name + " (" + count + ") is more than the " + span
                         + " whole numbers from " + from + " to " + to);
             }
-            int last = Integer.MIN_VALUE;
+            long last = Long.MIN_VALUE;
             for (int k = 0; k < count; k++) {
-                int v = (int) Math.round(step(a, b, k, count, log));
+                long v = Math.round(step(a, b, k, count, log));
                 if (k > 0 && v == last) {
                     throw new IllegalArgumentException(count + " log steps of " + name + " from " + from + " to " + to
                             + " repeat whole numbers (" + v + " twice); give a smaller count");
                 }
-                vs.add(v);
+                vs.add(kind == Integer.class ? (Number) (int) v : kind == Long.class ? (Number) v
+                        : kind == Short.class ? (Number) (short) v : (Number) (byte) v);
                 last = v;
             }
+        } else if (kind == Float.class) {
+            for (int k = 0; k < count; k++) vs.add((float) step(a, b, k, count, log));
         } else {
             for (int k = 0; k < count; k++) vs.add(step(a, b, k, count, log));
         }

@@ -57,7 +57,9 @@ final class Column {
     String text(int row) {
         if (!numeric()) return labels[row] == null ? "" : labels[row];
         double v = values[row];
-        return Double.isNaN(v) ? "" : quantity(row).toString();
+        if (Double.isNaN(v)) return "";
+        if (dimension.isNone() && v == Math.rint(v) && Math.abs(v) < 1e15) return Long.toString((long) v);
+        return quantity(row).toString();
     }
 
     // ---- display: one unit per column ----------------------------------------------------------

@@ -209,7 +209,7 @@ public final class MonteCarlo {
     public String toString() {
         StringBuilder sb = new StringBuilder();
         sb.append("Monte Carlo of ").append(runs()).append(" runs, seed ").append(seed);
-        if (!isComplete()) sb.append(" (incomplete: ").append(table.toString().lines().findFirst().orElse("").replaceFirst(".*incomplete: ", "").replace(")", "")).append(')');
+        if (!isComplete()) sb.append(" (incomplete: ").append(table.incompleteNote().replace("points", "runs")).append(')');
         int errors = 0;
         for (int i = 0; i < runs(); i++) if (table.error(i) != null && computed(i)) errors++;
         if (errors > 0) sb.append(", ").append(errors).append(" failed to evaluate");

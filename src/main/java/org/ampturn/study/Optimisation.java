@@ -173,7 +173,7 @@ public final class Optimisation {
             if (combos <= exhaustiveLimit) {
                 int n = (int) combos;
                 Candidate[] found = new Candidate[n];
-                Runner.Outcome o = Runner.run(Optimisation.this.toString(), n, 1, threads, progress, (b, lo, hi, c) -> {
+                Runner.Outcome o = Runner.run((maximise ? "maximising " : "minimising ") + objective, n, 1, threads, progress, (b, lo, hi, c) -> {
                     control = c;
                     for (int i = lo; i < hi; i++) {
                         try {
@@ -199,7 +199,7 @@ public final class Optimisation {
                 }
                 int n = (int) choiceCombos;
                 @SuppressWarnings("unchecked") List<Candidate>[] found = new List[n];
-                Runner.Outcome o = Runner.run(Optimisation.this.toString(), n, 1, threads, progress, (b, lo, hi, c) -> {
+                Runner.Outcome o = Runner.run((maximise ? "maximising " : "minimising ") + objective, n, 1, threads, progress, (b, lo, hi, c) -> {
                     control = c;
                     for (int i = lo; i < hi; i++) {
                         List<Candidate> got = new ArrayList<>();

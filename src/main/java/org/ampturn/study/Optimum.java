@@ -122,7 +122,7 @@ public final class Optimum {
         StringBuilder sb = new StringBuilder();
         sb.append(maximise ? "maximise " : "minimise ").append(objective);
         if (!limits.isEmpty()) sb.append(" subject to ").append(String.join(", ", limits.stream().map(Limit::toString).toArray(String[]::new)));
-        sb.append(": ").append(evaluations).append(" evaluations, ").append(method);
+        sb.append(": ").append(method);
         if (!complete) sb.append(" (stopped early: the best so far)");
         sb.append('\n');
         if (winner.isFeasible()) {

@@ -124,7 +124,6 @@ final class Runner {
 
     /** Shared by the workers of one run: the stop flag and the progress count. */
     static final class Control {
-        private final Thread caller;
         private volatile boolean stop;
         private final AtomicLong done = new AtomicLong();
         private final AtomicLong lastReport;
@@ -134,7 +133,6 @@ final class Runner {
         private final Progress progress;
 
         Control(String task, long total, Progress progress) {
-            this.caller = Thread.currentThread();
             this.task = task;
             this.total = total;
             this.progress = progress;

@@ -13,7 +13,9 @@ import org.ampturn.units.Quantity;
  * Finds the x in [lo, hi] where f(x) reaches a target, by Brent's method (R. P. Brent,
  * <i>Algorithms for Minimization without Derivatives</i>, Prentice-Hall 1973, ch. 4; the Commons
  * Math {@code BrentSolver}). It needs f − target to change sign between lo and hi; when it does not,
- * the error gives f at both ends. f need only be continuous; x is found to about 1e-12 of the range.
+ * the error gives f at both ends. f need only be continuous; x is found to about 1e-13 of the
+ * larger end and returned rounded to 12 significant digits, so the digits shown do not change with
+ * the last bits of f (a worksheet that records the answer verifies across small library changes).
  */
 public final class Solve {
     private Solve() {}
@@ -92,11 +94,17 @@ public final class Solve {
         double abs = 1e-13 * Math.max(Math.abs(lo), Math.abs(hi));
         BrentSolver solver = new BrentSolver(1e-14, abs > 0 ? abs : 1e-300);
         try {
-            return solver.solve(MAX_EVALUATIONS, x -> eval(f, x, showX) - target, lo, hi);
+            return round12(solver.solve(MAX_EVALUATIONS, x -> eval(f, x, showX) - target, lo, hi));
         } catch (TooManyEvaluationsException e) {
             throw new SolveException("no answer within " + MAX_EVALUATIONS + " evaluations between x = " + showX.apply(lo) + " and "
                     + showX.apply(hi) + "; is f continuous there?", e);
         }
+    }
+
+    /** {@code v} to 12 significant digits. */
+    static double round12(double v) {
+        if (v == 0 || !Double.isFinite(v)) return v;
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(12)).doubleValue();
     }
 
     private static double eval(DoubleUnaryOperator f, double x, DoubleFunction<String> showX) {

@@ -134,6 +134,11 @@ public final class Table {
         return n;
     }
 
+    /** Why the table is incomplete ("stopped after 345 of 1000 points"), or null when it is complete. */
+    String incompleteNote() {
+        return incomplete;
+    }
+
     /** False when the run was stopped before every point was computed. */
     public boolean isComplete() {
         return incomplete == null;

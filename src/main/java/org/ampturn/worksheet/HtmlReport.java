@@ -139,6 +139,7 @@ public final class HtmlReport {
 
     private static String figure(Path base, String name) {
         Path f = base.resolve(name).normalize();
+        if (f.startsWith(base)) name = base.relativize(f).toString();
         String lower = name.toLowerCase(java.util.Locale.ROOT);
         String cap = "<figcaption>" + esc(name) + "</figcaption>";
         try {
@@ -148,7 +149,7 @@ public final class HtmlReport {
                         .replaceAll("(?s)<!DOCTYPE[^>]*>", "")
                         .replaceAll("(?is)<script.*?</script>", "")
                         .strip();
-                return "<figure class=\"chart\">" + svg + cap + "</figure>\n";
+                return "<figure class=\"chart\">" + scalable(svg) + cap + "</figure>\n";
             }
             if (lower.endsWith(".png") || lower.endsWith(".jpg") || lower.endsWith(".jpeg")) {
                 String type = lower.endsWith(".png") ? "image/png" : "image/jpeg";
@@ -159,6 +160,31 @@ public final class HtmlReport {
         } catch (IOException e) {
             return "<p class=\"missing\">Figure " + esc(name) + " was not found next to the worksheet.</p>\n";
         }
+    }
+
+    private static final java.util.regex.Pattern SVG_TAG = java.util.regex.Pattern.compile("<svg\\b[^>]*>");
+    private static final java.util.regex.Pattern SIZE = java.util.regex.Pattern.compile("\\s(width|height)\\s*=\\s*(['\"])([0-9.]+)(?:px)?\\2");
+
+    /**
+     * An SVG that scales to the page: a drawing with a fixed width and height but no viewBox
+     * (as chart libraries write it) would be cropped when shrunk, so it gets a viewBox of that size
+     * and a width of 100%.
+     */
+    static String scalable(String svg) {
+        java.util.regex.Matcher tag = SVG_TAG.matcher(svg);
+        if (!tag.find() || tag.group().contains("viewBox")) return svg;
+        String t = tag.group();
+        java.util.regex.Matcher m = SIZE.matcher(t);
+        String w = null, h = null;
+        while (m.find()) {
+            if (m.group(1).equals("width")) w = m.group(3);
+            else h = m.group(3);
+        }
+        if (w == null || h == null) return svg;
+        String fixed = SIZE.matcher(t).replaceAll("");
+        fixed = fixed.substring(0, fixed.length() - 1).replaceFirst("/$", "") + " viewBox=\"0 0 " + w + " " + h + "\" width=\"100%\""
+                + (t.endsWith("/>") ? "/>" : ">");
+        return svg.substring(0, tag.start()) + fixed + svg.substring(tag.end());
     }
 
     static String esc(String s) {

@@ -70,6 +70,7 @@ public final class Session implements AutoCloseable {
     private final Object lock = new Object();
     private volatile boolean running;
     private volatile boolean stopRequested;
+    private volatile long generation;
 
     private Session(JShell shell, List<String> imports, Set<Snippet> preloaded) {
         this.shell = shell;
@@ -152,6 +153,7 @@ public final class Session implements AutoCloseable {
                 int pieceStart = locate(entrySource, piece, consumed);
                 List<SnippetEvent> events;
                 stopRequested = false;
+                generation++;
                 running = true;
                 try {
                     events = shell.eval(piece);
@@ -189,28 +191,35 @@ public final class Session implements AutoCloseable {
         }
     }
 
-    /** Interrupts the entry that is running, if any; safe to call from any thread. */
+    /**
+     * Interrupts the entry that is running, if any; safe to call from any thread. A stop that
+     * arrives while the entry is still being compiled is repeated until its code runs and stops.
+     */
     public void stop() {
         if (!running) return;
+        long gen = generation;
         stopRequested = true;
-        // JShell.stop() only stops code that is executing; a stop that arrives while the entry is
-        // still compiling would be lost. Repeat it until the entry has ended.
-        Thread repeater = new Thread(() -> {
-            while (running && stopRequested) {
-                try {
-                    shell.stop();
-                } catch (RuntimeException ignored) {
-                    // the engine may have finished between the check and the call
-                }
+        stopEngine();
+        Thread again = new Thread(() -> {
+            while (running && generation == gen) {
                 try {
                     Thread.sleep(50);
                 } catch (InterruptedException e) {
                     return;
                 }
+                if (running && generation == gen) stopEngine();
             }
         }, "ampturn-stop");
-        repeater.setDaemon(true);
-        repeater.start();
+        again.setDaemon(true);
+        again.start();
+    }
+
+    private void stopEngine() {
+        try {
+            shell.stop();
+        } catch (RuntimeException ignored) {
+            // the engine may have finished between the check and the call
+        }
     }
 
     /** True while an entry runs. */

@@ -66,7 +66,10 @@ final class SessionMessages {
                 first = false;
             }
         }
-        return scrub(sb.toString()).replaceAll("\\s+", " ");
+        String text = scrub(sb.toString()).replaceAll("\\s+", " ");
+        // "required/found" already says it; and class names read better without their packages
+        text = text.replace(", reason: actual and formal argument lists differ in length", "");
+        return text.replaceAll("\\b(?:org\\.ampturn(?:\\.[a-z]\\w*)*|java\\.lang|java\\.util)\\.(?=[A-Z])", "");
     }
 
     /** Removes the names of JShell's wrapper classes ({@code REPL.$JShell$16.s} becomes {@code s}). */

@@ -82,7 +82,9 @@ public final class WorksheetCli {
             }
             boolean[] failed = {false};
             Path[] current = {file};
+            java.util.concurrent.atomic.AtomicInteger done = chartsFor(file, null);
             Replay.run(w, file, ev, loader(ev, trusted), s -> {
+                done.incrementAndGet();
                 if (!s.isIn(current[0])) {
                     current[0] = s.file();
                     out.println("// from " + (s.file() == null ? "standard input" : s.file()));
@@ -103,49 +105,66 @@ public final class WorksheetCli {
         List<String> a = new ArrayList<>(args);
         boolean trusted = a.remove("--trust");
         if (a.isEmpty() || a.stream().anyMatch(s -> s.startsWith("--"))) return usage("verify takes one or more worksheet files");
-        int hold = 0, differ = 0, refused = 0, unreadable = 0;
         try (Evaluator ev = evaluators.get()) {
-            for (String name : a) {
-                Path f = Path.of(name);
-                Worksheet w;
-                try {
-                    w = WorksheetFiles.read(f, ev.completeness());
-                } catch (IOException | WorksheetFormatException e) {
-                    err.println("ampturn: " + e.getMessage());
-                    unreadable++;
-                    continue;
-                }
-                try {
-                    if (!trusted && refused(f)) {
-                        refused++;
-                        continue;
-                    }
-                } catch (IOException e) {
-                    out.println(f + ": " + e.getMessage());
-                    unreadable++;
-                    continue;
-                }
-                ev.clear();
-                List<Replay.Step> steps = Replay.run(w, f, ev, loader(ev, trusted), s -> {});
-                List<Mismatch> m = Verifier.compare(f, steps);
-                long own = steps.stream().filter(s -> s.isIn(f)).count();
-                if (m.isEmpty()) {
-                    out.println(f + ": " + own + " entries, all results hold");
-                    hold++;
-                } else {
-                    for (Mismatch x : m) out.println(x);
-                    out.println(f + ": " + m.size() + (m.size() == 1 ? " mismatch" : " mismatches") + " in " + own + " entries");
-                    differ++;
-                }
-                out.flush();
-            }
+            return verifyAll(a, trusted, ev);
+        } catch (IOException e) {
+            err.println("ampturn: " + e.getMessage());
+            return 2;
         }
-        if (a.size() > 1) {
-            out.println("verified " + a.size() + " worksheets: " + hold + " hold, " + differ + " differ"
+    }
+
+    private int verifyAll(List<String> names, boolean trusted, Evaluator ev) throws IOException {
+        int hold = 0, differ = 0, refused = 0, unreadable = 0;
+        for (String name : names) {
+            Path f = Path.of(name);
+            Worksheet w;
+            try {
+                w = WorksheetFiles.read(f, ev.completeness());
+                if (!trusted && refused(f)) {
+                    refused++;
+                    continue;
+                }
+            } catch (IOException | WorksheetFormatException e) {
+                err.println("ampturn: " + e.getMessage());
+                unreadable++;
+                continue;
+            }
+            ev.clear();
+            // charts made while verifying are not kept: the records are what is compared
+            Path scratch = Files.createTempDirectory("ampturn-verify-");
+            java.util.concurrent.atomic.AtomicInteger done = chartsFor(f, scratch);
+            List<Replay.Step> steps;
+            try {
+                steps = Replay.run(w, f, ev, loader(ev, trusted), s -> done.incrementAndGet());
+            } finally {
+                deleteTree(scratch);
+            }
+            List<Mismatch> m = Verifier.compare(f, steps);
+            long own = steps.stream().filter(s -> s.isIn(f)).count();
+            if (m.isEmpty()) {
+                out.println(f + ": " + own + " entries, all results hold");
+                hold++;
+            } else {
+                for (Mismatch x : m) out.println(x);
+                out.println(f + ": " + m.size() + (m.size() == 1 ? " mismatch" : " mismatches") + " in " + own + " entries");
+                differ++;
+            }
+            out.flush();
+        }
+        if (names.size() > 1) {
+            out.println("verified " + names.size() + " worksheets: " + hold + " hold, " + differ + " differ"
                     + (refused > 0 ? ", " + refused + " not trusted" : "") + (unreadable > 0 ? ", " + unreadable + " unreadable" : ""));
         }
         if (unreadable > 0 && hold + differ + refused == 0) return 2;
         return differ + refused + unreadable == 0 ? 0 : 1;
+    }
+
+    private static void deleteTree(Path dir) {
+        try (java.util.stream.Stream<Path> s = Files.walk(dir)) {
+            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) Files.deleteIfExists(p);
+        } catch (IOException ignored) {
+            // a scratch folder under the system's temporary directory
+        }
     }
 
     int export(List<String> args) {
@@ -160,7 +179,8 @@ public final class WorksheetCli {
         try (Evaluator ev = evaluators.get()) {
             Worksheet w = WorksheetFiles.read(f, ev.completeness());
             if (!trusted && refused(f)) return 1;
-            List<Replay.Step> steps = Replay.run(w, f, ev, loader(ev, trusted), s -> {});
+            java.util.concurrent.atomic.AtomicInteger done = chartsFor(f, null);
+            List<Replay.Step> steps = Replay.run(w, f, ev, loader(ev, trusted), s -> done.incrementAndGet());
             HtmlReport.write(w, f, steps, target);
             long failed = steps.stream().filter(s -> s.result().failed()).count();
             out.println("wrote " + target + (failed == 0 ? "" : " (" + failed + " entries failed; their messages are in the report)"));
@@ -169,6 +189,21 @@ public final class WorksheetCli {
             err.println("ampturn: " + e.getMessage());
             return 2;
         }
+    }
+
+    /**
+     * Charts made while {@code w} runs go to {@code <name>.figures/} next to it (or to {@code dir}),
+     * numbered by entry; returns the step counter to advance after each step.
+     */
+    private static java.util.concurrent.atomic.AtomicInteger chartsFor(Path worksheet, Path dir) {
+        java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
+        if (dir == null && worksheet != null) {
+            String n = worksheet.getFileName().toString().replaceFirst("\\.atw$", "");
+            dir = worksheet.toAbsolutePath().getParent().resolve(n + ".figures");
+        }
+        if (dir != null) org.ampturn.chart.Figures.useDirectory(dir);
+        org.ampturn.chart.Figures.useNumbering(() -> done.get() + 1);
+        return done;
     }
 
     private boolean refused(Path f) throws IOException {

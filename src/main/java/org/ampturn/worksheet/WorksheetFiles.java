@@ -70,6 +70,7 @@ public final class WorksheetFiles {
         try {
             Path dir = abs.getParent();
             tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
+            keepPermissions(existed ? abs : null, tmp);
             try (FileChannel ch = FileChannel.open(tmp, StandardOpenOption.WRITE, StandardOpenOption.TRUNCATE_EXISTING)) {
                 OutputStream out = Channels.newOutputStream(ch);
                 writer.write(out, bytes);
@@ -94,6 +95,17 @@ public final class WorksheetFiles {
                     // the temporary file is harmless; the message already says the save failed
                 }
             }
+        }
+    }
+
+    /** The new file gets the old file's permissions, or rw-r--r-- for a new one (a temporary file starts private). */
+    private static void keepPermissions(Path old, Path tmp) {
+        try {
+            java.util.Set<java.nio.file.attribute.PosixFilePermission> p = old != null ? Files.getPosixFilePermissions(old)
+                    : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+            Files.setPosixFilePermissions(tmp, p);
+        } catch (IOException | UnsupportedOperationException ignored) {
+            // not a POSIX file system: the platform's defaults apply
         }
     }
 

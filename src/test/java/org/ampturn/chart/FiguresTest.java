@@ -103,4 +103,25 @@ class FiguresTest {
         e = assertThrows(IllegalArgumentException.class, () -> Plots.plot(new FakeTable().with("a", Dimension.NONE, 1), "b"));
         assertTrue(e.getMessage().contains("no column \"b\"") && e.getMessage().contains("a"), e.getMessage());
     }
+
+    @Test
+    void theFacadeDrawsEachKindToAFile() {
+        var run = org.ampturn.drive.Drive.dc(org.ampturn.Ampturn.V(12))
+                .into(org.ampturn.coil.Coil.lumped(org.ampturn.Ampturn.mH(50), org.ampturn.Ampturn.ohm(10)))
+                .offAt(org.ampturn.Ampturn.ms(20), org.ampturn.drive.Clamp.diode()).simulate(org.ampturn.Ampturn.ms(40));
+        org.ampturn.Ampturn.plot(run);
+        org.ampturn.Ampturn.plot("second", run);
+        org.ampturn.Ampturn.overlay(run, run);
+        var t = org.ampturn.Ampturn.sweep("turns", 100, 400, 4, n -> org.ampturn.Ampturn.mH(n / 1e3));
+        org.ampturn.Ampturn.plot(t, "turns");
+        org.ampturn.Ampturn.plotBH(org.ampturn.material.MagneticMaterial.linear("demo", 1000, org.ampturn.Ampturn.T(1.5)),
+                org.ampturn.Ampturn.T(1));
+        List<String> names = Figures.made().stream().map(Figure::name).toList();
+        assertEquals(List.of("transient", "second", "overlay", "sweep", "B-H"), names);
+        for (Figure f : Figures.made()) {
+            assertEquals(1, f.files().size(), f.toString());
+            assertTrue(Files.isRegularFile(f.files().get(0)), f.toString());
+        }
+        assertTrue(org.ampturn.Ampturn.figures().contains("05-b-h.png"), org.ampturn.Ampturn.figures());
+    }
 }

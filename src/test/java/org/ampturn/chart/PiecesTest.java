@@ -129,4 +129,12 @@ class PiecesTest {
         FigureData.Lines v = Adapt.overlay("switch voltage", List.of(new RlRun(101)));
         assertEquals(Dimension.VOLTAGE, v.panels().get(0).dimension());
     }
+
+    @Test
+    void anUnreachableDisplayIsToldApart() {
+        // nothing listens on display 977 (no socket file, no abstract socket, TCP port 6977 closed)
+        assertFalse(Display.reachable(":977"));
+        assertFalse(Display.reachable("unix:977.0"));
+        assertTrue(Display.reachable("no-colon"), "an unknown form is left to the window system");
+    }
 }

@@ -180,4 +180,14 @@ class RenderTest {
         e = assertThrows(IllegalArgumentException.class, () -> f.save(dir.resolve("a.png").toString(), 10, 500));
         assertTrue(e.getMessage().contains("between 100 and") && e.getMessage().contains("10"), e.getMessage());
     }
+
+    @Test
+    void aFlatCurveGetsAReadableAxis() {
+        FigureData.Lines flat = single(new double[] {0, 1, 2, 3}, new double[] {9, 9, 9, 9});
+        JFreeChart c = Build.chart(flat);
+        ValueAxis y = ((CombinedDomainXYPlot) c.getXYPlot()).getSubplots().get(0).getRangeAxis();
+        Render.image(c, 600, 400); // ranges settle when drawn
+        assertTrue(y.getRange().getLength() >= 0.9 - 1e-9, "span " + y.getRange());
+        assertTrue(y.getRange().contains(9));
+    }
 }

@@ -132,6 +132,23 @@ class MagneticCircuitTest {
         assertEquals(f, p.mmfAt(p.fluxAt(f)), 1e-9 * f);
     }
 
+    /**
+     * A B-H table material of the material package (low-carbon steel, typical values) in a closed
+     * core: Ampère's law gives I_sat = H(B_sat)·l/N exactly (common practice); and with a gap the
+     * solution satisfies H(B)·l + B·lg/μ0 = N·I.
+     */
+    @Test
+    void tableMaterialCore() {
+        MagneticMaterial steel = org.ampturn.material.Materials.LOW_CARBON_STEEL;
+        Core core = Core.of("steel", mm(200), mm2(300), steel);
+        double bsat = steel.saturationFluxDensity().si();
+        assertEquals(steel.fieldAt(bsat) * 0.2 / 150, core.saturation(150).current().si(), 1e-9 * core.saturation(150).current().si());
+        MagneticCircuit c = core.withGap(mm(0.4));
+        double i = 2.0;
+        double b = c.fluxDensities(150, A(i)).part("steel").tesla();
+        assertEquals(150 * i, steel.fieldAt(b) * 0.1996 + b * 0.4e-3 / MU0, 1e-9 * 150 * i);
+    }
+
     @Test
     void badInput() {
         Core core = Core.of("core", mm(100), mm2(100), FERRITE);

@@ -119,6 +119,19 @@ class SolenoidTest {
     }
 
     /**
+     * Grover's series for Rosa's B at large N (Grover 1929, as discussed by Knight, "Rosa's mutual
+     * inductance correction", 2010; coefficients from memory):
+     * B ≈ ln(2π) − 3/2 − ln N/(6N) − 0.33084236/N − 1/(120N³) + 1/(504N⁵).
+     */
+    @ParameterizedTest(name = "N = {0}")
+    @ValueSource(ints = {50, 100, 1000, 20000})
+    void rosaBMatchesGroverSeries(int n) {
+        double series = Math.log(2 * Math.PI) - 1.5 - Math.log(n) / (6.0 * n) - 0.33084236 / n - 1 / (120.0 * n * n * n)
+                + 1 / (504.0 * Math.pow(n, 5));
+        assertEquals(series, Solenoid.rosaB(n), 2e-9);
+    }
+
+    /**
      * Two independent routes to the same round-wire coil: the current sheet less Rosa's correction
      * (Rosa 1906) and the sum of Maxwell's mutual inductances over the turns (Maxwell 1873 §701) with
      * the round-loop self-inductance (Rosa and Grover 1912). They must agree closely.

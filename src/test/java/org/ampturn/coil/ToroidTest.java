@@ -65,6 +65,13 @@ class ToroidTest {
     }
 
     @Test
+    void coreGivenOnlyByPermeabilityHasNoSaturationCheck() {
+        var e = assertThrows(IllegalStateException.class, () -> Toroid.rectangular(10, mm(20), mm(30), mm(10), 100).saturationCurrent());
+        assertTrue(e.getMessage().contains("MagneticMaterial"), e.getMessage());
+        assertTrue(Core.of("air", mm(10), mm2(10), org.ampturn.material.Materials.AIR).withGap(mm(1)).saturation(10).parts().isEmpty());
+    }
+
+    @Test
     void badInput() {
         var e = assertThrows(IllegalArgumentException.class, () -> Toroid.rectangular(10, mm(40), mm(20), mm(10), 1.0));
         assertTrue(e.getMessage().contains("inner diameter (40.00 mm)") && e.getMessage().contains("outer diameter (20.00 mm)"), e.getMessage());

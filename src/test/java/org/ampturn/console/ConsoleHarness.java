@@ -31,13 +31,18 @@ final class ConsoleHarness implements AutoCloseable {
     private volatile Integer exit;
 
     ConsoleHarness(List<SessionExtension> extensions, Path docs) throws IOException {
+        this(extensions, docs, null, null);
+    }
+
+    /** A console with a history file (or null) that opens {@code worksheet} (or null) at the start. */
+    ConsoleHarness(List<SessionExtension> extensions, Path docs, Path history, Path worksheet) throws IOException {
         PipedInputStream in = new PipedInputStream(keys, 1 << 16);
         // a dumb terminal that calls itself "ansi", so that the reader edits and completes as on a
         // real one (JLine's own reader tests do the same)
         terminal = new DumbTerminal("ampturn-test", "ansi", in, screen, StandardCharsets.UTF_8);
         terminal.setSize(new Size(120, 40));
-        console = new Console(terminal, freshSession(), null, extensions, new HelpPages(docs));
-        loop = new Thread(() -> exit = console.loop(null), "console-under-test");
+        console = new Console(terminal, freshSession(), history, extensions, new HelpPages(docs));
+        loop = new Thread(() -> exit = console.loop(worksheet), "console-under-test");
         loop.setDaemon(true);
         loop.start();
     }

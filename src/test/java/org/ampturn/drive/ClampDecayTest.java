@@ -31,7 +31,7 @@ class ClampDecayTest {
         assertEquals(24 + 33, run.peakSwitchVoltage().si(), 1e-6); // switch sees Vs + Vz (common practice)
         assertTrue(run.energy().relativeBalanceError() < 1e-6, run.energy().toString());
         // the zener takes the stored energy less what the winding burns in the decay
-        assertEquals(0.5 * l * i0 * i0, run.energy().clampEnergy().si() + (run.energy().resistiveEnergy().si() - resistiveUntilOff(run)), 1e-6);
+        assertEquals(0.5 * l * i0 * i0, run.energy().clamp().si() + (run.energy().resistive().si() - resistiveUntilOff(run)), 1e-6);
     }
 
     private static double resistiveUntilOff(Transient run) {

@@ -25,8 +25,8 @@ class SaturatingCoreTest {
         // with R = 0 every joule supplied is stored: W = λ·i − co-energy, co-energy in closed form
         double iEnd = run.current().last().si();
         double w = 0.020 * iEnd - core.coEnergyAt(iEnd);
-        assertEquals(w, run.energy().storedEnergy().si(), 1e-9 * w);
-        assertEquals(w, run.energy().suppliedEnergy().si(), 1e-8 * w);
+        assertEquals(w, run.energy().stored().si(), 1e-9 * w);
+        assertEquals(w, run.energy().supplied().si(), 1e-8 * w);
         assertTrue(run.energy().relativeBalanceError() < 1e-8, run.energy().toString());
     }
 
@@ -66,6 +66,6 @@ class SaturatingCoreTest {
         double worst = 0;
         for (int k = 0; k < a.length; k++) worst = Math.max(worst, Math.abs(a[k] - b[k]));
         assertTrue(worst < 1e-6, "worst difference " + worst);
-        assertEquals(exact.energy().clampEnergy().si(), ode.energy().clampEnergy().si(), 1e-8);
+        assertEquals(exact.energy().clamp().si(), ode.energy().clamp().si(), 1e-8);
     }
 }

@@ -81,6 +81,16 @@ class SweepTest {
     }
 
     @Test
+    void longAndFloatEndsKeepTheirType() {
+        Axis<Long> longs = Axis.linear("n", 1L, 9L, 5);
+        assertEquals(List.of(1L, 3L, 5L, 7L, 9L), longs.values());
+        Axis<Float> floats = Axis.linear("x", 0f, 1f, 3);
+        assertEquals(List.of(0f, 0.5f, 1f), floats.values());
+        Axis<Integer> logTurns = Axis.log("turns", 10, 1000, 3);
+        assertEquals(List.of(10, 100, 1000), logTurns.values());
+    }
+
+    @Test
     void logStepsAreGeometric() {
         Table t = sweepLog("f", Hz(10), kHz(100), 5, f -> f);
         assertArrayEquals(new double[] {10, 100, 1000, 1e4, 1e5}, t.values("f"), 1e-9);

@@ -103,6 +103,16 @@ class HtmlReportTest {
         assertFalse(html.contains("<h3>Mains-level voltage</h3>"), "cautions follow the fresh values");
     }
 
+    @Test
+    void fixedSizeSvgGetsAViewBoxSoItScalesInsteadOfBeingCropped() {
+        assertEquals("<svg xmlns='http://www.w3.org/2000/svg' viewBox=\"0 0 1200.0 800.0\" width=\"100%\"><g/></svg>",
+                HtmlReport.scalable("<svg xmlns='http://www.w3.org/2000/svg' width='1200.0' height='800.0'><g/></svg>"));
+        String withBox = "<svg viewBox=\"0 0 10 10\" width=\"10\"><g/></svg>";
+        assertEquals(withBox, HtmlReport.scalable(withBox));
+        // the test drawing above has a viewBox already and is kept as drawn
+        assertTrue(HtmlReport.scalable(SVG).contains("width=\"400\" height=\"120\" viewBox=\"0 0 400 120\""));
+    }
+
     /** Writes the sample report where a person (or a browser) can look at it: target/report-sample.html. */
     @Test
     void writesASampleForTheBrowserCheck() throws Exception {

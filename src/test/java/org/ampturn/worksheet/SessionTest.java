@@ -75,6 +75,15 @@ class SessionTest {
     }
 
     @Test
+    void aWrongArgumentListNamesTypesWithoutTheirPackages() {
+        Outcome o = session.eval("mm(1).times(\"two\", 3)");
+        assertTrue(o.failed());
+        String first = o.lines().get(0);
+        assertTrue(first.startsWith("  ! no suitable method found for times(String,int)"), first);
+        assertFalse(first.contains("org.ampturn.") || first.contains("java.lang."), first);
+    }
+
+    @Test
     void aLibraryExceptionShowsItsMessageOnly() {
         Outcome o = session.eval("mm(1).plus(A(1))");
         assertEquals(Kind.ERROR, o.kind());
@@ -136,12 +145,7 @@ class SessionTest {
         Thread stopper = new Thread(() -> {
             long until = System.nanoTime() + 5_000_000_000L;
             while (!session.isRunning() && System.nanoTime() < until) Thread.onSpinWait();
-            try {
-                Thread.sleep(300);
-            } catch (InterruptedException e) {
-                return;
-            }
-            session.stop();
+            session.stop(); // most likely still compiling: the stop must hold until the loop runs
         });
         stopper.start();
         Outcome o = session.eval("while (true) {}");

@@ -30,6 +30,16 @@ class WorksheetFilesTest {
     }
 
     @Test
+    void saveKeepsTheOldFilesPermissionsAndGivesNewFilesReadableOnes() throws Exception {
+        Path f = dir.resolve("shared.atw");
+        WorksheetFiles.save(Worksheet.titled("t"), f);
+        assertEquals("rw-r--r--", java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(f)));
+        Files.setPosixFilePermissions(f, java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw----"));
+        WorksheetFiles.save(Worksheet.titled("u"), f);
+        assertEquals("rw-rw----", java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(f)));
+    }
+
+    @Test
     void failedWriteLeavesOldFileIntactAndSaysSo() throws Exception {
         Path f = dir.resolve("coil.atw");
         Files.writeString(f, "// ampturn worksheet 1\n\nold\n");
