@@ -215,7 +215,7 @@ final class Adapt {
 
     // ---- B-H curves --------------------------------------------------------------------------
 
-    /** Points on a B-H curve. */
+    /** Points on a B-H curve (about; points that coincide are drawn once). */
     static final int BH_POINTS = 400;
 
     /**
@@ -245,12 +245,19 @@ final class Adapt {
             }
             hMax = Math.max(hMax, 1.25 * Math.abs(hOp));
         }
-        double[] h = new double[BH_POINTS + 1];
-        double[] b = new double[BH_POINTS + 1];
-        for (int i = 0; i <= BH_POINTS; i++) {
-            h[i] = hMax * i / BH_POINTS;
-            b[i] = m.fluxDensityAt(h[i]);
+        // half the points at equal steps of H, half at equal steps of B, so the steep start of a
+        // soft material's curve is drawn as finely as its knee and its flat top
+        int half = BH_POINTS / 2;
+        double bMax = m.fluxDensityAt(hMax);
+        java.util.TreeSet<Double> hs = new java.util.TreeSet<>();
+        for (int i = 0; i <= half; i++) hs.add(hMax * i / half);
+        for (int i = 1; i < half; i++) {
+            double hb = m.fieldAt(bMax * i / half);
+            if (Double.isFinite(hb) && hb > 0 && hb < hMax) hs.add(hb);
         }
+        double[] h = hs.stream().mapToDouble(Double::doubleValue).toArray();
+        double[] b = new double[h.length];
+        for (int i = 0; i < h.length; i++) b[i] = m.fluxDensityAt(h[i]);
         List<Mark> marks = new ArrayList<>();
         marks.add(new Mark("saturation", Double.NaN, bsat, null));
         if (operating != null) marks.add(new Mark("operating point", hOp, bOp, null));
