@@ -49,6 +49,14 @@ public final class Figures {
     /** No printing at all. */
     public static void silence() { quiet = true; }
 
+    /**
+     * Whether a figure shown in a window is also written to a file (so a worksheet records it for
+     * its report); off unless turned on. Without a window the file is always written.
+     */
+    public static void useFilesWithWindows(boolean on) { filesWithWindows = on; }
+
+    private static volatile boolean filesWithWindows;
+
     /** Turns windows on or off (batch runs write files even when a display exists). */
     public static void useWindows(boolean on) { windows = on; }
 
@@ -128,14 +136,14 @@ public final class Figures {
                         : "no window (" + e.getMessage() + "); writing figure files instead");
             }
         }
-        if (!shown) {
+        if (!shown || filesWithWindows) {
             int n = numbering != null ? numbering.getAsInt() : MADE.size();
             for (String ext : formats) {
                 Path file = directory.resolve(String.format(Locale.ROOT, "%02d-%s.%s", n, slug(f.name()), ext));
                 f.save(file, Figure.DEFAULT_WIDTH, Figure.DEFAULT_HEIGHT);
             }
             print("figure " + f.name() + " → " + String.join(", ", f.files().stream().map(Path::toString).toList()));
-            print(f.preview());
+            if (!shown) print(f.preview());
         }
         return f;
     }

@@ -1,26 +1,46 @@
 package org.ampturn.coil;
 
 /**
- * A coil as a lattice of coaxial circular filaments: {@code layers} radii, each carrying
- * {@code perLayer} turns at a fixed axial pitch, centred on z = 0. Inductances are sums of Maxwell's
- * mutual inductance between filaments, with the self-inductance of a round-wire loop on the diagonal.
+ * A coil as a lattice of coaxial circular filaments: layers at given radii, layer i carrying
+ * {@code counts[i]} turns at a common axial pitch from {@code starts[i]} on. Inductances are sums of
+ * Maxwell's mutual inductance between filaments, with the self-inductance of a round-wire loop on
+ * the diagonal.
  *
  * <p>Because the mutual between two filaments depends only on the two radii and the axial offset,
- * the double sum over turns of a layer pair collapses to one sum over offsets k with multiplicity
- * (T − k): a coil of L layers × T turns costs L(L+1)/2 · T evaluations of Maxwell's formula instead
- * of (L·T)².
+ * the double sum over the turns of two layers collapses to one sum over offsets with their
+ * multiplicity (T − k for equal layers): a coil of L layers × T turns costs about L(L+1)/2 · T
+ * evaluations of Maxwell's formula instead of (L·T)².
  */
 final class Filaments {
     final double[] radii;
-    final int perLayer;
+    final int[] counts;
+    final double[] starts;
     final double pitch;
     final double wireRadius;
 
+    /** Equal layers of {@code perLayer} turns centred on z = 0. */
     Filaments(double[] radii, int perLayer, double pitch, double wireRadius) {
+        this(radii, fill(radii.length, perLayer), fillStarts(radii.length, -0.5 * (perLayer - 1) * pitch), pitch, wireRadius);
+    }
+
+    Filaments(double[] radii, int[] counts, double[] starts, double pitch, double wireRadius) {
         this.radii = radii;
-        this.perLayer = perLayer;
+        this.counts = counts;
+        this.starts = starts;
         this.pitch = pitch;
         this.wireRadius = wireRadius;
+    }
+
+    private static int[] fill(int n, int v) {
+        int[] a = new int[n];
+        java.util.Arrays.fill(a, v);
+        return a;
+    }
+
+    private static double[] fillStarts(int n, double v) {
+        double[] a = new double[n];
+        java.util.Arrays.fill(a, v);
+        return a;
     }
 
     static Filaments of(AirCoil c) {
@@ -39,52 +59,66 @@ final class Filaments {
 
     /** Self-inductance of the whole lattice (H). */
     double selfInductance() {
-        int nl = radii.length, t = perLayer;
+        int nl = radii.length;
         double sum = 0;
         for (int i = 0; i < nl; i++) {
             double ri = radii[i];
+            int t = counts[i];
             double s = t * loopSelf(ri, wireRadius);
             for (int k = 1; k < t; k++) s += 2.0 * (t - k) * Elliptic.maxwell(ri, ri, k * pitch);
             sum += s;
             for (int j = i + 1; j < nl; j++) {
                 double rj = radii[j];
-                double m = t * Elliptic.maxwell(ri, rj, 0);
-                for (int k = 1; k < t; k++) m += 2.0 * (t - k) * Elliptic.maxwell(ri, rj, k * pitch);
+                double m;
+                if (counts[j] == t && starts[j] == starts[i]) {
+                    // equal, aligned layers: offsets ±k occur equally often
+                    m = t * Elliptic.maxwell(ri, rj, 0);
+                    for (int k = 1; k < t; k++) m += 2.0 * (t - k) * Elliptic.maxwell(ri, rj, k * pitch);
+                } else {
+                    m = layerPair(ri, t, starts[i], rj, counts[j], starts[j], pitch, null);
+                }
                 sum += 2 * m;
             }
         }
         return sum;
     }
 
-    /** Mutual inductance (H) with another lattice whose centre lies {@code distance} (m) further along the axis. */
+    /** Mutual inductance (H) with another lattice displaced by {@code distance} (m) along the axis. */
     double mutual(Filaments o, double distance) {
-        int ta = perLayer, tb = o.perLayer;
-        double za0 = -0.5 * (ta - 1) * pitch;
-        double zb0 = distance - 0.5 * (tb - 1) * o.pitch;
-        double sum = 0;
         boolean samePitch = Math.abs(pitch - o.pitch) <= 1e-12 * Math.max(pitch, o.pitch);
-        for (double ra : radii) {
-            for (double rb : o.radii) {
+        double sum = 0;
+        for (int i = 0; i < radii.length; i++) {
+            for (int j = 0; j < o.radii.length; j++) {
                 if (samePitch) {
-                    // offset of turn ib of b from turn ia of a: zb0 - za0 + (ib - ia) * pitch; m = ib - ia
-                    for (int m = -(ta - 1); m <= tb - 1; m++) {
-                        int count = Math.min(ta - 1, tb - 1 - m) - Math.max(0, -m) + 1;
-                        if (count <= 0) continue;
-                        double dz = zb0 - za0 + m * pitch;
-                        checkApart(ra, rb, dz, o);
-                        sum += count * Elliptic.maxwell(ra, rb, dz);
-                    }
+                    sum += layerPair(radii[i], counts[i], starts[i], o.radii[j], o.counts[j], distance + o.starts[j], pitch, o);
                 } else {
-                    for (int ia = 0; ia < ta; ia++) {
-                        double za = za0 + ia * pitch;
-                        for (int ib = 0; ib < tb; ib++) {
-                            double dz = zb0 + ib * o.pitch - za;
-                            checkApart(ra, rb, dz, o);
-                            sum += Elliptic.maxwell(ra, rb, dz);
+                    for (int ia = 0; ia < counts[i]; ia++) {
+                        double za = starts[i] + ia * pitch;
+                        for (int ib = 0; ib < o.counts[j]; ib++) {
+                            double dz = distance + o.starts[j] + ib * o.pitch - za;
+                            checkApart(radii[i], o.radii[j], dz, o);
+                            sum += Elliptic.maxwell(radii[i], o.radii[j], dz);
                         }
                     }
                 }
             }
+        }
+        return sum;
+    }
+
+    /**
+     * Σ over the turns of two layers (ta turns from za, tb turns from zb, same pitch) of Maxwell's
+     * mutual, grouped by the index offset m = ib − ia, which occurs (overlap of the index ranges) times.
+     * With {@code other} given, turns closer than the two wires allow are refused.
+     */
+    private double layerPair(double ra, int ta, double za, double rb, int tb, double zb, double p, Filaments other) {
+        double sum = 0;
+        for (int m = -(ta - 1); m <= tb - 1; m++) {
+            int count = Math.min(ta - 1, tb - 1 - m) - Math.max(0, -m) + 1;
+            if (count <= 0) continue;
+            double dz = zb - za + m * p;
+            if (other != null) checkApart(ra, rb, dz, other);
+            sum += count * Elliptic.maxwell(ra, rb, dz);
         }
         return sum;
     }

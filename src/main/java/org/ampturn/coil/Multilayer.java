@@ -3,6 +3,7 @@ package org.ampturn.coil;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
 import org.ampturn.units.Require;
+import org.ampturn.wire.Winding;
 
 /**
  * A multilayer air-cored coil of rectangular winding section: {@code layers} layers of
@@ -31,14 +32,37 @@ public final class Multilayer implements AirCoil {
     private final double outer;
     private final double length;
     private final double wire;
+    private final Winding winding; // when built from a winding: its own turn positions
 
     private Multilayer(int perLayer, int layers, double inner, double outer, double length, double wire) {
+        this(perLayer, layers, inner, outer, length, wire, null);
+    }
+
+    private Multilayer(int perLayer, int layers, double inner, double outer, double length, double wire, Winding winding) {
         this.perLayer = perLayer;
         this.layers = layers;
         this.inner = inner;
         this.outer = outer;
         this.length = length;
         this.wire = wire;
+        this.winding = winding;
+    }
+
+    /**
+     * The air-cored coil of a {@link Winding} on a round bobbin: the turns where the winding lays
+     * them (its packing, a partly filled last layer), the wire's bare diameter for the loop
+     * self-inductance, and for Wheeler's formula the winding's mean diameter, length and build.
+     */
+    public static Multilayer of(Winding winding) {
+        if (winding == null) throw new IllegalArgumentException("winding is missing (null)");
+        if (!winding.bobbin().isRound()) {
+            throw new IllegalArgumentException("the winding's bobbin is rectangular (" + winding.bobbin()
+                    + "); an air coil of coaxial circles needs a round bobbin");
+        }
+        double id = winding.bobbin().innerDiameter().si();
+        double od = winding.outerDiameter().si();
+        return new Multilayer(winding.turnsPerLayer(), winding.layers(), id, od, winding.windingLength().si(),
+                winding.wire().bareDiameter().si(), winding);
     }
 
     /**
@@ -76,6 +100,7 @@ public final class Multilayer implements AirCoil {
 
     /** The same coil with round wire of this diameter (at most the smaller pitch). */
     public Multilayer withWire(Quantity wireDiameter) {
+        if (winding != null) throw new IllegalStateException("this coil takes its wire from its winding; change the winding's wire instead");
         double w = Require.positive("wire diameter", wireDiameter, Dimension.LENGTH);
         double pitch = Math.min(length / perLayer, (outer - inner) / 2 / layers);
         if (w > pitch * (1 + 1e-9)) {
@@ -85,7 +110,7 @@ public final class Multilayer implements AirCoil {
         return new Multilayer(perLayer, layers, inner, outer, length, w);
     }
 
-    @Override public int turns() { return perLayer * layers; }
+    @Override public int turns() { return winding != null ? winding.turns() : perLayer * layers; }
     public int turnsPerLayer() { return perLayer; }
     public int layers() { return layers; }
     public Quantity innerDiameter() { return Quantity.of(inner, Dimension.LENGTH); }
@@ -134,10 +159,27 @@ public final class Multilayer implements AirCoil {
     }
 
     Filaments filaments() {
+        if (winding != null) return windingFilaments();
         double c = (outer - inner) / 2;
         double[] r = new double[layers];
         for (int j = 0; j < layers; j++) r[j] = inner / 2 + (j + 0.5) * c / layers;
         return new Filaments(r, perLayer, length / perLayer, wire / 2);
+    }
+
+    /** Layers of the winding's lattice: radius, count and first axial position of each. */
+    private Filaments windingFilaments() {
+        double[][] rz = winding.turnCentres();
+        double[] r = rz[0], z = rz[1];
+        int[] counts = winding.turnsInLayers();
+        double[] radii = new double[counts.length], starts = new double[counts.length];
+        int t = 0;
+        for (int i = 0; i < counts.length; i++) {
+            radii[i] = r[t];
+            starts[i] = z[t];
+            t += counts[i];
+        }
+        double pitch = winding.wire().overallDiameter().si();
+        return new Filaments(radii, counts, starts, pitch, wire / 2);
     }
 
     // ---- kernels ----------------------------------------------------------------------------
@@ -155,6 +197,10 @@ public final class Multilayer implements AirCoil {
 
     @Override
     public String toString() {
+        if (winding != null) {
+            return "multilayer coil of " + winding.turns() + " turns in " + layers + " layers (" + winding.packing() + "), " + innerDiameter() + " to "
+                    + outerDiameter() + " diameter, " + length() + " long";
+        }
         return "multilayer coil, " + layers + " layers × " + perLayer + " turns, " + innerDiameter() + " to " + outerDiameter()
                 + " diameter, " + length() + " long" + (isBrooks() ? " (Brooks proportions)" : "");
     }

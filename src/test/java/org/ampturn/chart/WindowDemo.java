@@ -96,6 +96,15 @@ public final class WindowDemo {
             }
         }
         if (js != null && !Boolean.getBoolean("demo.keepshell")) js.close();
+        // a worksheet can ask for files as well as windows, to record them for its report
+        Figures.useDirectory(Files.createTempDirectory("demo-files"));
+        Figures.useFilesWithWindows(true);
+        Figure again = Plots.plot(sweep, "turns");
+        Figures.useFilesWithWindows(false);
+        waitForWindows(4);
+        check(again.files().size() == 1 && Files.isRegularFile(again.files().get(0)) && Windows.open().size() == 4,
+                "a window and a file when asked: " + again.files());
+
         tile();
         java.awt.Robot robot = new java.awt.Robot();
         long start = System.nanoTime();

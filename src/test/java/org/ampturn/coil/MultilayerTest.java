@@ -63,6 +63,34 @@ class MultilayerTest {
         assertThrows(IllegalArgumentException.class, () -> d.row("Brooks"));
     }
 
+    /**
+     * A layer-wound Winding that fills its bobbin exactly lays its turns on the same lattice as
+     * Multilayer.of: the two filament sums must agree to rounding. A partly filled last layer and an
+     * orthocyclic winding (nested layers) are taken as the winding lays them.
+     */
+    @Test
+    void fromAWinding() {
+        var wire = org.ampturn.wire.Wire.awg(26);
+        double d = wire.overallDiameter().si();
+        int perLayer = 40, layers = 6;
+        var bobbin = org.ampturn.wire.Bobbin.of(m(perLayer * d * (1 + 1e-12)), mm(20), m(layers * d * 1.01));
+        var w = org.ampturn.wire.Winding.of(wire, perLayer * layers, bobbin, org.ampturn.wire.Packing.LAYERED);
+        assertEquals(perLayer, w.turnsPerLayer());
+        assertEquals(layers, w.layers());
+        Multilayer fromWinding = Multilayer.of(w);
+        Multilayer lattice = Multilayer.of(perLayer, layers, mm(20), m(0.02 + 2 * layers * d), m(perLayer * d)).withWire(wire.bareDiameter());
+        assertEquals(lattice.inductance().si(), fromWinding.inductance().si(), 1e-9 * lattice.inductance().si());
+        assertEquals(240, fromWinding.turns());
+        // a partly filled last layer is allowed
+        Multilayer partial = Multilayer.of(w.withTurns(perLayer * layers - 15));
+        assertTrue(partial.inductance().si() < fromWinding.inductance().si());
+        assertEquals(225, partial.turns());
+        var ortho = org.ampturn.wire.Winding.of(wire, perLayer * layers - 15, org.ampturn.wire.Bobbin.of(m(perLayer * d + d), mm(20), m(layers * d * 1.01)),
+                org.ampturn.wire.Packing.ORTHOCYCLIC);
+        assertTrue(Multilayer.of(ortho).inductance().si() > 0);
+        assertThrows(IllegalStateException.class, () -> fromWinding.withWire(mm(0.1)));
+    }
+
     @Test
     void badInput() {
         var e = assertThrows(IllegalArgumentException.class, () -> Multilayer.of(10, 2, mm(20), mm(20), mm(10)));
