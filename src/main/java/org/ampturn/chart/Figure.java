@@ -73,7 +73,9 @@ public final class Figure {
     @Override
     public String toString() {
         StringBuilder sb = new StringBuilder("figure ").append(name).append(": ").append(describe(data));
-        if (!files.isEmpty()) sb.append(" → ").append(files.get(files.size() - 1));
+        // the file's name only: a worksheet records this text, and the folder differs between the
+        // console, a batch run and verify (the worksheet's //= figure: lines hold the path)
+        if (!files.isEmpty()) sb.append(" → ").append(files.get(files.size() - 1).getFileName());
         return sb.toString();
     }
 

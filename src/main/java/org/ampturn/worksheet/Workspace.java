@@ -33,6 +33,7 @@ public final class Workspace implements Closeable {
     private Path file;
     private boolean dirty;
     private int replaying;
+    private int replayDone;
     private final List<String> journalTrouble = new ArrayList<>();
 
     private Workspace(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust, Journal journal, Path journalDir) {
@@ -92,7 +93,9 @@ public final class Workspace implements Closeable {
 
     /** The number the next entry will get (1 for the first). */
     public int nextEntryNumber() {
-        return sheet.entries().size() + 1;
+        // while a replay runs, the entry being run; as the batch verbs count, so that a chart
+        // gets the same file name in the console, in run, in verify and in export
+        return replaying > 0 ? replayDone + 1 : sheet.entries().size() + 1;
     }
 
     /** The evaluator's completeness analysis, for gathering typed lines into an entry. */
@@ -260,7 +263,7 @@ public final class Workspace implements Closeable {
             while (k < blocks.size() && !(blocks.get(k) instanceof Block.Entry)) k++;
             if (k >= blocks.size()) break;
             Block.Entry old = (Block.Entry) blocks.get(k);
-            Block.Entry now = old.withRecord(s.result().records(), s.result().figures());
+            Block.Entry now = old.withRecord(s.result().records(), relativeFigures(s.result().figures()));
             if (!now.equals(old)) dirty = true;
             blocks.set(k++, now);
         }
@@ -343,10 +346,13 @@ public final class Workspace implements Closeable {
 
     /** Clears the session and runs {@code w}'s entries, without recording them again. */
     private List<Replay.Step> replay(Worksheet w, Path f, Confirm confirm, Consumer<Replay.Step> onStep) {
-        replaying++;
+        if (replaying++ == 0) replayDone = 0;
         try {
             evaluator.clear();
-            return Replay.run(w, f, evaluator, loader(confirm), onStep);
+            return Replay.run(w, f, evaluator, loader(confirm), st -> {
+                replayDone++;
+                onStep.accept(st);
+            });
         } finally {
             replaying--;
         }
