@@ -177,7 +177,7 @@ public final class Solenoid implements AirCoil {
         // two independent divisions, which the processor overlaps
         double u = a / l;
         double t2 = a * a / (a * (2.3 * a + 1.6 * l) + 0.44 * l * l);
-        return Elliptic.MU0 * turns * turns * a * (Math.log(1 + Math.PI * u) + t2);
+        return Elliptic.MU0 * turns * turns * a * (LogKernel.log(1 + Math.PI * u) + t2);
     }
 
     /** Rosa's correction μ0·a·N·(A + B) in H. */
