@@ -56,6 +56,7 @@ public final class Figure {
         Display.settle();
         Render.write(Build.chart(data), path, width, height);
         if (!files.contains(path)) files.add(path);
+        Figures.written(path);
         return this;
     }
 

@@ -111,6 +111,18 @@ public final class Figures {
         return sb.toString();
     }
 
+    /** Every figure file written in this JVM, in order, one item per write (never forgotten). */
+    private static final List<Path> WRITTEN = new CopyOnWriteArrayList<>();
+
+    static void written(Path file) { WRITTEN.add(file.toAbsolutePath()); }
+
+    /**
+     * The log of figure files written so far, one item per write, oldest first. It only grows, so
+     * the files an entry wrote are the items added while it ran, even when it rewrote a file that an
+     * earlier entry had written.
+     */
+    public static List<Path> written() { return List.copyOf(WRITTEN); }
+
     /** Forgets the figures made (a fresh session); windows stay open. */
     public static void clear() { MADE.clear(); }
 

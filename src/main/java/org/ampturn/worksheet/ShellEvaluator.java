@@ -52,16 +52,18 @@ public final class ShellEvaluator implements Evaluator {
 
     /** An outcome as an evaluation, with the chart files that appeared between {@code before} and {@code after}. */
     static Evaluation evaluation(Outcome o, List<Path> before, List<Path> after) {
+        // before and after are snapshots of an append-only log of writes: the entry wrote the tail
+        List<Path> fresh = after.size() >= before.size() && after.subList(0, before.size()).equals(before)
+                ? after.subList(before.size(), after.size())
+                : after.stream().filter(p -> !before.contains(p)).toList();
         List<String> figs = new ArrayList<>();
-        for (Path p : after) if (!before.contains(p)) figs.add(p.toString());
+        for (Path p : fresh) if (!figs.contains(p.toString())) figs.add(p.toString());
         return new Evaluation(o.lines(), figs, o.failed());
     }
 
     /** Every chart file written so far in this JVM (the chart layer's registry). */
     public static List<Path> chartFiles() {
-        List<Path> out = new ArrayList<>();
-        for (org.ampturn.chart.Figure f : org.ampturn.chart.Figures.made()) out.addAll(f.files());
-        return out;
+        return org.ampturn.chart.Figures.written();
     }
 
     @Override

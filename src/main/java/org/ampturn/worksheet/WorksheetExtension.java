@@ -19,7 +19,7 @@ import org.ampturn.chart.Figures;
  */
 public final class WorksheetExtension implements SessionExtension {
     private Workspace ws;
-    private List<Path> figuresSeen = List.of();
+    private List<Path> figuresSeen = ShellEvaluator.chartFiles();
 
     @Override
     public OptionalInt verb(String verb, List<String> args, PrintStream out, PrintStream err) {
