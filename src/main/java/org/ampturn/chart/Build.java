@@ -147,7 +147,7 @@ final class Build {
                 }
             }
             if (m.isVertical()) {
-                String text = m.label() + " = " + Quantity.of(m.x(), d.xDimension());
+                String text = m.label() + " = " + shown(m.x(), d.xDimension(), xu);
                 boolean everyPanel = m.trace() == null;
                 for (int i = 0; i < plots.size(); i++) {
                     if (!everyPanel && i != home) continue;
@@ -161,7 +161,7 @@ final class Build {
                 }
             } else if (m.isHorizontal()) {
                 ValueMarker vm = marker(yu[home].toDisplay(m.y()), Style.MARK, Style.MARK_LINE);
-                vm.setLabel(m.label() + " " + Quantity.of(m.y(), panels.get(home).dimension()));
+                vm.setLabel(m.label() + " " + shown(m.y(), panels.get(home).dimension(), yu[home]));
                 vm.setLabelAnchor(RectangleAnchor.TOP_LEFT);
                 vm.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
                 plots.get(home).addRangeMarker(vm);
@@ -169,7 +169,7 @@ final class Build {
                 Panel p = panels.get(home);
                 double x = xu.toDisplay(m.x());
                 double y = yu[home].toDisplay(m.y());
-                String text = m.label() + " " + Quantity.of(m.y(), p.dimension()) + " at " + Quantity.of(m.x(), d.xDimension());
+                String text = m.label() + " " + shown(m.y(), p.dimension(), yu[home]) + " at " + shown(m.x(), d.xDimension(), xu);
                 double angle = pointerAngle(p, m);
                 XYPointerAnnotation a = new XYPointerAnnotation(text, x, y, angle);
                 a.setFont(Style.NOTE);
@@ -416,5 +416,11 @@ final class Build {
 
     static Font font(int size) {
         return new Font(Style.FACE, Font.PLAIN, size);
+    }
+
+    /** A value for a label: engineering notation, but a zero in the axis's own unit (0 mm, not 0 m). */
+    private static String shown(double si, org.ampturn.units.Dimension d, AxisUnit axis) {
+        if (si == 0 && !axis.symbol().isEmpty()) return "0 " + axis.symbol();
+        return Quantity.of(si, d).toString();
     }
 }
