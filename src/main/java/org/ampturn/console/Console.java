@@ -146,6 +146,9 @@ public final class Console implements SessionConsole {
     public int loop(Path worksheet) {
         println(new AttributedStringBuilder().styled(AttributedStyle.BOLD, "ampturn " + Ampturn.version())
                 .append(": Java entries over the coil library; #help for help, #quit to leave").toAttributedString());
+        // long sweeps and Monte Carlo runs draw their bar on the terminal, not in the entry's output
+        org.ampturn.study.Progress.install(org.ampturn.study.Progress.bar(
+                new java.io.PrintStream(terminal.output(), true, java.nio.charset.StandardCharsets.UTF_8)));
         if (worksheet != null) openAtStart(worksheet);
         while (!quit) {
             String line;

@@ -41,7 +41,7 @@ public record Evaluation(List<String> lines, List<String> figures, boolean faile
 
     /** A recorded line as the console would display it (the inverse of {@link #toRecord} for results). */
     public static String toDisplay(String record) {
-        if (record.startsWith("! ") || record.startsWith(" ") || record.matches("^[\\p{L}_$][\\p{L}\\p{N}_$]* = .*")) return "  " + record;
+        if (record.startsWith("! ") || record.startsWith("| ") || record.equals("|") || record.startsWith(" ") || record.matches("^[\\p{L}_$][\\p{L}\\p{N}_$]* = .*")) return "  " + record;
         return "  = " + record;
     }
 }

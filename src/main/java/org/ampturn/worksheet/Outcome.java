@@ -34,7 +34,9 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
         /** a compile error, an exception, an interrupt or a blocked call */
         ERROR,
         /** a statement or a void call: nothing to show */
-        NOTHING
+        NOTHING,
+        /** a line the entry printed on standard output: {@code | text} */
+        PRINTED
     }
 
     /**
@@ -72,6 +74,7 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
             switch (r.kind()) {
                 case VALUE: head = "  = "; break;
                 case ERROR: head = "  ! "; break;
+                case PRINTED: head = "  | "; break;
                 default: head = "  ";
             }
             String[] parts = r.text().split("\n", -1);
@@ -90,7 +93,7 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
     public List<String> recorded() {
         List<String> out = new ArrayList<>();
         for (Result r : results) {
-            out.add(r.kind() == Kind.ERROR ? "! " + r.text() : r.text());
+            out.add(r.kind() == Kind.ERROR ? "! " + r.text() : r.kind() == Kind.PRINTED ? "| " + r.text() : r.text());
         }
         return out;
     }

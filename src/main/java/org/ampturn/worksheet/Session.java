@@ -155,6 +155,7 @@ public final class Session implements AutoCloseable {
                 stopRequested = false;
                 generation++;
                 running = true;
+                SessionPrinted printed = SessionPrinted.begin();
                 try {
                     events = shell.eval(piece);
                 } catch (IllegalStateException e) {
@@ -163,6 +164,7 @@ public final class Session implements AutoCloseable {
                     break;
                 } finally {
                     running = false;
+                    for (String line : printed.end()) results.add(Result.of(Kind.PRINTED, line));
                 }
                 if (stopRequested) {
                     interrupted = true;
@@ -411,14 +413,14 @@ public final class Session implements AutoCloseable {
             if (e.status() == Snippet.Status.RECOVERABLE_NOT_DEFINED) {
                 return Result.of(Kind.ERROR, v.name() + " cannot be used until " + unresolved + " is defined");
             }
-            String value = e.value() == null ? "" : e.value();
+            String value = shown(e.value(), v.typeName());
             if (v.subKind() == Snippet.SubKind.TEMP_VAR_EXPRESSION_SUBKIND) return Result.of(Kind.VALUE, value);
             return Result.of(Kind.DECLARATION, v.name() + " = " + value);
         }
         if (sn instanceof ExpressionSnippet) {
             ExpressionSnippet x = (ExpressionSnippet) sn;
             if ("void".equals(x.typeName())) return null;
-            return Result.of(Kind.VALUE, e.value() == null ? "" : e.value());
+            return Result.of(Kind.VALUE, shown(e.value(), x.typeName()));
         }
         if (sn instanceof MethodSnippet) {
             MethodSnippet m = (MethodSnippet) sn;
@@ -494,4 +496,23 @@ public final class Session implements AutoCloseable {
         return Optional.empty();
     }
 
+
+    /**
+     * A value as shown: a {@code double} or {@code float} with the display digits of quantities
+     * ({@code 590.5}, not {@code 590.4999999999236}), so a worksheet records what the engineer
+     * reads and verify compares it to those digits; anything else as JShell gives it.
+     */
+    static String shown(String value, String typeName) {
+        if (value == null) return "";
+        switch (typeName) {
+            case "double": case "float": case "Double": case "Float":
+                try {
+                    return org.ampturn.units.Quantity.number(Double.parseDouble(value)).toString();
+                } catch (NumberFormatException e) {
+                    return value;
+                }
+            default:
+                return value;
+        }
+    }
 }

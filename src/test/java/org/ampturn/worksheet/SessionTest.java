@@ -103,11 +103,30 @@ class SessionTest {
     }
 
     @Test
+    void whatAnEntryPrintsIsPartOfItsOutcomeInOrder() {
+        java.io.PrintStream before = System.out;
+        Outcome o = session.eval("System.out.println(\"L = \" + mH(4.7)); mm(2).times(3)");
+        assertEquals(List.of("  | L = 4.700 mH", "  = 6.000 mm"), o.lines());
+        assertEquals(List.of("| L = 4.700 mH", "6.000 mm"), o.recorded());
+        assertTrue(System.out == before, "standard output is given back after the entry");
+        Outcome loop = session.eval("for (int i = 1; i <= 2; i++) System.out.printf(\"row %d%n\", i);");
+        assertEquals(List.of("  | row 1", "  | row 2"), loop.lines());
+    }
+
+    @Test
+    void doublesShowTheDisplayDigitsOfQuantities() {
+        // common practice: an engineering result shows its significant digits, not binary noise
+        assertEquals(List.of("  = 0.3333"), session.eval("1.0 / 3").lines());
+        assertEquals(List.of("  x = 590.5"), session.eval("double x = 590.4999999999236;").lines());
+        assertEquals(List.of("  = 7"), session.eval("3 + 4").lines());
+    }
+
+    @Test
     void methodsAndTypesAreDefinitions() {
         Outcome m = session.eval("double twice(double x) {\n  return 2 * x;\n}");
         assertEquals(List.of("  defined method twice(double)"), m.lines());
         assertEquals(Kind.DEFINITION, m.kind());
-        assertEquals(List.of("  = 6.0"), session.eval("twice(3)").lines());
+        assertEquals(List.of("  = 6.000"), session.eval("twice(3)").lines());
         assertEquals(List.of("  redefined method twice(double)"), session.eval("double twice(double x) { return x + x; }").lines());
         assertEquals(List.of("  defined record Spec"), session.eval("record Spec(int turns) {}").lines());
     }
