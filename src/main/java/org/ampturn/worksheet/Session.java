@@ -306,7 +306,7 @@ public final class Session implements AutoCloseable {
                 Completeness c = completeness(buf.toString());
                 if (c == Completeness.EMPTY) {
                     buf.setLength(0);
-                } else if (c.isComplete()) {
+                } else if (c.isComplete() && !WorksheetFormat.continuedBelow(lines, i)) {
                     out.add(new Entry(start, buf.toString()));
                     buf.setLength(0);
                 }

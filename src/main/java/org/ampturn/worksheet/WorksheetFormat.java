@@ -90,7 +90,7 @@ public final class WorksheetFormat {
             String line = lines[i];
             if (pending != null) {
                 pending.append('\n').append(line);
-                if (completeness.isComplete(pending.toString())) {
+                if (completeness.isComplete(pending.toString()) && !continuedBelow(lines, i)) {
                     addEntry(blocks, starts, pending.toString(), pendingStart);
                     pending = null;
                 }
@@ -126,7 +126,7 @@ public final class WorksheetFormat {
             } else {
                 pending = new StringBuilder(line);
                 pendingStart = i + 1;
-                if (completeness.isComplete(line)) {
+                if (completeness.isComplete(line) && !continuedBelow(lines, i)) {
                     addEntry(blocks, starts, line, pendingStart);
                     pending = null;
                 }
@@ -135,6 +135,16 @@ public final class WorksheetFormat {
         if (pending != null) addEntry(blocks, starts, pending.toString(), pendingStart); // unfinished: the run reports it
         int[] at = starts.stream().mapToInt(Integer::intValue).toArray();
         return new Worksheet(header, blocks, at);
+    }
+
+    /**
+     * True when the line after {@code i} goes on with a method call ({@code .offAt(...)}): a chain
+     * written one call a line is one entry, although its first line is already a whole statement.
+     * No Java statement starts with a dot, so this never joins two entries.
+     */
+    static boolean continuedBelow(String[] lines, int i) {
+        return i + 1 < lines.length && lines[i + 1].stripLeading().startsWith(".")
+                && !lines[i + 1].stripLeading().startsWith("...");
     }
 
     private static void addEntry(List<Block> blocks, List<Integer> starts, String source, int line) {

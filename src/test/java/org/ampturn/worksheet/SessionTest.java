@@ -175,6 +175,13 @@ class SessionTest {
     }
 
     @Test
+    void aChainOnSeveralLinesIsOneEntry() {
+        List<Session.Entry> e = session.entries("var d = mm(10)\n    .times(2)\n    .plus(mm(1));\nd\n");
+        assertEquals(List.of(new Session.Entry(1, "var d = mm(10)\n    .times(2)\n    .plus(mm(1));"), new Session.Entry(4, "d")), e);
+        assertEquals(List.of("  d = 21.00 mm"), session.eval(e.get(0).source()).lines());
+    }
+
+    @Test
     void entriesAreSplitLineByLineAsTyped() {
         String text = "// ampturn worksheet 1\n// title: demo\n\nvar d = mm(10)\n//= d = 10.00 mm\nd.times(2)\n\n"
                 + "double half(double v) {\n  return v / 2;\n}\nint k = 1; for (int i = 0; i < 2; i++) {\n  k++;\n}\n";

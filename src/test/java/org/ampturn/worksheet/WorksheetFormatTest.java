@@ -22,6 +22,19 @@ class WorksheetFormatTest {
     }
 
     @Test
+    void aChainWrittenOneCallALineIsOneEntry() throws Exception {
+        String text = "// ampturn worksheet 1\n// title: chain\n// tool: ampturn 0.1.0\n\n"
+                + "var run = Drive.dc(V(12)).into(coil)\n        .offAt(ms(20), Clamp.diode())\n        .simulate(ms(40));\n"
+                + "//= run = transient\nrun\n";
+        Worksheet w = WorksheetFormat.parse(text);
+        assertEquals(List.of(
+                new Block.Entry("var run = Drive.dc(V(12)).into(coil)\n        .offAt(ms(20), Clamp.diode())\n        .simulate(ms(40));",
+                        List.of("run = transient"), List.of()),
+                new Block.Entry("run", List.of(), List.of())), w.blocks());
+        assertEquals(text, WorksheetFormat.print(w));
+    }
+
+    @Test
     void readsHeaderNotesEntriesResultsAndFigures() throws Exception {
         String text = "// ampturn worksheet 1\n// title: Gate latch coil, 12 V\n// tool: ampturn 0.1.0\n\n"
                 + "// A note.\nvar x = mH(2.103);\n//= x = 2.103 mH\n\nx\n//= 2.103 mH\n//= figure: gate.figures/01.svg\n";
