@@ -136,10 +136,9 @@ public final class Console implements SessionConsole {
         }
     }
 
-    /** The folder for history and per-user files: {@code ~/.ampturn}, or the property {@code ampturn.user}. */
+    /** The folder for history and per-user files, shared with the journal and trust store. */
     static Path userDir() {
-        String p = System.getProperty("ampturn.user");
-        return p != null ? Path.of(p) : Path.of(System.getProperty("user.home"), ".ampturn");
+        return org.ampturn.worksheet.AmpturnHome.dir();
     }
 
     /** Reads and runs entries until {@code #quit}, Ctrl-D or the end of input; returns the exit code. */
