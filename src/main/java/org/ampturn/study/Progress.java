@@ -71,15 +71,20 @@ public interface Progress {
         Objects.requireNonNull(out, "out");
         return new Progress() {
             private boolean drawn;
+            private int width;
 
             @Override
             public void update(Status s) {
                 if (!drawn && s.elapsed().toMillis() < 500) return;
                 drawn = true;
-                out.print("\r" + s.bar(24));
-                if (s.finished()) {
+                String text = s.bar(24);
+                // a shorter line than the last one drawn must blank out the rest of it
+                out.print("\r" + text + " ".repeat(Math.max(0, width - text.length())));
+                width = text.length();
+                if (s.finished() || s.stopped()) {
                     out.println();
                     drawn = false;
+                    width = 0;
                 }
                 out.flush();
             }
