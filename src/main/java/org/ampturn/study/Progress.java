@@ -79,7 +79,8 @@ public interface Progress {
                 drawn = true;
                 String text = s.bar(24);
                 // a shorter line than the last one drawn must blank out the rest of it
-                out.print("\r" + text + " ".repeat(Math.max(0, width - text.length())));
+                String pad = " ".repeat(Math.max(0, width - text.length()));
+                out.print("\r" + text + (pad.isEmpty() ? "" : pad + "\r" + text));
                 width = text.length();
                 if (s.finished() || s.stopped()) {
                     out.println();
