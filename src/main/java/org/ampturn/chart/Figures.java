@@ -46,6 +46,11 @@ public final class Figures {
         quiet = false;
     }
 
+    /** The stream set by {@link #printTo}, or null when notes go to {@code System.out}. */
+    public static PrintStream printingTo() {
+        return out;
+    }
+
     /** No printing at all. */
     public static void silence() { quiet = true; }
 

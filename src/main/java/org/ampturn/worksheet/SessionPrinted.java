@@ -33,7 +33,7 @@ final class SessionPrinted {
             PrintStream real = System.out;
             if (real instanceof Capture) return new SessionPrinted(real, false);
             SessionPrinted p = new SessionPrinted(real, true);
-            org.ampturn.chart.Figures.printTo(real);
+            if (org.ampturn.chart.Figures.printingTo() == null) org.ampturn.chart.Figures.printTo(real);
             System.setOut(new Capture(p.buffer));
             return p;
         }

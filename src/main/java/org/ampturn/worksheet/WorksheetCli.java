@@ -83,17 +83,27 @@ public final class WorksheetCli {
             boolean[] failed = {false};
             Path[] current = {file};
             java.util.concurrent.atomic.AtomicInteger done = chartsFor(file, null);
-            Replay.run(w, file, ev, loader(ev, trusted), s -> {
-                done.incrementAndGet();
-                if (!s.isIn(current[0])) {
-                    current[0] = s.file();
-                    out.println("// from " + (s.file() == null ? "standard input" : s.file()));
-                }
-                out.println(s.entry().source());
-                for (String l : s.result().lines()) out.println(l);
-                out.flush();
-                failed[0] |= s.result().failed();
-            });
+            // the chart layer's notes (file written, preview) go under the entry that made them
+            java.io.ByteArrayOutputStream notes = new java.io.ByteArrayOutputStream();
+            java.io.PrintStream before = org.ampturn.chart.Figures.printingTo();
+            org.ampturn.chart.Figures.printTo(new java.io.PrintStream(notes, true, StandardCharsets.UTF_8));
+            try {
+                Replay.run(w, file, ev, loader(ev, trusted), s -> {
+                    done.incrementAndGet();
+                    if (!s.isIn(current[0])) {
+                        current[0] = s.file();
+                        out.println("// from " + (s.file() == null ? "standard input" : s.file()));
+                    }
+                    out.println(s.entry().source());
+                    out.print(notes.toString(StandardCharsets.UTF_8));
+                    notes.reset();
+                    for (String l : s.result().lines()) out.println(l);
+                    out.flush();
+                    failed[0] |= s.result().failed();
+                });
+            } finally {
+                org.ampturn.chart.Figures.printTo(before);
+            }
             return failed[0] ? 1 : 0;
         } catch (IOException | WorksheetFormatException e) {
             err.println("ampturn: " + e.getMessage());
