@@ -60,6 +60,7 @@ public final class Main {
             case "run":
             case "verify":
             case "export": {
+                org.ampturn.worksheet.Session.prestart();
                 OptionalInt handled = byExtension(verb, rest, out, err);
                 if (handled.isPresent()) return handled.getAsInt();
                 if (verb.equals("run")) return batch(rest, out, err);

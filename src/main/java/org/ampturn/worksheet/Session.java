@@ -79,8 +79,42 @@ public final class Session implements AutoCloseable {
         this.preloaded = preloaded;
     }
 
-    /** Builds a session with the library preloaded; takes about a second on a cold JVM. */
+    private static final java.util.concurrent.atomic.AtomicReference<java.util.concurrent.CompletableFuture<Session>> EARLY =
+            new java.util.concurrent.atomic.AtomicReference<>();
+
+    /**
+     * Begins building a session on a background thread, so that the compiler warms up while the
+     * caller reads its files; the next {@link #start()} takes it. For the batch verbs, which know at
+     * once that they will need a session.
+     */
+    public static void prestart() {
+        java.util.concurrent.CompletableFuture<Session> f = new java.util.concurrent.CompletableFuture<>();
+        if (!EARLY.compareAndSet(null, f)) return;
+        Thread t = new Thread(() -> {
+            try {
+                f.complete(build());
+            } catch (Throwable e) {
+                f.completeExceptionally(e);
+            }
+        }, "ampturn-session-prestart");
+        t.setDaemon(true);
+        t.start();
+    }
+
+    /** A session with the library preloaded (the one {@link #prestart()} began, if any); about a second on a cold JVM. */
     public static Session start() {
+        java.util.concurrent.CompletableFuture<Session> f = EARLY.getAndSet(null);
+        if (f != null) {
+            try {
+                return f.join();
+            } catch (java.util.concurrent.CompletionException e) {
+                // build again below, so the failure shows where it happens
+            }
+        }
+        return build();
+    }
+
+    private static Session build() {
         JShell shell = JShell.builder()
                 .executionEngine(new SessionEngine(), Map.of())
                 .out(System.out)
