@@ -28,8 +28,7 @@ import org.ampturn.units.Require;
  */
 public final class Plunger implements Armature {
     private static final double MU0 = MagneticMaterial.MU0;
-    private static final double ALPHA20 = 0.00393;
-    private static final double T20 = 293.15;
+    private static final double T20 = org.ampturn.material.Conductor.T20;
 
     private final int turns;
     private final double area;
@@ -202,7 +201,7 @@ public final class Plunger implements Armature {
 
     @Override
     public double resistanceOhms() {
-        return r20 * (1 + ALPHA20 * (kelvin - T20));
+        return r20 * org.ampturn.material.Conductor.COPPER.resistanceRatioAt(kelvin);
     }
 
     @Override

@@ -50,6 +50,6 @@ public interface Coil {
     static Coil lumped(Quantity inductance, Quantity resistance) {
         double l = Require.positive("inductance", inductance, Dimension.INDUCTANCE);
         double r = Require.nonNegative("resistance", resistance, Dimension.RESISTANCE);
-        return new LumpedCoil(l, r, LumpedCoil.T20, LumpedCoil.T20);
+        return new LumpedCoil(l, r, org.ampturn.material.Conductor.T20);
     }
 }

@@ -1,23 +1,20 @@
 package org.ampturn.coil;
 
+import org.ampturn.material.Conductor;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
 
 /** A coil of constant inductance whose resistance follows copper's temperature coefficient. */
 final class LumpedCoil implements Coil {
-    static final double T20 = 293.15;
-    /** Copper, IEC 60028: resistivity at 20 °C is 1/58 Ω·mm²/m and alpha_20 = 0.00393 /K. */
-    static final double ALPHA20 = 0.00393;
 
     private final double l;
     private final double r20;
-    private final double refKelvin;
     private final double kelvin;
 
-    LumpedCoil(double l, double r20, double refKelvin, double kelvin) {
+    /** The resistance {@code r20} is at 20 °C and follows copper (IEC 60028) at {@code kelvin}. */
+    LumpedCoil(double l, double r20, double kelvin) {
         this.l = l;
         this.r20 = r20;
-        this.refKelvin = refKelvin;
         this.kelvin = kelvin;
     }
 
@@ -30,20 +27,20 @@ final class LumpedCoil implements Coil {
 
     @Override
     public double resistanceAt(double k) {
-        return r20 * (1 + ALPHA20 * (k - refKelvin));
+        return r20 * Conductor.COPPER.resistanceRatioAt(k);
     }
 
     @Override
     public Coil atTemperature(Quantity t) {
         double k = org.ampturn.units.Require.si("temperature", t, Dimension.TEMPERATURE);
         if (k <= 0) throw new IllegalArgumentException("temperature must be above absolute zero, got " + t);
-        return new LumpedCoil(l, r20, refKelvin, k);
+        return new LumpedCoil(l, r20, k);
     }
 
     @Override
     public String describe() {
         String s = "coil " + inductance() + ", " + resistance();
-        if (kelvin != refKelvin) s += " at " + temperature();
+        if (kelvin != Conductor.T20) s += " at " + temperature();
         return s;
     }
 

@@ -40,7 +40,7 @@ public final class WoundCoil implements Coil {
     public static WoundCoil of(Winding winding, MagneticCircuit circuit) {
         if (winding == null) throw new IllegalArgumentException("winding is missing (null)");
         if (circuit == null) throw new IllegalArgumentException("magnetic circuit is missing (null)");
-        return new WoundCoil(winding.turns(), winding.resistanceAt(LumpedCoil.T20), winding, circuit, LumpedCoil.T20);
+        return new WoundCoil(winding.turns(), winding.resistanceAt(org.ampturn.material.Conductor.T20), winding, circuit, org.ampturn.material.Conductor.T20);
     }
 
     /** The winding, when the coil was made from one. */
@@ -53,7 +53,7 @@ public final class WoundCoil implements Coil {
         Require.positive("turns", turns);
         double r = Require.positive("resistance at 20 °C", resistance20, Dimension.RESISTANCE);
         if (circuit == null) throw new IllegalArgumentException("magnetic circuit is missing (null)");
-        return new WoundCoil(turns, r, null, circuit, LumpedCoil.T20);
+        return new WoundCoil(turns, r, null, circuit, org.ampturn.material.Conductor.T20);
     }
 
     public int turns() { return turns; }
@@ -150,7 +150,7 @@ public final class WoundCoil implements Coil {
     @Override
     public double resistanceAt(double k) {
         if (winding != null) return winding.resistanceAt(k);
-        return r20 * (1 + LumpedCoil.ALPHA20 * (k - LumpedCoil.T20));
+        return r20 * org.ampturn.material.Conductor.COPPER.resistanceRatioAt(k);
     }
 
     /** Stored energy (J) at current i (A): λi − ∫0^i λ di', the integral by Commons Math's iterative Gauss-Legendre quadrature (relative accuracy 1e-11). */
@@ -182,7 +182,7 @@ public final class WoundCoil implements Coil {
     public String describe() {
         String s = "wound coil, " + turns + " turns on " + circuit.name() + ": " + inductance() + (isLinear() ? "" : " (small-signal)") + ", "
                 + resistance();
-        if (kelvin != LumpedCoil.T20) s += " at " + temperature();
+        if (kelvin != org.ampturn.material.Conductor.T20) s += " at " + temperature();
         return s;
     }
 
