@@ -1,6 +1,5 @@
 package org.ampturn.chart;
 
-import java.util.List;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Unit;
 import org.ampturn.units.Units;
@@ -17,29 +16,11 @@ public record AxisUnit(String symbol, double factor) {
 
     /** The unit for data of dimension {@code d} whose largest magnitude is {@code maxAbs} (SI). */
     public static AxisUnit forRange(Dimension d, double maxAbs) {
-        List<Unit> units = Units.displayUnits(d);
-        if (units.isEmpty()) {
-            return new AxisUnit(d.isNone() ? "" : d.baseSymbols(), 1);
-        }
-        Unit chosen = units.get(units.size() - 1);
-        if (!(maxAbs > 0) || !Double.isFinite(maxAbs)) {
-            chosen = base(units);
-        } else {
-            for (Unit u : units) {
-                // a hair below 1 still counts (0.99999 A from rounding reads better as 1.000 A than 1000 mA)
-                if (maxAbs / u.factor() >= 0.9995) {
-                    chosen = u;
-                    break;
-                }
-            }
-        }
+        Unit chosen = Units.unitFor(d, maxAbs);
+        if (chosen == null) return new AxisUnit(d.isNone() ? "" : d.baseSymbols(), 1);
         return new AxisUnit(chosen.symbol(), chosen.factor());
     }
 
-    private static Unit base(List<Unit> units) {
-        for (Unit u : units) if (u.factor() == 1) return u;
-        return units.get(units.size() - 1);
-    }
 
     /** The axis label: {@code current (mA)}, or just the word for a pure number. */
     public String label(String quantity) {

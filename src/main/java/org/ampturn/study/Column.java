@@ -98,19 +98,8 @@ final class Column {
             if (integers && (v != Math.rint(v) || Math.abs(v) > 1e15)) integers = false;
         }
         if (finite == 0) integers = false;
-        List<Unit> units = Units.displayUnits(dimension);
-        if (units.isEmpty()) return new Shown(dimension.isNone() ? "" : dimension.baseSymbols(), 1, 0, integers);
-        Unit chosen = units.get(units.size() - 1);
-        if (max == 0) {
-            for (Unit u : units) if (u.factor() == 1) chosen = u;
-        } else {
-            for (Unit u : units) {
-                if (max / u.factor() >= 0.9995) {
-                    chosen = u;
-                    break;
-                }
-            }
-        }
+        Unit chosen = Units.unitFor(dimension, max);
+        if (chosen == null) return new Shown(dimension.isNone() ? "" : dimension.baseSymbols(), 1, 0, integers);
         return new Shown(chosen.symbol(), chosen.factor(), 0, false);
     }
 

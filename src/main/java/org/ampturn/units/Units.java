@@ -176,6 +176,23 @@ public final class Units {
         return DISPLAY.getOrDefault(d, List.of());
     }
 
+    /**
+     * The display unit for values of dimension {@code d} up to {@code maxAbs} (SI): the largest unit
+     * in which {@code maxAbs} is at least about 1 (0.9995, so a value that rounds to 1 reads 1.000 A
+     * rather than 1000 mA), else the smallest; the SI unit itself for zero, NaN or infinity. Null when
+     * the dimension has no display units of its own. A column of a table and a chart axis use it.
+     */
+    public static Unit unitFor(Dimension d, double maxAbs) {
+        List<Unit> units = displayUnits(d);
+        if (units.isEmpty()) return null;
+        if (!(maxAbs > 0) || !Double.isFinite(maxAbs)) {
+            for (Unit u : units) if (u.factor() == 1) return u;
+            return units.get(units.size() - 1);
+        }
+        for (Unit u : units) if (maxAbs / u.factor() >= 0.9995) return u;
+        return units.get(units.size() - 1);
+    }
+
     /** A symbol with an optional SI prefix, or null. An exact symbol wins over prefix + symbol. */
     static Unit simple(String s) {
         Sym exact = SYMBOLS.get(s);
