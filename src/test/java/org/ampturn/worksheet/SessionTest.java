@@ -34,7 +34,21 @@ class SessionTest {
         assertEquals(Kind.VALUE, o.kind());
         assertFalse(o.failed());
         assertEquals(List.of("9.000 mJ"), o.recorded());
-        assertTrue(session.imports().contains("import org.ampturn.units.*;"), session.imports().toString());
+        assertTrue(session.imports().contains("import static org.ampturn.Ampturn.*;"), session.imports().toString());
+    }
+
+    @Test
+    void aWorksheetClassOfTheSameNameAsALibraryClassWins() {
+        session.eval("record Limit(double max) {}");
+        assertEquals(List.of("  = 2.000"), session.eval("new Limit(2.0).max()").lines());
+    }
+
+    @Test
+    void entriesCompileAgainstTheLibraryAndCommonsMathButNotTheConsolesLibraries() {
+        assertEquals(List.of("  = 3.000"), session.eval("org.apache.commons.math3.util.FastMath.sqrt(9.0)").lines());
+        Outcome o = session.eval("org.jline.reader.LineReader r = null;");
+        assertTrue(o.failed(), o.toString());
+        assertTrue(o.lines().get(0).contains("org.jline.reader"), o.lines().toString());
     }
 
     @Test
@@ -207,6 +221,19 @@ class SessionTest {
     }
 
     @Test
+    void anExpressionsValueIsShownAndNotKeptAsAHiddenVariable() {
+        session.eval("var keep = mm(1);");
+        long before = session.variableCount();
+        for (int i = 2; i < 7; i++) assertEquals(List.of("  = " + i + ".000 mm"), session.eval("keep.times(" + i + ")").lines());
+        assertEquals(before, session.variableCount(), "each expression would otherwise leave a $n variable behind");
+        int entries = session.entryCount();
+        assertTrue(session.eval("keep.times(3)").kept(), "an expression that ran is still a worksheet entry");
+        assertEquals(entries + 1, session.entryCount());
+        assertTrue(session.undoLast(), "undo takes back the expression entry ...");
+        assertEquals(List.of("  = 1.000 mm"), session.eval("keep").lines(), "... and not the declaration before it");
+    }
+
+    @Test
     void namesListVariablesWithTypeAndValue() {
         session.eval("var wireLength = m(12.5);");
         Session.Name n = session.names().stream().filter(x -> x.name().equals("wireLength")).findFirst().orElseThrow();
@@ -221,5 +248,6 @@ class SessionTest {
         assertEquals(0, c.anchor());
         assertTrue(c.candidates().contains("coreArea"), c.toString());
         assertTrue(session.complete("Quanti", 6).candidates().contains("Quantity"));
+        assertTrue(session.complete("Solen", 5).candidates().contains("Solenoid"), "completion offers classes of packages no entry has named yet");
     }
 }
