@@ -33,9 +33,10 @@ public final class Drive {
     final double holdAmps;
     final double band;        // hysteresis band, peak to peak
     final Regulation regulation;
+    final double peakSeconds; // shortest peak phase; NaN: the hold begins when the current reaches peakAmps
 
     private Drive(Scheme scheme, double volts, double sourceOhms, double switchOhms, double frequency, double duty,
-                  double peakAmps, double holdAmps, double band, Regulation regulation) {
+                  double peakAmps, double holdAmps, double band, Regulation regulation, double peakSeconds) {
         this.scheme = scheme;
         this.volts = volts;
         this.sourceOhms = sourceOhms;
@@ -46,12 +47,13 @@ public final class Drive {
         this.holdAmps = holdAmps;
         this.band = band;
         this.regulation = regulation;
+        this.peakSeconds = peakSeconds;
     }
 
     /** A DC supply switched on at t = 0. */
     public static Drive dc(Quantity supply) {
         double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
-        return new Drive(Scheme.DC, v, 0, 0, 0, 1, 0, 0, 0, Regulation.HYSTERETIC);
+        return new Drive(Scheme.DC, v, 0, 0, 0, 1, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN);
     }
 
     /** PWM: the switch is on for {@code duty / frequency} at the start of every period, from t = 0. */
@@ -59,7 +61,7 @@ public final class Drive {
         double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
         double f = Require.positive("PWM frequency", frequency, Dimension.FREQUENCY);
         if (!(duty >= 1e-4 && duty <= 1)) throw new IllegalArgumentException("PWM duty (" + duty + ") must be between 0.0001 and 1");
-        return new Drive(Scheme.PWM, v, 0, 0, f, duty, 0, 0, 0, Regulation.HYSTERETIC);
+        return new Drive(Scheme.PWM, v, 0, 0, f, duty, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN);
     }
 
     /**
@@ -72,19 +74,19 @@ public final class Drive {
         double ip = Require.positive("pull-in current", pullIn, Dimension.CURRENT);
         double ih = Require.positive("hold current", hold, Dimension.CURRENT);
         if (!(ih < ip)) throw new IllegalArgumentException("hold current (" + hold + ") must be below the pull-in current (" + pullIn + ")");
-        return new Drive(Scheme.PEAK_AND_HOLD, v, 0, 0, 0, 1, ip, ih, 0.2 * ih, Regulation.HYSTERETIC);
+        return new Drive(Scheme.PEAK_AND_HOLD, v, 0, 0, 0, 1, ip, ih, 0.2 * ih, Regulation.HYSTERETIC, Double.NaN);
     }
 
     /** The same drive with a source (supply and wiring) resistance. */
     public Drive withSourceResistance(Quantity r) {
         double rs = Require.nonNegative("source resistance", r, Dimension.RESISTANCE);
-        return new Drive(scheme, volts, rs, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation);
+        return new Drive(scheme, volts, rs, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds);
     }
 
     /** The same drive with a switch of the given on-resistance. */
     public Drive withSwitchResistance(Quantity r) {
         double ron = Require.nonNegative("switch on-resistance", r, Dimension.RESISTANCE);
-        return new Drive(scheme, volts, sourceOhms, ron, frequency, duty, peakAmps, holdAmps, band, regulation);
+        return new Drive(scheme, volts, sourceOhms, ron, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds);
     }
 
     /** Peak-and-hold with hysteretic hold regulation: on below hold − band/2, off above hold + band/2. */
@@ -95,7 +97,7 @@ public final class Drive {
             throw new IllegalArgumentException("hysteresis band (" + band + ") must be below twice the hold current ("
                     + Quantity.of(2 * holdAmps, Dimension.CURRENT) + ")");
         }
-        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, b, Regulation.HYSTERETIC);
+        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, b, Regulation.HYSTERETIC, peakSeconds);
     }
 
     /**
@@ -105,7 +107,21 @@ public final class Drive {
     public Drive withHoldPwm(Quantity frequency) {
         requireScheme(Scheme.PEAK_AND_HOLD, "withHoldPwm");
         double f = Require.positive("hold PWM frequency", frequency, Dimension.FREQUENCY);
-        return new Drive(scheme, volts, sourceOhms, switchOhms, f, duty, peakAmps, holdAmps, band, Regulation.PWM);
+        return new Drive(scheme, volts, sourceOhms, switchOhms, f, duty, peakAmps, holdAmps, band, Regulation.PWM, peakSeconds);
+    }
+
+    /**
+     * Peak-and-hold with a peak time, as drivers for valves and injectors have: the supply stays on
+     * for {@code peakTime} from t = 0 with the current limited to the pull-in level, then the hold
+     * begins, whether or not the current got there. The limit works like the hold's regulation:
+     * hysteretic (off at the pull-in current, on again one band below it) or, with
+     * {@link #withHoldPwm}, on at each period start below the pull-in current and off at it.
+     * Without a peak time the hold begins the moment the current reaches the pull-in level.
+     */
+    public Drive withPeakTime(Quantity peakTime) {
+        requireScheme(Scheme.PEAK_AND_HOLD, "withPeakTime");
+        double tp = Require.positive("peak time", peakTime, Dimension.TIME);
+        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, tp);
     }
 
     private void requireScheme(Scheme s, String what) {
@@ -142,7 +158,8 @@ public final class Drive {
             default:
                 s = "peak-and-hold drive " + supply() + ", pull-in " + a(peakAmps) + ", hold " + a(holdAmps)
                         + (regulation == Regulation.PWM ? " by PWM at " + Quantity.of(frequency, Dimension.FREQUENCY)
-                        : " ± " + a(band / 2) + " hysteretic");
+                        : " ± " + a(band / 2) + " hysteretic")
+                        + (Double.isNaN(peakSeconds) ? "" : ", peak time " + Quantity.of(peakSeconds, Dimension.TIME));
         }
         if (sourceOhms > 0) s += ", source " + sourceResistance();
         if (switchOhms > 0) s += ", switch " + switchResistance();

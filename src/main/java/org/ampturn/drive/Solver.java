@@ -55,6 +55,7 @@ final class Solver {
     Mech mech = Mech.OPEN;
     boolean switchOn = true;
     boolean holdPhase;
+    boolean peakLimited; // in a timed peak phase, after the current first reached the pull-in level
     boolean finalOff;
     boolean firstOn = true;
     double offCurrent = Double.NaN;
@@ -131,7 +132,7 @@ final class Solver {
             throw new IllegalArgumentException("clamp voltage (" + volt(v0) + ") of the " + clamp + " must be above the supply ("
                     + volt(vs) + "): it would conduct with the switch open and the coil would never switch off");
         }
-        if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD) {
+        if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && Double.isNaN(drive.peakSeconds)) {
             if (!(drive.peakAmps < finalCurrent)) {
                 throw new IllegalArgumentException("pull-in current (" + amp(drive.peakAmps) + ") is never reached: the steady current is V/R = "
                         + amp(finalCurrent));
@@ -332,8 +333,10 @@ final class Solver {
         double next = tEnd;
         if (!Double.isNaN(offAt) && offAt > t && !finalOff) next = Math.min(next, offAt);
         if (finalOff) return next;
+        if (timedPeak() && drive.peakSeconds > t) next = Math.min(next, drive.peakSeconds);
         double f = drive.frequency;
-        if (drive.scheme == Drive.Scheme.PWM || (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && holdPhase && drive.regulation == Drive.Regulation.PWM)) {
+        if (drive.scheme == Drive.Scheme.PWM || (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && (holdPhase || peakLimited)
+                && drive.regulation == Drive.Regulation.PWM)) {
             double period = 1 / f;
             long k = (long) Math.floor(t * f);
             double eps = 1e-9 * period;
@@ -365,6 +368,7 @@ final class Solver {
             markers.add(new Marker("switch off", tq(t), Quantity.of(offCurrent, Dimension.CURRENT), "current"));
             return;
         }
+        if (timedPeak() && Math.abs(t - drive.peakSeconds) <= 1e-12 * Math.max(tEnd, 1e-300)) beginHold();
         double f = drive.frequency;
         double phase = t * f - Math.floor(t * f + 1e-9);
         boolean periodStart = Math.abs(phase) < 1e-6;
@@ -378,6 +382,31 @@ final class Solver {
         } else if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && holdPhase && drive.regulation == Drive.Regulation.PWM && periodStart) {
             startCycle();
             if (currentNow() < drive.holdAmps) setSwitch(true);
+        } else if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && peakLimited && !holdPhase && drive.regulation == Drive.Regulation.PWM
+                && periodStart) {
+            if (currentNow() < drive.peakAmps) setSwitch(true);
+        }
+    }
+
+    /** True in the peak phase of a peak-and-hold drive with a peak time. */
+    private boolean timedPeak() {
+        return drive.scheme == Drive.Scheme.PEAK_AND_HOLD && !holdPhase && !Double.isNaN(drive.peakSeconds);
+    }
+
+    /** The end of a timed peak phase: the hold's regulation takes over from where the current is. */
+    private void beginHold() {
+        holdPhase = true;
+        double i = currentNow();
+        markers.add(new Marker("hold begins", tq(t), Quantity.of(i, Dimension.CURRENT), "current"));
+        if (Double.isNaN(peakReached)) {
+            notes.add("the current reached " + amp(i) + " in the peak time of " + q(drive.peakSeconds, Dimension.TIME)
+                    + ", not the pull-in level of " + amp(drive.peakAmps));
+        }
+        if (drive.regulation == Drive.Regulation.HYSTERETIC) {
+            setSwitch(i < drive.holdAmps - drive.band / 2 || (switchOn && i < drive.holdAmps + drive.band / 2));
+            startCycle();
+        } else {
+            setSwitch(switchOn && i < drive.holdAmps);
         }
     }
 
@@ -418,6 +447,9 @@ final class Solver {
                 else if (Double.isNaN(t99)) ev.add(new Ev(Ev.Kind.CURRENT, 0.99 * finalCurrent, 1, Ev.Act.REC_99));
             }
         } else {
+            if (ph && peakLimited && !holdPhase && drive.regulation == Drive.Regulation.HYSTERETIC) {
+                ev.add(new Ev(Ev.Kind.CURRENT, drive.peakAmps - drive.band, -1, Ev.Act.PEAK_LOW));
+            }
             if (ph && holdPhase && drive.regulation == Drive.Regulation.HYSTERETIC) {
                 ev.add(new Ev(Ev.Kind.CURRENT, drive.holdAmps - drive.band / 2, -1, Ev.Act.HOLD_LOW));
             }
@@ -448,11 +480,20 @@ final class Solver {
         Quantity iq = Quantity.of(i, Dimension.CURRENT);
         switch (ev.act) {
             case PEAK_REACHED:
-                holdPhase = true;
-                peakReached = t;
-                markers.add(new Marker("pull-in current reached", tq(t), iq, "current"));
+                if (Double.isNaN(peakReached)) {
+                    peakReached = t;
+                    markers.add(new Marker("pull-in current reached", tq(t), iq, "current"));
+                }
                 setSwitch(false);
+                if (!Double.isNaN(drive.peakSeconds)) {
+                    peakLimited = true; // the peak time, not the current, ends the peak phase
+                    break;
+                }
+                holdPhase = true;
                 if (drive.regulation == Drive.Regulation.HYSTERETIC) startCycle();
+                break;
+            case PEAK_LOW:
+                setSwitch(true);
                 break;
             case HOLD_HIGH:
             case HOLD_PWM_OFF:
