@@ -132,6 +132,11 @@ final class Solver {
             throw new IllegalArgumentException("clamp voltage (" + volt(v0) + ") of the " + clamp + " must be above the supply ("
                     + volt(vs) + "): it would conduct with the switch open and the coil would never switch off");
         }
+        if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && !Double.isNaN(drive.peakSeconds)
+                && drive.regulation == Drive.Regulation.HYSTERETIC && !(drive.band < drive.peakAmps)) {
+            throw new IllegalArgumentException("hysteresis band (" + amp(drive.band) + ") must be below the pull-in current ("
+                    + amp(drive.peakAmps) + "): with a peak time the current is limited between the two");
+        }
         if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && Double.isNaN(drive.peakSeconds)) {
             if (!(drive.peakAmps < finalCurrent)) {
                 throw new IllegalArgumentException("pull-in current (" + amp(drive.peakAmps) + ") is never reached: the steady current is V/R = "

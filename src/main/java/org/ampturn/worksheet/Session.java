@@ -162,7 +162,12 @@ public final class Session implements AutoCloseable {
     /** Evaluates one import line once; one that does not compile is dropped and not tried again. Under the lock. */
     private void addImport(String line) {
         if (!importsTried.add(line)) return;
-        List<SnippetEvent> ev = shell.eval(line);
+        List<SnippetEvent> ev;
+        try {
+            ev = shell.eval(line);
+        } catch (IllegalStateException e) {
+            return; // the session has ended: the entry's own evaluation says so
+        }
         if (ev.isEmpty()) return;
         if (ev.get(0).status() == Snippet.Status.VALID) {
             imports.add(line);

@@ -47,6 +47,8 @@ class BadInputTest {
         fails(() -> Drive.peakAndHold(V(12), A(1), A(2)), "hold current", "below the pull-in");
         fails(() -> Drive.peakAndHold(V(12), A(5), A(1)).into(coil).offAt(ms(5), Clamp.diode()).simulate(ms(10)), "never reached", "2.400 A");
         fails(() -> Drive.peakAndHold(V(12), A(2), A(1)).withHysteresis(A(3)), "hysteresis band");
+        fails(() -> Drive.peakAndHold(V(12), A(2), A(1.5)).withHysteresis(A(2.5)).withPeakTime(ms(2)).into(coil).offAt(ms(5), Clamp.diode())
+                .simulate(ms(10)), "hysteresis band (2.500 A)", "below the pull-in current (2.000 A)");
         fails(() -> Drive.dc(V(12)).withHysteresis(A(0.1)), "peak-and-hold");
         fails(() -> Drive.dc(V(0)), "supply voltage");
         fails(() -> Drive.dc(V(12)).into(coil).samples(1), "samples (1)");
