@@ -46,11 +46,13 @@ final class SessionClassPath {
         }
         if (left.isEmpty() || cp.isEmpty()) return List.of();
         List<File> out = new ArrayList<>();
+        boolean leftOut = false;
         for (String e : cp.split(File.pathSeparator)) {
             if (e.isEmpty()) continue;
-            if (!left.contains(normal(Path.of(e)))) out.add(new File(e));
+            if (left.contains(normal(Path.of(e)))) leftOut = true;
+            else out.add(new File(e));
         }
-        return out.size() < cp.split(File.pathSeparator).length ? out : List.of();
+        return leftOut ? out : List.of();
     }
 
     /** Sets the compiler's class path; for {@code JShell.Builder.fileManager}. */
@@ -63,7 +65,7 @@ final class SessionClassPath {
         }
     }
 
-    /** The jar or directory a resource was found in, or null. */
+    /** The jar a resource was found in, or null (also for a class directory: the tool's libraries come as jars). */
     static Path containerOf(URL url) {
         if (url == null) return null;
         try {
@@ -72,7 +74,7 @@ final class SessionClassPath {
                 int bang = s.indexOf("!/");
                 return bang < 0 ? null : normal(Path.of(new URI(s.substring(4, bang))));
             }
-            return null; // a class directory: the tool's libraries always come as jars
+            return null;
         } catch (URISyntaxException | RuntimeException e) {
             return null;
         }
