@@ -46,7 +46,7 @@ public final class Limit {
         return new Limit(output, false, Quantity.number(bound));
     }
 
-    /** Reads "NAME >= QUANTITY" or "NAME <= QUANTITY" (≥, ≤, &gt;, &lt; too): {@code "B <= 0.3 T"}, {@code "turns >= 100"}. */
+    /** Reads {@code "NAME >= QUANTITY"} or {@code "NAME <= QUANTITY"} (≥ and ≤ too): {@code "B <= 0.3 T"}, {@code "turns >= 100"}. */
     public static Limit parse(String text) {
         if (text == null) throw new IllegalArgumentException("a limit is missing (null)");
         Matcher m = TEXT.matcher(text);

@@ -13,7 +13,7 @@ import java.util.function.Supplier;
  * The worksheet the console is working on: entries typed or opened, their results, the file it
  * belongs to, the journal that protects unsaved work, and the trust rules for opening files. The
  * console feeds entries through {@link #enter}; the {@code #} commands call the other methods
- * (see {@link WorksheetCommands}). Not thread-safe: one console thread uses it.
+ * (see {@code WorksheetCommands}). Not thread-safe: one console thread uses it.
  */
 public final class Workspace implements Closeable {
     /** Asks the user a yes/no question; the console reads the answer, batch mode says no. */
