@@ -3,15 +3,12 @@ package org.ampturn;
 import java.io.PrintStream;
 import java.util.Arrays;
 import java.util.List;
-import java.util.OptionalInt;
-import org.ampturn.console.BatchRun;
-import org.ampturn.worksheet.SessionExtension;
-import org.ampturn.worksheet.SessionExtensions;
+import org.ampturn.console.WorksheetCli;
+import org.ampturn.session.Session;
 
 /**
  * The command line (DESIGN.md): {@code ampturn [FILE.atw]}, {@code ampturn run [--trust] FILE|-},
- * {@code ampturn verify}, {@code ampturn export}, {@code --version}, {@code --help}.
- * A {@link SessionExtension} may take over a verb; {@code run} falls back to {@link BatchRun}.
+ * {@code ampturn verify}, {@code ampturn export} ({@link WorksheetCli}), {@code --version}, {@code --help}.
  */
 public final class Main {
     private Main() {}
@@ -59,14 +56,9 @@ public final class Main {
                 return 0;
             case "run":
             case "verify":
-            case "export": {
-                org.ampturn.worksheet.Session.prestart();
-                OptionalInt handled = byExtension(verb, rest, out, err);
-                if (handled.isPresent()) return handled.getAsInt();
-                if (verb.equals("run")) return batch(rest, out, err);
-                err.println("ampturn " + verb + ": not available yet in this build");
-                return 2;
-            }
+            case "export":
+                Session.prestart();
+                return WorksheetCli.forUser(System.in, out, err).verb(verb, rest);
             default:
                 if (verb.startsWith("-")) {
                     err.println("ampturn: unknown option " + verb + " (try ampturn --help)");
@@ -78,35 +70,6 @@ public final class Main {
                 }
                 return Launch.console(verb);
         }
-    }
-
-    private static OptionalInt byExtension(String verb, List<String> rest, PrintStream out, PrintStream err) {
-        for (SessionExtension e : SessionExtensions.all()) {
-            OptionalInt rc = e.verb(verb, rest, out, err);
-            if (rc.isPresent()) return rc;
-        }
-        return OptionalInt.empty();
-    }
-
-    private static int batch(List<String> rest, PrintStream out, PrintStream err) {
-        String file = null;
-        for (String a : rest) {
-            if (a.equals("--trust")) continue; // entries run as given; trust is settled by the worksheet layer
-            if (a.startsWith("-") && !a.equals("-")) {
-                err.println("ampturn run: unknown option " + a);
-                return 2;
-            }
-            if (file != null) {
-                err.println("ampturn run: one file at a time");
-                return 2;
-            }
-            file = a;
-        }
-        if (file == null) {
-            err.println("ampturn run: name a file, or - for standard input");
-            return 2;
-        }
-        return BatchRun.run(file, System.in, out, err);
     }
 
     /** Keeps the console classes (and JLine) out of the batch path until they are needed. */

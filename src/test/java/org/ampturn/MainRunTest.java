@@ -10,8 +10,10 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import org.ampturn.console.BatchRun;
-import org.ampturn.worksheet.Session;
+import org.ampturn.console.WorksheetCli;
+import org.ampturn.session.Session;
+import org.ampturn.worksheet.ShellEvaluator;
+import org.ampturn.worksheet.TrustStore;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -20,10 +22,12 @@ class MainRunTest {
     @TempDir
     Path dir;
 
-    private static String run(Session s, String text, int expectedExit) {
+    private String run(Session s, String text, int expectedExit) {
         ByteArrayOutputStream bytes = new ByteArrayOutputStream();
         PrintStream out = new PrintStream(bytes, true, StandardCharsets.UTF_8);
-        assertEquals(expectedExit, BatchRun.run(s, text, out));
+        WorksheetCli cli = WorksheetCli.of(() -> ShellEvaluator.over(() -> s), TrustStore.of(dir.resolve("trusted"), null),
+                new java.io.ByteArrayInputStream(text.getBytes(StandardCharsets.UTF_8)), out, System.err);
+        assertEquals(expectedExit, cli.verb("run", List.of("-")));
         return bytes.toString(StandardCharsets.UTF_8);
     }
 

@@ -26,7 +26,7 @@ public final class Recovery {
         this.undosPastBase = undosPastBase;
     }
 
-    static Recovery read(Path journal) throws IOException {
+    public static Recovery read(Path journal) throws IOException {
         List<String> lines = List.of(new String(Files.readAllBytes(journal), StandardCharsets.UTF_8).split("\n", -1));
         if (lines.isEmpty() || !lines.get(0).equals(Journal.MAGIC)) throw new IOException(journal + " is not a journal");
         long pid = -1;

@@ -50,7 +50,7 @@ public final class Replay {
                 Path used = (self == null || self.getParent() == null ? Path.of(name) : self.getParent().resolve(name)).normalize();
                 Block.Entry marker = Block.Entry.of("#use " + name);
                 if (stack.contains(used)) {
-                    Step s = new Step(file, w.lineOf(k), marker, Evaluation.error("#use " + name + " would run itself again ("
+                    Step s = new Step(file, w.lineOf(k), marker, Evaluation.error(marker.source(), "#use " + name + " would run itself again ("
                             + String.join(" uses ", stack.stream().map(p -> p.getFileName().toString()).toList()) + " uses " + used.getFileName() + ")"));
                     steps.add(s);
                     onStep.accept(s);
@@ -61,7 +61,7 @@ public final class Replay {
                 try {
                     other = loader.load(used);
                 } catch (Exception ex) {
-                    Step s = new Step(file, w.lineOf(k), marker, Evaluation.error("#use " + name + ": " + ex.getMessage()));
+                    Step s = new Step(file, w.lineOf(k), marker, Evaluation.error(marker.source(), "#use " + name + ": " + ex.getMessage()));
                     steps.add(s);
                     onStep.accept(s);
                     continue;

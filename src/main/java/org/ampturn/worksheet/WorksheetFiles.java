@@ -30,6 +30,12 @@ public final class WorksheetFiles {
         Writer PLAIN = OutputStream::write;
     }
 
+    /** The folder where a worksheet's charts live: {@code <name>.figures/} beside the file. */
+    public static Path figuresFolder(Path worksheet) {
+        String n = worksheet.getFileName().toString().replaceFirst("\\.atw$", "");
+        return worksheet.toAbsolutePath().getParent().resolve(n + ".figures");
+    }
+
     /** Reads a worksheet; errors name the file. */
     public static Worksheet read(Path file, Completeness completeness) throws IOException, WorksheetFormatException {
         String text = readText(file);

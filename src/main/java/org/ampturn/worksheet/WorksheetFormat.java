@@ -28,7 +28,8 @@ import org.ampturn.Ampturn;
 public final class WorksheetFormat {
     private WorksheetFormat() {}
 
-    static final String MAGIC = "// ampturn worksheet ";
+    /** The start of a worksheet's first line, before the format number. */
+    public static final String MAGIC = "// ampturn worksheet ";
     private static final Pattern MAGIC_LINE = Pattern.compile("^// ampturn worksheet (\\d+)\\s*$");
     private static final Pattern HEADER_LINE = Pattern.compile("^// ([a-z][a-z0-9_-]*): (.*)$");
     private static final String RESULT = "//=";

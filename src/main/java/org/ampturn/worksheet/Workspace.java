@@ -8,12 +8,15 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
+import org.ampturn.chart.Figures;
 
 /**
- * The worksheet the console is working on: entries typed or opened, their results, the file it
- * belongs to, the journal that protects unsaved work, and the trust rules for opening files. The
- * console feeds entries through {@link #enter}; the {@code #} commands call the other methods
- * (see {@link WorksheetCommands}). Not thread-safe: one console thread uses it.
+ * The worksheet being worked on, and its only owner: the entries typed or opened with their typed
+ * results, the file it belongs to, whether there is unsaved work, the journal that protects that
+ * work, and the trust rules for opening files. The console runs every entry through
+ * {@link #enter} and every {@code #} worksheet command through the other methods; nothing else
+ * keeps a copy of this state. Not thread-safe: one console thread uses it, except
+ * {@link #stop()}.
  */
 public final class Workspace implements Closeable {
     /** Asks the user a yes/no question; the console reads the answer, batch mode says no. */
@@ -42,6 +45,8 @@ public final class Workspace implements Closeable {
         this.trust = trust;
         this.journal = journal;
         this.journalDir = journalDir;
+        // a chart is numbered by the entry that makes it, alike in the console, run, verify and export
+        Figures.useNumbering(this::nextEntryNumber);
     }
 
     /**
@@ -76,7 +81,13 @@ public final class Workspace implements Closeable {
 
     /** Names the file a new worksheet will be saved to ({@code ampturn new.atw} on a file not yet written). */
     public void useFile(Path f) {
+        setFile(f);
+    }
+
+    /** The worksheet's file changes: its charts now go to the folder beside it. */
+    private void setFile(Path f) {
         file = f;
+        if (f != null) Figures.useDirectory(WorksheetFiles.figuresFolder(f));
     }
 
     /** True when there is work that is not in the file. */
@@ -114,26 +125,22 @@ public final class Workspace implements Closeable {
      */
     public Evaluation enter(String source) {
         Evaluation e = evaluator.eval(source);
-        return record(source, e, !e.failed());
-    }
-
-    /**
-     * Adds an entry that the console has just run (the console's own loop calls this before it
-     * shows the result): kept entries go into the worksheet and the journal, forced to disk. While
-     * the workspace itself replays (open, replay, verify, recover, use) this does nothing. Returns
-     * the evaluation to show, with a warning line when the journal could not be written.
-     */
-    public Evaluation record(String source, Evaluation e, boolean kept) {
-        if (replaying > 0 || !kept) return e;
+        if (!e.outcome().kept()) return e;
         Block.Entry entry = new Block.Entry(source, e.records(), relativeFigures(e.figures()));
         sheet = sheet.with(entry);
         dirty = true;
-        if (!log(j -> j.entry(entry))) {
-            List<String> lines = new ArrayList<>(e.lines());
-            lines.add("  ! " + journalTrouble.get(journalTrouble.size() - 1));
-            return new Evaluation(lines, e.figures(), e.failed());
-        }
+        log(j -> j.entry(entry));
         return e;
+    }
+
+    /** Stops the entry that is running (Ctrl-C); a replay in progress stops after it. Safe from any thread. */
+    public void stop() {
+        evaluator.stop();
+    }
+
+    /** How many entries the worksheet holds. */
+    public int entryCount() {
+        return sheet.entries().size();
     }
 
     private List<String> relativeFigures(List<String> figures) {
@@ -144,14 +151,6 @@ public final class Workspace implements Closeable {
             out.add(base != null && p.isAbsolute() && p.startsWith(base) ? base.relativize(p).toString() : f);
         }
         return out;
-    }
-
-    /** The console took the last entry back: it leaves the worksheet too (and the journal says so). */
-    public void undone() {
-        if (sheet.entries().isEmpty()) return;
-        sheet = sheet.withoutLastEntry();
-        dirty = true;
-        log(Journal::undo);
     }
 
     /** Adds a prose note. */
@@ -172,11 +171,13 @@ public final class Workspace implements Closeable {
         if (all.isEmpty()) return null;
         Block.Entry last = all.get(all.size() - 1);
         evaluator.undoLast();
-        undone();
+        sheet = sheet.withoutLastEntry();
+        dirty = true;
+        log(Journal::undo);
         return last;
     }
 
-    /** Messages about journal writes that failed (shown once by the console), then cleared. */
+    /** Messages about journal writes that failed (the console shows each once), then cleared. */
     public List<String> takeJournalTrouble() {
         List<String> out = List.copyOf(journalTrouble);
         journalTrouble.clear();
@@ -198,7 +199,7 @@ public final class Workspace implements Closeable {
         }
         byte[] bytes = WorksheetFiles.save(w, t);
         sheet = w;
-        file = t;
+        setFile(t);
         dirty = false;
         trust.trust(t, bytes);
         Path saved = t;
@@ -231,7 +232,7 @@ public final class Workspace implements Closeable {
         }
         if (!ok) return new Opened(f, w, false, List.of(), List.of());
         sheet = w;
-        file = f;
+        setFile(f);
         dirty = false;
         log(j -> j.opened(f));
         List<Replay.Step> steps = replay(w, f, confirm, onStep);
@@ -331,7 +332,7 @@ public final class Workspace implements Closeable {
         }
         Worksheet w = r.applyTo(base);
         sheet = w;
-        file = r.worksheet();
+        setFile(r.worksheet());
         dirty = true;
         log(j -> j.opened(r.worksheet()));
         for (int k = 0; k < r.undosPastBase(); k++) log(Journal::undo);

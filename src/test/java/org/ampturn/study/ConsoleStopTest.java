@@ -2,8 +2,8 @@ package org.ampturn.study;
 
 import static org.junit.jupiter.api.Assertions.*;
 
-import org.ampturn.worksheet.Outcome;
-import org.ampturn.worksheet.Session;
+import org.ampturn.session.Outcome;
+import org.ampturn.session.Session;
 import org.junit.jupiter.api.Test;
 
 /**

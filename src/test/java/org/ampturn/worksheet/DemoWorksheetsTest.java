@@ -16,6 +16,7 @@ import java.util.List;
 import java.util.stream.Stream;
 import org.ampturn.Ampturn;
 import org.junit.jupiter.api.BeforeAll;
+import org.ampturn.console.WorksheetCli;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -56,7 +57,7 @@ class DemoWorksheetsTest {
         List<String> args = new ArrayList<>();
         for (Path p : demos) args.add(p.toString());
 
-        int rc = cli.verb("verify", args).getAsInt();
+        int rc = cli.verb("verify", args);
 
         String report = out.toString(StandardCharsets.UTF_8);
         assertEquals(0, rc, report + err.toString(StandardCharsets.UTF_8));

@@ -128,15 +128,15 @@ class WorkspaceTest {
     }
 
     @Test
-    void consoleDrivenEntriesAreRecordedExceptDuringReplay() throws Exception {
+    void replayedEntriesAreNotAddedTwiceAndUndoReachesTheJournal() throws Exception {
         FakeEvaluator ev = VerifierTest.truth();
         try (Workspace ws = workspace(ev)) {
-            ws.record("var L = mH(4.7);", Evaluation.of("  L = 4.700 mH"), true);
-            ws.record("oops", Evaluation.error("x"), false);
+            ws.enter("var L = mH(4.7);");
+            ws.enter("oops");
             assertEquals(1, ws.worksheet().entries().size());
-            ws.replay(Workspace.Confirm.NO, s -> ws.record(s.entry().source(), s.result(), true));
+            ws.replay(Workspace.Confirm.NO, s -> {});
             assertEquals(1, ws.worksheet().entries().size(), "a replayed entry is not added twice");
-            ws.undone();
+            ws.undo();
             assertEquals(0, ws.worksheet().entries().size());
             List<Recovery> none = Journal.unfinished(dir.resolve("home/journal"));
             assertEquals(List.of(), none, "a live journal is never offered");

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -11,6 +11,13 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
+import org.ampturn.worksheet.Block;
+import org.ampturn.worksheet.Completeness;
+import org.ampturn.worksheet.FakeEvaluator;
+import org.ampturn.worksheet.Replay;
+import org.ampturn.worksheet.Worksheet;
+import org.ampturn.worksheet.WorksheetFiles;
+import org.ampturn.worksheet.WorksheetFormat;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 

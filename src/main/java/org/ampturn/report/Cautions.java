@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.report;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
+import org.ampturn.worksheet.ResultMatch;
 
 /**
  * The safety cautions that apply to what a worksheet computed, found by reading the quantities in

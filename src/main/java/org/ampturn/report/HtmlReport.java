@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.report;
 
 import java.io.IOException;
 import java.nio.charset.StandardCharsets;
@@ -10,6 +10,11 @@ import java.util.Base64;
 import java.util.List;
 import java.util.Map;
 import org.ampturn.Ampturn;
+import org.ampturn.worksheet.Block;
+import org.ampturn.worksheet.Evaluation;
+import org.ampturn.worksheet.Replay;
+import org.ampturn.worksheet.Worksheet;
+import org.ampturn.worksheet.WorksheetFiles;
 
 /**
  * The report of a worksheet: one self-contained HTML file with inline CSS (screen and A4 print),
@@ -27,6 +32,7 @@ public final class HtmlReport {
      */
     public static String render(Worksheet w, Path file, List<Replay.Step> steps) {
         List<Block.Entry> fresh = freshEntries(w, file, steps);
+        List<Boolean> failed = failedEntries(w, file, steps);
         Path base = file == null || file.toAbsolutePath().getParent() == null ? Path.of(".") : file.toAbsolutePath().getParent();
         String title = w.title().isEmpty() ? (file == null ? "Worksheet" : file.getFileName().toString()) : w.title();
 
@@ -37,7 +43,7 @@ public final class HtmlReport {
             if (w.blocks().get(k) instanceof Block.Entry) {
                 Block.Entry e = fresh.get(ei++);
                 seen.add(new Cautions.Seen(w.lineOf(k), e.source(), e.results()));
-                if (e.results().stream().anyMatch(r -> r.startsWith("! "))) errors.add("line " + w.lineOf(k));
+                if (failed.get(ei - 1)) errors.add("line " + w.lineOf(k));
             }
         }
         List<Cautions.Caution> cautions = Cautions.scan(seen);
@@ -128,6 +134,23 @@ public final class HtmlReport {
             out.add(recorded.get(k++).withRecord(s.result().records(), s.result().figures()));
         }
         while (k < recorded.size()) out.add(recorded.get(k++));
+        return out;
+    }
+
+    /**
+     * Per entry of the worksheet, whether it failed: from the fresh run's typed outcome, or for a
+     * report of the records alone, from the record's error mark ({@code //= ! ...}).
+     */
+    static List<Boolean> failedEntries(Worksheet w, Path file, List<Replay.Step> steps) {
+        List<Boolean> out = new ArrayList<>();
+        if (steps != null) {
+            for (Replay.Step s : steps) {
+                if (s.isIn(file) && !s.entry().source().startsWith("#use ")) out.add(s.result().failed());
+            }
+        }
+        List<Block.Entry> recorded = w.entries();
+        for (int k = out.size(); k < recorded.size(); k++) out.add(recorded.get(k).results().stream().anyMatch(r -> r.startsWith("! ")));
+        while (out.size() > recorded.size()) out.remove(out.size() - 1);
         return out;
     }
 

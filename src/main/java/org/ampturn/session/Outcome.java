@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -52,7 +52,7 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
             detail = List.copyOf(detail);
         }
 
-        static Result of(Kind kind, String text) {
+        public static Result of(Kind kind, String text) {
             return new Result(kind, text, List.of());
         }
     }
@@ -86,14 +86,19 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
     }
 
     /**
-     * The results as a worksheet records them after {@code //=}: a value's text alone
-     * ({@code "9.000 mJ"}), a declaration as {@code "coil = ..."}, a definition as shown, and an
-     * error as {@code "! message"}.
+     * The results as a worksheet records them after {@code //=}, one line each: a value's text alone
+     * ({@code "9.000 mJ"}), a declaration as {@code "coil = ..."}, a definition as shown, an error
+     * as {@code "! message"}, printed text as {@code "| text"}; the further lines of a result (a
+     * table, a compile error's source line and caret) indented by two spaces.
      */
     public List<String> recorded() {
         List<String> out = new ArrayList<>();
         for (Result r : results) {
-            out.add(r.kind() == Kind.ERROR ? "! " + r.text() : r.kind() == Kind.PRINTED ? "| " + r.text() : r.text());
+            String head = r.kind() == Kind.ERROR ? "! " : r.kind() == Kind.PRINTED ? "| " : "";
+            String[] parts = r.text().split("\n", -1);
+            out.add(head + parts[0]);
+            for (int i = 1; i < parts.length; i++) out.add("  " + parts[i]);
+            for (String d : r.detail()) out.add("  " + d);
         }
         return out;
     }

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.console;
 
 import java.io.IOException;
 import java.io.InputStream;
@@ -8,8 +8,19 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.OptionalInt;
 import java.util.function.Supplier;
+import org.ampturn.chart.Figures;
+import org.ampturn.report.HtmlReport;
+import org.ampturn.worksheet.Evaluator;
+import org.ampturn.worksheet.Mismatch;
+import org.ampturn.worksheet.Replay;
+import org.ampturn.worksheet.ShellEvaluator;
+import org.ampturn.worksheet.TrustStore;
+import org.ampturn.worksheet.Verifier;
+import org.ampturn.worksheet.Worksheet;
+import org.ampturn.worksheet.WorksheetFiles;
+import org.ampturn.worksheet.WorksheetFormat;
+import org.ampturn.worksheet.WorksheetFormatException;
 
 /**
  * The command-line verbs of DESIGN.md that work on worksheet files, without a terminal:
@@ -47,13 +58,27 @@ public final class WorksheetCli {
         return of(ShellEvaluator::start, TrustStore.user(), in, out, err);
     }
 
-    /** Runs a verb; empty when the verb is not one of {@code run}, {@code verify}, {@code export}. */
-    public OptionalInt verb(String verb, List<String> args) {
+    /** The verbs this class runs. */
+    public static final List<String> VERBS = List.of("run", "verify", "export");
+
+    /**
+     * Runs a verb of {@link #VERBS} and returns the exit code. Charts made on the way are written to
+     * files, never shown in windows; {@code verify} writes them to a scratch folder and says nothing
+     * of them, {@code export} writes SVG for the report.
+     */
+    public int verb(String verb, List<String> args) {
+        Figures.useWindows(false);
         switch (verb) {
-            case "run": return OptionalInt.of(run(args));
-            case "verify": return OptionalInt.of(verify(args));
-            case "export": return OptionalInt.of(export(args));
-            default: return OptionalInt.empty();
+            case "run":
+                return run(args);
+            case "verify":
+                Figures.silence();
+                return verify(args);
+            case "export":
+                Figures.useFormats("svg");
+                return export(args);
+            default:
+                throw new IllegalArgumentException("not a worksheet verb: " + verb);
         }
     }
 
@@ -85,8 +110,8 @@ public final class WorksheetCli {
             java.util.concurrent.atomic.AtomicInteger done = chartsFor(file, null);
             // the chart layer's notes (file written, preview) go under the entry that made them
             java.io.ByteArrayOutputStream notes = new java.io.ByteArrayOutputStream();
-            java.io.PrintStream before = org.ampturn.chart.Figures.printingTo();
-            org.ampturn.chart.Figures.printTo(new java.io.PrintStream(notes, true, StandardCharsets.UTF_8));
+            java.io.PrintStream before = Figures.printingTo();
+            Figures.printTo(new java.io.PrintStream(notes, true, StandardCharsets.UTF_8));
             try {
                 Replay.run(w, file, ev, loader(ev, trusted), s -> {
                     done.incrementAndGet();
@@ -102,7 +127,7 @@ public final class WorksheetCli {
                     failed[0] |= s.result().failed();
                 });
             } finally {
-                org.ampturn.chart.Figures.printTo(before);
+                Figures.printTo(before);
             }
             return failed[0] ? 1 : 0;
         } catch (IOException | WorksheetFormatException e) {
@@ -207,12 +232,9 @@ public final class WorksheetCli {
      */
     private static java.util.concurrent.atomic.AtomicInteger chartsFor(Path worksheet, Path dir) {
         java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
-        if (dir == null && worksheet != null) {
-            String n = worksheet.getFileName().toString().replaceFirst("\\.atw$", "");
-            dir = worksheet.toAbsolutePath().getParent().resolve(n + ".figures");
-        }
-        if (dir != null) org.ampturn.chart.Figures.useDirectory(dir);
-        org.ampturn.chart.Figures.useNumbering(() -> done.get() + 1);
+        if (dir == null && worksheet != null) dir = WorksheetFiles.figuresFolder(worksheet);
+        if (dir != null) Figures.useDirectory(dir);
+        Figures.useNumbering(() -> done.get() + 1);
         return done;
     }
 

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import java.io.File;
 import java.util.ArrayList;
@@ -24,8 +24,8 @@ import jdk.jshell.SourceCodeAnalysis.CompletionInfo;
 import jdk.jshell.TypeDeclSnippet;
 import jdk.jshell.UnresolvedReferenceException;
 import jdk.jshell.VarSnippet;
-import org.ampturn.worksheet.Outcome.Kind;
-import org.ampturn.worksheet.Outcome.Result;
+import org.ampturn.session.Outcome.Kind;
+import org.ampturn.session.Outcome.Result;
 
 /**
  * A running worksheet session: an embedded JShell that runs entries in this JVM, with the
@@ -58,9 +58,6 @@ public final class Session implements AutoCloseable {
 
     /** A name defined in the session, for {@code #names}. */
     public record Name(String kind, String name, String type, String value) {}
-
-    /** One entry of a worksheet's text and the 1-based line it starts on. */
-    public record Entry(int line, String source) {}
 
     /** Completion candidates: each is the text that replaces {@code code[anchor, cursor)}. */
     public record Completion(int anchor, List<String> candidates) {}
@@ -360,46 +357,6 @@ public final class Session implements AutoCloseable {
             shell.types().forEach(t -> out.add(new Name(typeKind(t), t.name(), "", "")));
             return out;
         }
-    }
-
-    /**
-     * Splits worksheet text into entries, feeding it line by line as if typed: lines gather until
-     * JShell's completeness analysis says the entry is complete, so a method or a multi-line
-     * expression is one entry. Blank lines and comment lines between entries are skipped (the
-     * worksheet reads its notes and {@code //=} lines itself).
-     */
-    public List<Entry> entries(String text) {
-        synchronized (lock) {
-            List<Entry> out = new ArrayList<>();
-            StringBuilder buf = new StringBuilder();
-            int start = 0;
-            String[] lines = text.split("\r?\n", -1);
-            for (int i = 0; i < lines.length; i++) {
-                String line = lines[i];
-                if (buf.length() == 0) {
-                    String t = line.strip();
-                    if (t.isEmpty() || t.startsWith("//")) continue;
-                    start = i + 1;
-                } else {
-                    buf.append('\n');
-                }
-                buf.append(line);
-                Completeness c = completeness(buf.toString());
-                if (c == Completeness.EMPTY) {
-                    buf.setLength(0);
-                } else if (c.isComplete() && !WorksheetFormat.continuedBelow(lines, i)) {
-                    out.add(new Entry(start, buf.toString()));
-                    buf.setLength(0);
-                }
-            }
-            if (buf.length() > 0 && !buf.toString().isBlank()) out.add(new Entry(start, buf.toString()));
-            return out;
-        }
-    }
-
-    /** The sources of {@link #entries(String)}. */
-    public List<String> splitEntries(String text) {
-        return entries(text).stream().map(Entry::source).collect(Collectors.toList());
     }
 
     /**
