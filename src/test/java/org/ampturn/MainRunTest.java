@@ -43,6 +43,18 @@ class MainRunTest {
     }
 
     @Test
+    void badInputOnStandardInputIsEachEntrysOwnError() {
+        try (Session s = Session.start()) {
+            assertEquals("1+1\n  = 2\nx catch\n  ! the Java compiler failed on this entry (InternalError); rewrite it, the session goes on\n"
+                    + "2+2\n  = 4\n", run(s, "1+1\nx catch\n2+2\n", 1));
+            String out = run(s, "#save x.atw\nmm(1).plus(\n2+2\n", 1);
+            assertTrue(out.startsWith("#save x.atw\n  ! #save is a console command;"), out);
+            assertTrue(out.contains("mm(1).plus(\n  ! reached end of file while parsing\n"), "an unbalanced line is its own entry:\n" + out);
+            assertTrue(out.endsWith("2+2\n  = 4\n"), "and does not swallow the next:\n" + out);
+        }
+    }
+
+    @Test
     void verbsAndOptions() {
         ByteArrayOutputStream o = new ByteArrayOutputStream();
         ByteArrayOutputStream e = new ByteArrayOutputStream();

@@ -97,9 +97,9 @@ public final class WorksheetCli {
         Path file = null;
         try (Evaluator ev = evaluators.get()) {
             if (name.equals("-")) {
-                String text = new String(in.readAllBytes(), StandardCharsets.UTF_8);
-                if (!text.startsWith(WorksheetFormat.MAGIC)) text = WorksheetFormat.MAGIC + Worksheet.FORMAT + "\n\n" + text;
-                w = WorksheetFormat.parse(text, ev.completeness());
+                String text = WorksheetFiles.decode(in.readAllBytes(), "standard input");
+                w = text.startsWith(WorksheetFormat.MAGIC) ? WorksheetFormat.parse(text, ev.completeness())
+                        : WorksheetFormat.parseEntries(text, ev.completeness());
             } else {
                 file = Path.of(name);
                 w = WorksheetFiles.read(file, ev.completeness());

@@ -15,7 +15,9 @@ import java.util.List;
  * @param source      the entry as typed (may span several lines)
  * @param kind        the entry's kind; {@link Kind#ERROR} when any part of it failed
  * @param results     one result per part that shows something, in order
- * @param interrupted true when the entry was stopped by {@link Session#stop()}
+ * @param interrupted true when the entry was stopped by {@link Session#stop()}: it failed with
+ *                    {@value Session#INTERRUPTED}, or (a study that keeps what it did) it ended early
+ *                    with a partial value, which it shows
  * @param kept        true when the entry left something in the session (a value, a definition,
  *                    a statement that ran), so it counts as an entry of the worksheet and
  *                    {@link Session#undoLast()} takes it back; false when the compiler rejected all

@@ -72,6 +72,8 @@ public final class Session implements AutoCloseable {
     /** The snippets of those imports: part of the session, not of any entry, so {@link #clear()} keeps them. */
     private final Set<Snippet> preloaded = new HashSet<>();
     private final List<List<Snippet>> entries = new ArrayList<>();
+    /** Variables whose declaring entry threw: declared, but holding no value. */
+    private final Set<String> failedVariables = new HashSet<>();
     private final Object lock = new Object();
     private volatile boolean running;
     private volatile boolean stopRequested;
@@ -119,6 +121,7 @@ public final class Session implements AutoCloseable {
     }
 
     private static Session build() {
+        CompilerNoise.install();
         JShell.Builder builder = JShell.builder()
                 .executionEngine(new SessionEngine(), Map.of())
                 .out(System.out)
@@ -200,6 +203,33 @@ public final class Session implements AutoCloseable {
      */
     public Outcome eval(String entrySource) {
         synchronized (lock) {
+            try {
+                return evalGuarded(entrySource);
+            } catch (RuntimeException | LinkageError | VirtualMachineError | AssertionError e) {
+                // the compiler or the engine failed on this entry: that is the entry's error, not the session's end
+                return new Outcome(entrySource, Kind.ERROR, List.of(Result.of(Kind.ERROR, toolFailure(e))), false, false);
+            }
+        }
+    }
+
+    /**
+     * The message of a failure inside the compiler or the engine (not in the entry's own code): what
+     * happened, in one line, and that the session goes on.
+     */
+    static String toolFailure(Throwable e) {
+        Throwable root = e;
+        while (root.getCause() != null && root.getCause() != root) root = root.getCause();
+        if (e instanceof StackOverflowError || root instanceof StackOverflowError) {
+            return "this entry is nested or chained too deeply for the Java compiler; split it into smaller entries";
+        }
+        if (e instanceof OutOfMemoryError || root instanceof OutOfMemoryError) {
+            return "this entry ran out of memory; the session goes on without it";
+        }
+        return "the Java compiler failed on this entry (" + e.getClass().getSimpleName() + "); rewrite it, the session goes on";
+    }
+
+    private Outcome evalGuarded(String entrySource) {
+        {
             importFor(entrySource);
             List<Snippet> added = new ArrayList<>();
             List<Result> results = new ArrayList<>();
@@ -209,11 +239,11 @@ public final class Session implements AutoCloseable {
             String rest = entrySource;
             int consumed = 0;
             while (!rest.isBlank() && !failed) {
-                CompletionInfo ci = analysis.analyzeCompletion(rest);
-                if (ci.completeness() == Completeness.EMPTY) break;
+                CompletionInfo ci = analyze(rest);
+                if (ci != null && ci.completeness() == Completeness.EMPTY) break;
                 String piece;
                 String remaining;
-                if (ci.completeness().isComplete()) {
+                if (ci != null && ci.completeness().isComplete()) {
                     piece = ci.source();
                     remaining = ci.remaining();
                 } else {
@@ -234,10 +264,13 @@ public final class Session implements AutoCloseable {
                     break;
                 } finally {
                     running = false;
+                    CompilerNoise.reset();
                     for (String line : printed.end()) results.add(Result.of(Kind.PRINTED, line));
                 }
-                if (stopRequested) {
-                    interrupted = true;
+                // stopped mid-run; an entry that caught the stop and returned (a study with its partial
+                // result) finished normally and shows its value
+                if (stopRequested) interrupted = true;
+                if (stopRequested && !gaveValue(events)) {
                     failed = true;
                     results.add(Result.of(Kind.ERROR, INTERRUPTED));
                     for (SnippetEvent e : events) if (e.causeSnippet() == null) added.add(e.snippet());
@@ -252,6 +285,7 @@ public final class Session implements AutoCloseable {
                     if (r.kind() == Kind.ERROR) failed = true;
                     else kind = r.kind();
                 }
+                if (interrupted) break; // the rest of a stopped entry does not run
                 consumed = entrySource.length() - remaining.length();
                 if (consumed < 0) consumed = 0;
                 rest = remaining;
@@ -322,6 +356,7 @@ public final class Session implements AutoCloseable {
             Collections.reverse(all);
             for (Snippet s : all) if (!preloaded.contains(s)) dropQuietly(s);
             entries.clear();
+            failedVariables.clear();
         }
     }
 
@@ -403,8 +438,31 @@ public final class Session implements AutoCloseable {
 
     // ---- helpers ------------------------------------------------------------------------------
 
+    /** True when a stopped snippet still ended with a value of its own (a study that returned its partial result). */
+    private static boolean gaveValue(List<SnippetEvent> events) {
+        return events.stream().anyMatch(e -> e.causeSnippet() == null && e.exception() == null && e.value() != null
+                && e.status() == Snippet.Status.VALID);
+    }
+
+    /** The analysis of the text's first snippet, or null when the analysis itself failed on it. */
+    private CompletionInfo analyze(String text) {
+        try {
+            return analysis.analyzeCompletion(text);
+        } catch (RuntimeException | LinkageError | VirtualMachineError | AssertionError e) {
+            return null;
+        }
+    }
+
     /** Completeness of the whole text, which may hold several snippets. */
     private Completeness completeness(String text) {
+        try {
+            return completenessUnguarded(text);
+        } catch (RuntimeException | LinkageError | VirtualMachineError | AssertionError e) {
+            return Completeness.COMPLETE; // the analysis failed: let the compiler report on the entry
+        }
+    }
+
+    private Completeness completenessUnguarded(String text) {
         String rest = text;
         boolean any = false;
         while (true) {
@@ -431,7 +489,12 @@ public final class Session implements AutoCloseable {
             }
             return Result.of(Kind.ERROR, name + " cannot run until " + needs + " is defined");
         }
-        if (ex != null) return Result.of(Kind.ERROR, SessionMessages.exception(ex));
+        if (ex != null) {
+            if (sn instanceof VarSnippet) failedVariables.add(((VarSnippet) sn).name());
+            String noValue = noValue(ex, piece);
+            return Result.of(Kind.ERROR, noValue != null ? noValue : SessionMessages.exception(ex));
+        }
+        if (sn instanceof VarSnippet && e.status() == Snippet.Status.VALID) failedVariables.remove(((VarSnippet) sn).name());
         switch (e.status()) {
             case REJECTED:
                 return SessionMessages.compileError(errors(sn), entry, pieceStart, piece);
@@ -479,6 +542,21 @@ public final class Session implements AutoCloseable {
                     + (((ImportSnippet) sn).isStatic() ? " (static)" : ""));
         }
         return null; // a statement shows nothing
+    }
+
+    /**
+     * For a null pointer met by an entry that uses a variable whose own entry failed (so it holds
+     * no value): says so by name instead of "NullPointerException". Null otherwise.
+     */
+    private String noValue(JShellException ex, String piece) {
+        if (!(ex instanceof jdk.jshell.EvalException)
+                || !"java.lang.NullPointerException".equals(((jdk.jshell.EvalException) ex).getExceptionClassName())) return null;
+        for (String name : failedVariables) {
+            if (java.util.regex.Pattern.compile("(?<![\\w$.])" + java.util.regex.Pattern.quote(name) + "(?![\\w$])").matcher(piece).find()) {
+                return name + " has no value: its entry failed";
+            }
+        }
+        return null;
     }
 
     private static String usableOnce(String unresolved) {

@@ -34,6 +34,19 @@ public final class Replay {
         return steps;
     }
 
+    /** One entry: a console command is refused as the entry's error; anything the evaluator throws is too. */
+    private static Evaluation run(Evaluator ev, String source) {
+        if (source.startsWith("#")) {
+            String word = source.strip().split("\\s+", 2)[0];
+            return Evaluation.error(source, word + " is a console command; a worksheet and ampturn run hold Java entries and #use lines");
+        }
+        try {
+            return ev.eval(source);
+        } catch (RuntimeException e) {
+            return Evaluation.error(source, "the entry could not run: " + e);
+        }
+    }
+
     private static void run(Worksheet w, Path file, Evaluator ev, Loader loader, Consumer<Step> onStep, List<Step> steps,
                             List<Path> stack, List<Path> done) {
         Path self = file == null ? null : file.toAbsolutePath().normalize();
@@ -42,7 +55,7 @@ public final class Replay {
             Block b = w.blocks().get(k);
             if (b instanceof Block.Entry) {
                 Block.Entry e = (Block.Entry) b;
-                Step s = new Step(file, w.lineOf(k), e, ev.eval(e.source()));
+                Step s = new Step(file, w.lineOf(k), e, run(ev, e.source()));
                 steps.add(s);
                 onStep.accept(s);
             } else if (b instanceof Block.Use) {

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
-import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
@@ -54,12 +53,32 @@ public final class WorksheetFiles {
         } catch (NoSuchFileException e) {
             throw new NoSuchFileException(file.toString(), null, "no such file");
         }
-        try {
-            return StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                    .decode(java.nio.ByteBuffer.wrap(bytes)).toString();
-        } catch (CharacterCodingException e) {
-            throw new IOException(file + " is not a worksheet: it is not UTF-8 text");
+        return decode(bytes, file.toString());
+    }
+
+    /**
+     * The bytes as UTF-8 text; text that is not UTF-8 is refused with the line and the byte where
+     * it stops being UTF-8 ({@code name} says whose bytes they are in the message).
+     */
+    public static String decode(byte[] bytes, String name) throws IOException {
+        java.nio.ByteBuffer in = java.nio.ByteBuffer.wrap(bytes);
+        java.nio.CharBuffer out = java.nio.CharBuffer.allocate(bytes.length);
+        java.nio.charset.CoderResult r = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT).decode(in, out, true);
+        if (r.isError()) {
+            int at = in.position();
+            int line = 1, lineStart = 0;
+            for (int k = 0; k < at; k++) {
+                if (bytes[k] == '\n') {
+                    line++;
+                    lineStart = k + 1;
+                }
+            }
+            throw new IOException(name + " is not UTF-8 text: line " + line + ", byte " + (at - lineStart + 1) + " of the line (0x"
+                    + String.format("%02X", bytes[at] & 0xFF) + ", byte " + (at + 1) + " of the file); save it as UTF-8");
         }
+        out.flip();
+        return out.toString();
     }
 
     /** Saves the worksheet atomically; returns the bytes written (for the trust store). */

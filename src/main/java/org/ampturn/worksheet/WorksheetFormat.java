@@ -82,13 +82,37 @@ public final class WorksheetFormat {
                     + "; its entries may use library calls this version lacks; update Ampturn to open it", 2);
         }
         if (i < n && lines[i].isEmpty()) i++; // the blank line after the header
+        return body(lines, n, i, header, completeness, false);
+    }
 
+    /**
+     * Parses entries given without a header (standard input of {@code ampturn run -}): lines are
+     * numbered from 1 as given, and a line that starts with {@code #} (other than {@code #use}) is
+     * kept as an entry of its own, which fails when it runs (see {@link Replay}), instead of refusing
+     * all the input.
+     */
+    public static Worksheet parseEntries(String text, Completeness completeness) throws WorksheetFormatException {
+        String[] lines = text.replace("\r\n", "\n").split("\n", -1);
+        int n = lines.length;
+        if (n > 0 && lines[n - 1].isEmpty()) n--;
+        if (n > 0 && lines[0].startsWith("\uFEFF")) lines[0] = lines[0].substring(1);
+        return body(lines, n, 0, new LinkedHashMap<>(), completeness, true);
+    }
+
+    private static Worksheet body(String[] lines, int n, int i, Map<String, String> header, Completeness completeness, boolean commandsAsEntries)
+            throws WorksheetFormatException {
         List<Block> blocks = new ArrayList<>();
         List<Integer> starts = new ArrayList<>();
         StringBuilder pending = null;
         int pendingStart = 0;
         for (; i < n; i++) {
             String line = lines[i];
+            if (pending != null && startsAfresh(pending, line)) {
+                // an unfinished line followed by one that starts a statement: the unfinished one is an
+                // entry of its own (the compiler says what it lacks), and does not swallow this one
+                addEntry(blocks, starts, pending.toString(), pendingStart);
+                pending = null;
+            }
             if (pending != null) {
                 pending.append('\n').append(line);
                 if (completeness.isComplete(pending.toString()) && !continuedBelow(lines, i)) {
@@ -121,6 +145,8 @@ public final class WorksheetFormat {
             } else if (line.startsWith("#use ")) {
                 blocks.add(new Block.Use(line.substring(5).strip()));
                 starts.add(i + 1);
+            } else if (line.startsWith("#") && commandsAsEntries) {
+                addEntry(blocks, starts, line, i + 1);
             } else if (line.startsWith("#")) {
                 throw new WorksheetFormatException("line " + (i + 1) + ": \"" + abbreviate(line)
                         + "\" is a console command; a worksheet may hold only #use lines", i + 1);
@@ -136,6 +162,48 @@ public final class WorksheetFormat {
         if (pending != null) addEntry(blocks, starts, pending.toString(), pendingStart); // unfinished: the run reports it
         int[] at = starts.stream().mapToInt(Integer::intValue).toArray();
         return new Worksheet(header, blocks, at);
+    }
+
+    /**
+     * True when {@code line} cannot continue the unfinished {@code pending} text: the pending text
+     * is open only in round or square brackets or after an operator (not in a block, a comment or a
+     * text block), and the line starts at its first column with a word or a number. A body of a
+     * method or a class, open in a brace, is never cut.
+     */
+    static boolean startsAfresh(CharSequence pending, String line) {
+        if (line.isEmpty() || !(Character.isJavaIdentifierStart(line.charAt(0)) || Character.isDigit(line.charAt(0)))) return false;
+        String p = pending.toString();
+        if (p.contains("\"\"\"") || p.contains("/*")) return false;
+        int braces = 0, others = 0;
+        boolean inString = false;
+        char quote = 0;
+        for (int k = 0; k < p.length(); k++) {
+            char c = p.charAt(k);
+            if (inString) {
+                if (c == '\\') k++;
+                else if (c == quote || c == '\n') inString = false;
+                continue;
+            }
+            if (c == '/' && k + 1 < p.length() && p.charAt(k + 1) == '/') {
+                int nl = p.indexOf('\n', k);
+                if (nl < 0) break;
+                k = nl;
+                continue;
+            }
+            if (c == '"' || c == '\'') {
+                inString = true;
+                quote = c;
+            } else if (c == '{') {
+                braces++;
+            } else if (c == '}') {
+                braces--;
+            } else if (c == '(' || c == '[') {
+                others++;
+            } else if (c == ')' || c == ']') {
+                others--;
+            }
+        }
+        return braces <= 0 && others > 0 && !inString;
     }
 
     /**

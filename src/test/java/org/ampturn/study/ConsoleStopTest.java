@@ -29,6 +29,8 @@ class ConsoleStopTest {
             t.join(10_000);
             assertFalse(t.isAlive(), "the entry did not end after the stop");
             assertTrue(slow[0].interrupted(), slow[0].toString());
+            assertFalse(slow[0].failed(), "the partial result is shown, not \"! interrupted\": " + slow[0]);
+            assertTrue(slow[0].toString().contains("incomplete: stopped after"), slow[0].toString());
             Outcome after = s.eval("t.isComplete() + \" \" + (t.size() - t.failures())");
             assertFalse(after.failed(), after.toString());
             String text = String.join("\n", after.lines());
