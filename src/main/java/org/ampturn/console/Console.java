@@ -318,9 +318,9 @@ public final class Console {
 
     /** Takes the last entry back; false when there is none. */
     boolean undo() {
-        var last = worksheet.undo();
+        String last = worksheet.undo();
         if (last == null) return false;
-        out().println("  took back: " + firstLine(last.source()));
+        out().println("  took back: " + firstLine(last));
         return true;
     }
 

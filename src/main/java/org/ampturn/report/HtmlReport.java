@@ -12,6 +12,7 @@ import java.util.Map;
 import org.ampturn.Ampturn;
 import org.ampturn.worksheet.Block;
 import org.ampturn.worksheet.Evaluation;
+import org.ampturn.worksheet.Mismatch;
 import org.ampturn.worksheet.Replay;
 import org.ampturn.worksheet.Worksheet;
 import org.ampturn.worksheet.WorksheetFiles;
@@ -31,6 +32,20 @@ public final class HtmlReport {
      * in order); when null the recorded results are shown. {@code file} locates figures (may be null).
      */
     public static String render(Worksheet w, Path file, List<Replay.Step> steps) {
+        return render(w, file, steps, List.of());
+    }
+
+    /**
+     * Renders the report with the differences between the fresh run and the records marked at
+     * their entries and counted at the top.
+     */
+    public static String render(Worksheet w, Path file, List<Replay.Step> steps, List<Mismatch> differences) {
+        java.util.Map<Integer, List<Mismatch>> differ = new java.util.HashMap<>();
+        for (Mismatch m : differences) {
+            if (file == null || m.file() == null || m.file().toAbsolutePath().normalize().equals(file.toAbsolutePath().normalize())) {
+                differ.computeIfAbsent(m.line(), k -> new ArrayList<>()).add(m);
+            }
+        }
         List<Block.Entry> fresh = freshEntries(w, file, steps);
         List<Boolean> failed = failedEntries(w, file, steps);
         Path base = file == null || file.toAbsolutePath().getParent() == null ? Path.of(".") : file.toAbsolutePath().getParent();
@@ -59,7 +74,8 @@ public final class HtmlReport {
             h.append("<dt>").append(esc(e.getKey())).append("</dt><dd>").append(esc(e.getValue())).append("</dd>\n");
         }
         if (file != null) h.append("<dt>file</dt><dd>").append(esc(file.getFileName().toString())).append("</dd>\n");
-        h.append("<dt>results</dt><dd>").append(steps == null ? "as recorded in the worksheet" : "computed afresh on " + LocalDate.now())
+        h.append("<dt>results</dt><dd>").append(steps == null ? "as recorded in the worksheet" : "computed afresh on " + LocalDate.now()
+                        + (differences.isEmpty() ? ", every one as recorded" : "; " + differences.size() + " differ from the record (marked below)"))
                 .append("</dd>\n</dl>\n</header>\n");
 
         h.append("<section class=\"cautions\" id=\"cautions\">\n<h2>Cautions</h2>\n");
@@ -89,7 +105,22 @@ public final class HtmlReport {
                 continue;
             }
             flush(h, para);
-            if (b instanceof Block.Use) {
+            if (b instanceof Block.Failed) {
+                Block.Failed f = (Block.Failed) b;
+                h.append("<section class=\"entry notrun\" id=\"line-").append(w.lineOf(k)).append("\">\n<div class=\"line\">")
+                        .append(w.lineOf(k)).append("</div>\n<pre class=\"src\"><code>").append(esc(f.source())).append("</code></pre>\n")
+                        .append("<p class=\"failed-note\">This entry failed or was stopped when it was recorded; it is kept as a record and not run.</p>\n");
+                if (!f.results().isEmpty()) {
+                    h.append("<pre class=\"out\">");
+                    for (String r : f.results()) {
+                        String d = Evaluation.toDisplay(r).substring(2);
+                        h.append(r.startsWith("! ") ? "<span class=\"err\">" + esc(d) + "</span>" : esc(d)).append('\n');
+                    }
+                    h.setLength(h.length() - 1);
+                    h.append("</pre>\n");
+                }
+                h.append("</section>\n");
+            } else if (b instanceof Block.Use) {
                 h.append("<p class=\"use\">Uses the definitions of <code>").append(esc(((Block.Use) b).path())).append("</code>.</p>\n");
             } else if (b instanceof Block.Entry) {
                 Block.Entry e = fresh.get(ei++);
@@ -105,6 +136,11 @@ public final class HtmlReport {
                     h.setLength(h.length() - 1);
                     h.append("</pre>\n");
                 }
+                for (Mismatch m : differ.getOrDefault(w.lineOf(k), List.of())) {
+                    h.append("<p class=\"differs\">Differs from the record (").append(esc(m.reason())).append("): recorded <code>")
+                            .append(esc(m.recorded() == null ? "(nothing)" : m.recorded())).append("</code>, now <code>")
+                            .append(esc(m.fresh() == null ? "(nothing)" : m.fresh())).append("</code>.</p>\n");
+                }
                 for (String f : e.figures()) h.append(figure(base, f));
                 h.append("</section>\n");
             }
@@ -118,8 +154,40 @@ public final class HtmlReport {
 
     /** Renders and writes the report atomically. */
     public static Path write(Worksheet w, Path file, List<Replay.Step> steps, Path out) throws IOException {
-        WorksheetFiles.saveText(render(w, file, steps), out, WorksheetFiles.Writer.PLAIN);
+        return write(w, file, steps, List.of(), out);
+    }
+
+    /**
+     * Renders the report with its differences marked and writes it atomically; refuses a target that
+     * is the worksheet itself or another worksheet ({@link #clash}).
+     */
+    public static Path write(Worksheet w, Path file, List<Replay.Step> steps, List<Mismatch> differences, Path out) throws IOException {
+        String clash = clash(file, out);
+        if (clash != null) throw new IOException(clash);
+        WorksheetFiles.saveText(render(w, file, steps, differences), out, WorksheetFiles.Writer.PLAIN);
         return out;
+    }
+
+    /**
+     * Why {@code target} must not receive the report of {@code worksheet} (null when it may): it is
+     * the worksheet's own file, or a worksheet file ({@code .atw}); a report is written only to an
+     * {@code .html} or {@code .htm} file.
+     */
+    public static String clash(Path worksheet, Path target) {
+        String name = target.getFileName() == null ? "" : target.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
+        if (worksheet != null) {
+            boolean same = worksheet.toAbsolutePath().normalize().equals(target.toAbsolutePath().normalize());
+            try {
+                same |= Files.exists(target) && Files.isSameFile(worksheet, target);
+            } catch (IOException ignored) {
+                // not the same readable file
+            }
+            if (same) return "the report would replace the worksheet " + worksheet + " itself; name an .html file";
+        }
+        if (!(name.endsWith(".html") || name.endsWith(".htm"))) {
+            return "a report is an .html file, got " + target + (name.endsWith(".atw") ? " (a worksheet name: it is never overwritten by a report)" : "");
+        }
+        return null;
     }
 
     /** The worksheet's entries with fresh results in place of the recorded ones, when there are any. */
@@ -237,7 +305,9 @@ public final class HtmlReport {
             "dl.meta dt { font-weight: 600; } dl.meta dd { margin: 0; }",
             ".caution { background: var(--warnbg); border-left: 4px solid var(--warn); padding: .5rem .8rem; margin: .5rem 0; break-inside: avoid; }",
             ".caution p { margin: .2rem 0; } .where { font: .8rem system-ui, sans-serif; color: var(--muted); }",
+            ".differs { color: #a00000; font: .85rem system-ui, sans-serif; margin: .1rem 0; }",
             ".defer { font-style: italic; } .failed { color: #a00000; font-weight: 600; }",
+            ".entry.notrun pre.src { border-color: #d8a0a0; } .failed-note { font: .8rem system-ui, sans-serif; color: #a00000; margin: .1rem 0; }",
             "p.note { margin: 1rem 0 .4rem; }",
             ".entry { display: grid; grid-template-columns: 2.6rem 1fr; column-gap: .4rem; margin: .3rem 0; break-inside: avoid; }",
             ".entry > * { grid-column: 2; } .entry > .line { grid-column: 1; grid-row: 1; text-align: right; font: .75rem/1.9 ui-monospace, monospace; color: var(--muted); }",

@@ -496,8 +496,15 @@ public final class Session implements AutoCloseable {
         }
         if (sn instanceof VarSnippet && e.status() == Snippet.Status.VALID) failedVariables.remove(((VarSnippet) sn).name());
         switch (e.status()) {
-            case REJECTED:
-                return SessionMessages.compileError(errors(sn), entry, pieceStart, piece);
+            case REJECTED: {
+                Result r = SessionMessages.compileError(errors(sn), entry, pieceStart, piece);
+                for (String name : failedVariables) {
+                    if (r.text().equals("cannot find symbol: variable " + name) || r.text().startsWith("cannot find symbol: variable " + name + "\n")) {
+                        return new Result(Kind.ERROR, name + " has no value: its entry failed", r.detail());
+                    }
+                }
+                return r;
+            }
             case VALID:
             case RECOVERABLE_DEFINED:
             case RECOVERABLE_NOT_DEFINED:

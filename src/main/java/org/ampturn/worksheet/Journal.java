@@ -29,6 +29,7 @@ import java.util.stream.Stream;
  * // pid: 4242
  * o /home/me/gate.atw      the worksheet now is that file as it is on disk ("-" for a new one)
  * e var L = mH(4.7);        an entry's source lines ...
+ * F while (true) {}         ... or a failed entry's (then its results with "=")
  * = L = 4.700 mH            ... its recorded results ...
  * f gate.figures/01.svg     ... and figures
  * n a note                  a note
@@ -83,6 +84,14 @@ public final class Journal implements Closeable {
         for (String l : e.source().split("\n", -1)) sb.append("e ").append(l).append('\n');
         for (String r : e.results()) for (String l : r.split("\n", -1)) sb.append("= ").append(l).append('\n');
         for (String f : e.figures()) sb.append("f ").append(f).append('\n');
+        record(sb.toString());
+    }
+
+    /** An entry that failed or was stopped, with what it gave; on disk when this returns. */
+    public void failed(Block.Failed f) throws IOException {
+        StringBuilder sb = new StringBuilder();
+        for (String l : f.source().split("\n", -1)) sb.append("F ").append(l).append('\n');
+        for (String r : f.results()) for (String l : r.split("\n", -1)) sb.append("= ").append(l).append('\n');
         record(sb.toString());
     }
 

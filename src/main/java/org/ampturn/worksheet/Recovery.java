@@ -63,6 +63,10 @@ public final class Recovery {
                     case 'e':
                         blocks.add(entry(rec));
                         break;
+                    case 'F':
+                        Block.Entry e = entry(rec);
+                        blocks.add(new Block.Failed(e.source(), e.results()));
+                        break;
                     default:
                         break;
                 }
@@ -76,7 +80,7 @@ public final class Recovery {
     }
 
     private static int lastEntry(List<Block> blocks) {
-        for (int i = blocks.size() - 1; i >= 0; i--) if (blocks.get(i) instanceof Block.Entry) return i;
+        for (int i = blocks.size() - 1; i >= 0; i--) if (blocks.get(i) instanceof Block.Entry || blocks.get(i) instanceof Block.Failed) return i;
         return -1;
     }
 
@@ -85,7 +89,7 @@ public final class Recovery {
         for (String l : rec) {
             String body = l.length() > 2 ? l.substring(2) : "";
             switch (l.charAt(0)) {
-                case 'e': src.add(body); break;
+                case 'e': case 'F': src.add(body); break;
                 case '=': res.add(body); break;
                 case 'f': fig.add(body); break;
                 default: break;

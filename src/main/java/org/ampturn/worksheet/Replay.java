@@ -27,10 +27,14 @@ public final class Replay {
         }
     }
 
-    /** Runs every entry; {@code onStep} sees each step as soon as it is done (for printing or a journal). */
+    /**
+     * Runs every entry; {@code onStep} sees each step as soon as it is done (for printing or a
+     * journal). An entry that was stopped (Ctrl-C, a time limit) ends the whole run: the steps so far
+     * are returned, the stopped one last. {@link Block.Failed} records are never run.
+     */
     public static List<Step> run(Worksheet w, Path file, Evaluator evaluator, Loader loader, Consumer<Step> onStep) {
         List<Step> steps = new ArrayList<>();
-        run(w, file, evaluator, loader, onStep, steps, new ArrayList<>(), new ArrayList<>());
+        run(w, file, evaluator, loader, onStep, steps, new ArrayList<>(), new ArrayList<>(), new boolean[1]);
         return steps;
     }
 
@@ -48,7 +52,7 @@ public final class Replay {
     }
 
     private static void run(Worksheet w, Path file, Evaluator ev, Loader loader, Consumer<Step> onStep, List<Step> steps,
-                            List<Path> stack, List<Path> done) {
+                            List<Path> stack, List<Path> done, boolean[] stopped) {
         Path self = file == null ? null : file.toAbsolutePath().normalize();
         if (self != null) stack.add(self);
         for (int k = 0; k < w.blocks().size(); k++) {
@@ -58,6 +62,10 @@ public final class Replay {
                 Step s = new Step(file, w.lineOf(k), e, run(ev, e.source()));
                 steps.add(s);
                 onStep.accept(s);
+                if (s.result().interrupted()) {
+                    stopped[0] = true; // Ctrl-C or the entry limit: the whole replay stops, keeping what ran
+                    return;
+                }
             } else if (b instanceof Block.Use) {
                 String name = ((Block.Use) b).path();
                 Path used = (self == null || self.getParent() == null ? Path.of(name) : self.getParent().resolve(name)).normalize();
@@ -80,7 +88,8 @@ public final class Replay {
                     continue;
                 }
                 done.add(used);
-                run(other, used, ev, loader, onStep, steps, stack, done);
+                run(other, used, ev, loader, onStep, steps, stack, done, stopped);
+                if (stopped[0]) return;
             }
         }
         if (self != null) stack.remove(stack.size() - 1);

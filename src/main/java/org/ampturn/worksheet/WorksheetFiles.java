@@ -37,7 +37,24 @@ public final class WorksheetFiles {
 
     /** Reads a worksheet; errors name the file. */
     public static Worksheet read(Path file, Completeness completeness) throws IOException, WorksheetFormatException {
-        String text = readText(file);
+        return parse(file, readBytes(file), completeness);
+    }
+
+    /**
+     * The file's bytes, read once: the caller checks trust on these bytes and parses the same ones
+     * ({@link #parse}), so a file swapped between the check and the run cannot run unchecked.
+     */
+    public static byte[] readBytes(Path file) throws IOException {
+        try {
+            return Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new NoSuchFileException(file.toString(), null, "no such file");
+        }
+    }
+
+    /** Parses bytes read from {@code file}; errors name the file. */
+    public static Worksheet parse(Path file, byte[] bytes, Completeness completeness) throws IOException, WorksheetFormatException {
+        String text = decode(bytes, file.toString());
         try {
             return WorksheetFormat.parse(text, completeness);
         } catch (WorksheetFormatException e) {

@@ -19,6 +19,8 @@ import org.ampturn.Ampturn;
  * coil.inductance()
  * //= 2.103 mH
  * //= figure: gate-latch.figures/03-current.svg
+ * //! while (true) {}
+ * //= ! interrupted
  * </pre>
  * The header is the first run of {@code // key: value} lines after the first line. Code lines are
  * gathered line by line, like typed input, until the {@link Completeness} says the entry is whole.
@@ -34,6 +36,7 @@ public final class WorksheetFormat {
     private static final Pattern HEADER_LINE = Pattern.compile("^// ([a-z][a-z0-9_-]*): (.*)$");
     private static final String RESULT = "//=";
     private static final String FIGURE = "figure: ";
+    private static final String FAILED = "//!";
 
     static boolean isHeaderKey(String k) {
         return k != null && k.matches("[a-z][a-z0-9_-]*");
@@ -124,6 +127,24 @@ public final class WorksheetFormat {
             if (line.isBlank()) {
                 blocks.add(new Block.Blank());
                 starts.add(i + 1);
+            } else if (line.startsWith(FAILED)) {
+                String src = line.substring(FAILED.length());
+                if (src.startsWith(" ")) src = src.substring(1);
+                int last = blocks.size() - 1;
+                if (last >= 0 && blocks.get(last) instanceof Block.Failed && ((Block.Failed) blocks.get(last)).results().isEmpty()) {
+                    Block.Failed f = (Block.Failed) blocks.get(last);
+                    blocks.set(last, new Block.Failed(f.source() + "\n" + src, List.of()));
+                } else if (!src.isBlank()) {
+                    blocks.add(new Block.Failed(src, List.of()));
+                    starts.add(i + 1);
+                }
+            } else if (line.startsWith(RESULT) && !blocks.isEmpty() && blocks.get(blocks.size() - 1) instanceof Block.Failed) {
+                Block.Failed f = (Block.Failed) blocks.get(blocks.size() - 1);
+                String r = line.substring(RESULT.length());
+                if (r.startsWith(" ")) r = r.substring(1);
+                List<String> results = new ArrayList<>(f.results());
+                results.add(r);
+                blocks.set(blocks.size() - 1, new Block.Failed(f.source(), results));
             } else if (line.startsWith(RESULT)) {
                 int last = blocks.size() - 1;
                 if (last < 0 || !(blocks.get(last) instanceof Block.Entry)) {
@@ -239,6 +260,10 @@ public final class WorksheetFormat {
             sb.append(t.isEmpty() ? "//" : "// " + t).append('\n');
         } else if (b instanceof Block.Use) {
             sb.append("#use ").append(((Block.Use) b).path()).append('\n');
+        } else if (b instanceof Block.Failed) {
+            Block.Failed f = (Block.Failed) b;
+            for (String l : f.source().split("\n", -1)) sb.append(l.isEmpty() ? FAILED : FAILED + " " + l).append('\n');
+            for (String r : f.results()) sb.append(r.isEmpty() ? RESULT : RESULT + " " + r).append('\n');
         } else {
             Block.Entry e = (Block.Entry) b;
             sb.append(e.source()).append('\n');

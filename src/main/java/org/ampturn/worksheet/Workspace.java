@@ -38,6 +38,8 @@ public final class Workspace implements Closeable {
     private int replaying;
     private int replayDone;
     private final List<String> journalTrouble = new ArrayList<>();
+    /** Failed records whose entry left something in the session (a stopped study's partial result). */
+    private final java.util.Set<Block> keptFailed = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
 
     private Workspace(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust, Journal journal, Path journalDir) {
         this.evaluator = evaluator;
@@ -121,10 +123,25 @@ public final class Workspace implements Closeable {
     /**
      * Runs a typed entry, adds it with its results to the worksheet and writes it to the journal,
      * forced to disk, before returning; so once the caller shows the result, a crash loses nothing.
-     * A failed entry is shown but not kept (the session did not keep it either).
+     * An entry that failed or was stopped is added as a {@link Block.Failed} record: shown and
+     * saved, never run again. It leaves nothing in the session (as on a replay, where it does not
+     * run), except a stopped study's partial result, which stays usable until the next replay.
      */
     public Evaluation enter(String source) {
         Evaluation e = evaluator.eval(source);
+        if (e.failed() || e.interrupted()) {
+            boolean inSession = e.outcome().kept();
+            if (inSession && e.failed()) {
+                evaluator.undoLast();
+                inSession = false;
+            }
+            Block.Failed f = new Block.Failed(source.strip().isEmpty() ? "?" : source, e.records());
+            sheet = sheet.with(f);
+            if (inSession) keptFailed.add(f);
+            dirty = true;
+            log(j -> j.failed(f));
+            return e;
+        }
         if (!e.outcome().kept()) return e;
         Block.Entry entry = new Block.Entry(source, e.records(), relativeFigures(e.figures()));
         sheet = sheet.with(entry);
@@ -165,16 +182,19 @@ public final class Workspace implements Closeable {
         dirty = true;
     }
 
-    /** Takes the last entry out of the worksheet and the session; returns it, or null when there is none. */
-    public Block.Entry undo() {
-        List<Block.Entry> all = sheet.entries();
-        if (all.isEmpty()) return null;
-        Block.Entry last = all.get(all.size() - 1);
-        evaluator.undoLast();
+    /**
+     * Takes the last entry, failed or not, out of the worksheet and (when it is there) the session;
+     * returns its source, or null when there is none.
+     */
+    public String undo() {
+        int i = sheet.lastEntryIndex();
+        if (i < 0) return null;
+        Block last = sheet.blocks().get(i);
+        if (last instanceof Block.Entry || keptFailed.remove(last)) evaluator.undoLast();
         sheet = sheet.withoutLastEntry();
         dirty = true;
         log(Journal::undo);
-        return last;
+        return last instanceof Block.Entry ? ((Block.Entry) last).source() : ((Block.Failed) last).source();
     }
 
     /** Messages about journal writes that failed (the console shows each once), then cleared. */
@@ -223,8 +243,8 @@ public final class Workspace implements Closeable {
      * reading only and not run. Fails with a clear message for a file that is not a worksheet.
      */
     public Opened open(Path f, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
-        Worksheet w = WorksheetFiles.read(f, completeness());
-        byte[] bytes = Files.readAllBytes(f);
+        byte[] bytes = WorksheetFiles.readBytes(f); // hashed and run: the same bytes
+        Worksheet w = WorksheetFiles.parse(f, bytes, completeness());
         boolean ok = trust.isTrusted(f, bytes);
         if (!ok && confirm.ask(f + " was not saved or trusted on this machine. A worksheet is code: run it?")) {
             trust.trust(f, bytes);
@@ -242,8 +262,8 @@ public final class Workspace implements Closeable {
     /** Loads {@code #use}d worksheets, refusing untrusted ones unless the user confirms. */
     public Replay.Loader loader(Confirm confirm) {
         return p -> {
-            Worksheet w = WorksheetFiles.read(p, completeness());
-            byte[] bytes = Files.readAllBytes(p);
+            byte[] bytes = WorksheetFiles.readBytes(p);
+            Worksheet w = WorksheetFiles.parse(p, bytes, completeness());
             if (!trust.isTrusted(p, bytes)) {
                 if (!confirm.ask(p + " (used by this worksheet) is not trusted on this machine: run it?")) {
                     throw new IOException(p + " is not trusted on this machine, so it was not run; #trust " + p + " to allow it");
@@ -278,8 +298,8 @@ public final class Workspace implements Closeable {
      */
     public List<Mismatch> verify(Path other, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
         if (other == null) return Verifier.compare(file, replay(sheet, file, confirm, onStep));
-        Worksheet w = WorksheetFiles.read(other, completeness());
-        byte[] bytes = Files.readAllBytes(other);
+        byte[] bytes = WorksheetFiles.readBytes(other);
+        Worksheet w = WorksheetFiles.parse(other, bytes, completeness());
         if (!trust.isTrusted(other, bytes)) {
             if (!confirm.ask(other + " was not saved or trusted on this machine. A worksheet is code: run it?")) {
                 throw new IOException(other + " is not trusted on this machine, so it was not run; #trust " + other + " to allow it");
@@ -324,11 +344,11 @@ public final class Workspace implements Closeable {
         if (dirty) throw new IOException("this worksheet has unsaved work; #save it first, then #recover");
         Worksheet base = Worksheet.titled("");
         if (r.worksheet() != null && Files.exists(r.worksheet())) {
-            byte[] bytes = Files.readAllBytes(r.worksheet());
+            byte[] bytes = WorksheetFiles.readBytes(r.worksheet());
             if (!trust.isTrusted(r.worksheet(), bytes) && !confirm.ask(r.worksheet() + " changed since that session and is not trusted: run it?")) {
                 throw new IOException(r.worksheet() + " is not trusted on this machine; #trust it, then #recover");
             }
-            base = WorksheetFiles.read(r.worksheet(), completeness());
+            base = WorksheetFiles.parse(r.worksheet(), bytes, completeness());
         }
         Worksheet w = r.applyTo(base);
         sheet = w;
@@ -338,6 +358,7 @@ public final class Workspace implements Closeable {
         for (int k = 0; k < r.undosPastBase(); k++) log(Journal::undo);
         for (Block b : r.blocks()) {
             if (b instanceof Block.Entry) log(j -> j.entry((Block.Entry) b));
+            else if (b instanceof Block.Failed) log(j -> j.failed((Block.Failed) b));
             else if (b instanceof Block.Note) log(j -> j.note(((Block.Note) b).text()));
             else if (b instanceof Block.Use) log(j -> j.use(((Block.Use) b).path()));
         }
@@ -350,6 +371,7 @@ public final class Workspace implements Closeable {
         if (replaying++ == 0) replayDone = 0;
         try {
             evaluator.clear();
+            keptFailed.clear();
             return Replay.run(w, f, evaluator, loader(confirm), st -> {
                 replayDone++;
                 onStep.accept(st);

@@ -9,7 +9,7 @@ import org.ampturn.session.Outcome;
 /** An evaluator that answers from a table (source -> display lines) and remembers what it ran. */
 public final class FakeEvaluator implements Evaluator {
     final Map<String, Evaluation> answers = new LinkedHashMap<>();
-    public final List<String> ran = new ArrayList<>();
+    public final List<String> ran = java.util.Collections.synchronizedList(new ArrayList<>());
     final Map<String, List<String>> needs = new LinkedHashMap<>();
     final java.util.Set<String> defined = new java.util.HashSet<>();
 
@@ -58,6 +58,27 @@ public final class FakeEvaluator implements Evaluator {
     }
 
     /** The entry fails unless these names were declared (by {@code var NAME =} entries) before it. */
+    /** The entry is stopped as by Ctrl-C: it fails with "interrupted". */
+    public FakeEvaluator interrupts(String source) {
+        answers.put(source, new Evaluation(new Outcome(source, Outcome.Kind.ERROR,
+                List.of(Outcome.Result.of(Outcome.Kind.ERROR, "interrupted")), true, false), List.of()));
+        return this;
+    }
+
+    /** The entry runs until {@link #stop()} is called (a runaway loop that still looks at the interrupt). */
+    public FakeEvaluator runsAway(String source) {
+        runaway.add(source);
+        return this;
+    }
+
+    private final java.util.Set<String> runaway = new java.util.HashSet<>();
+    private final java.util.concurrent.Semaphore stopped = new java.util.concurrent.Semaphore(0);
+
+    @Override
+    public void stop() {
+        stopped.release();
+    }
+
     public FakeEvaluator needs(String source, String... names) {
         needs.put(source, List.of(names));
         return this;
@@ -66,6 +87,11 @@ public final class FakeEvaluator implements Evaluator {
     @Override
     public Evaluation eval(String source) {
         ran.add(source);
+        if (runaway.contains(source)) {
+            stopped.acquireUninterruptibly();
+            return new Evaluation(new Outcome(source, Outcome.Kind.ERROR, List.of(Outcome.Result.of(Outcome.Kind.ERROR, "interrupted")), true, false),
+                    List.of());
+        }
         for (String n : needs.getOrDefault(source, List.of())) {
             if (!defined.contains(n)) return Evaluation.error(source, "cannot find symbol: variable " + n);
         }
