@@ -249,6 +249,23 @@ public final class Console {
         return ask(question) == Answer.YES;
     }
 
+    /** Questions of the worksheet: asked here; a trust review is printed first. */
+    Workspace.Confirm asker() {
+        return new Workspace.Confirm() {
+            @Override
+            public boolean ask(String question) {
+                return confirm(question);
+            }
+
+            @Override
+            public boolean review(List<String> review, String question) {
+                for (String line : review) out().println("  " + line);
+                out().flush();
+                return confirm(question);
+            }
+        };
+    }
+
     enum Answer { YES, NO, END }
 
     Answer ask(String question) {

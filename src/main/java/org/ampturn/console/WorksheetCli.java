@@ -21,6 +21,7 @@ import org.ampturn.worksheet.LimitedEvaluator;
 import org.ampturn.worksheet.Mismatch;
 import org.ampturn.worksheet.Replay;
 import org.ampturn.worksheet.ShellEvaluator;
+import org.ampturn.worksheet.TrustReview;
 import org.ampturn.worksheet.TrustStore;
 import org.ampturn.worksheet.Verifier;
 import org.ampturn.worksheet.Worksheet;
@@ -187,7 +188,7 @@ public final class WorksheetCli {
                 file = Path.of(name);
                 byte[] bytes = WorksheetFiles.readBytes(file);
                 w = WorksheetFiles.parse(file, bytes, ev.completeness());
-                if (!(o.trusted() || isTrusted(file, bytes))) return refused(file);
+                if (!(o.trusted() || isTrusted(file, bytes))) return refused(file, bytes);
             }
             boolean[] failed = {false};
             Path[] current = {file};
@@ -244,7 +245,7 @@ public final class WorksheetCli {
                 byte[] bytes = WorksheetFiles.readBytes(f);
                 w = WorksheetFiles.parse(f, bytes, ev.completeness());
                 if (!(o.trusted() || isTrusted(f, bytes))) {
-                    refused(f);
+                    refused(f, bytes);
                     refused++;
                     continue;
                 }
@@ -330,7 +331,7 @@ public final class WorksheetCli {
             Evaluator ev = limited(base, o);
             byte[] bytes = WorksheetFiles.readBytes(f);
             Worksheet w = WorksheetFiles.parse(f, bytes, ev.completeness());
-            if (!(o.trusted() || isTrusted(f, bytes))) return refused(f);
+            if (!(o.trusted() || isTrusted(f, bytes))) return refused(f, bytes);
             AtomicInteger done = chartsFor(f, null);
             List<Replay.Step> steps = Replay.run(w, f, ev, loader(ev, o, f), s -> done.incrementAndGet());
             List<Mismatch> m = Verifier.compare(f, steps);
@@ -371,9 +372,10 @@ public final class WorksheetCli {
         return trust.isTrusted(f, bytes);
     }
 
-    private int refused(Path f) {
-        out.println(f + ": not run: this machine has not saved or trusted this worksheet (its content hash is not in "
+    private int refused(Path f, byte[] bytes) {
+        out.println(TrustReview.visible(f.toString()) + ": not run: this machine has not saved or trusted this worksheet (its content hash is not in "
                 + trust.location() + "). A worksheet is code: read it, then give --trust, or #trust it in the console.");
+        for (TrustReview.Risk r : TrustReview.risks(new String(bytes, StandardCharsets.UTF_8))) out.println("  ! " + r);
         return NOT_TRUSTED;
     }
 

@@ -8,10 +8,6 @@ import org.ampturn.report.HtmlReport;
 import org.ampturn.worksheet.Mismatch;
 import org.ampturn.worksheet.Recovery;
 import org.ampturn.worksheet.Replay;
-import org.ampturn.worksheet.TrustStore;
-import org.ampturn.worksheet.Worksheet;
-import org.ampturn.worksheet.WorksheetFiles;
-import org.ampturn.worksheet.WorksheetFormat;
 import org.ampturn.worksheet.Workspace;
 
 /**
@@ -72,15 +68,7 @@ final class WorksheetCommands {
         Workspace w = ws();
         PrintWriter out = c.out();
         if (w.isDirty() && w.entryCount() > 0 && !c.confirm("The current worksheet has unsaved work. Open " + f.getFileName() + " anyway?")) return;
-        byte[] bytes = Files.readAllBytes(f);
-        Worksheet shown = WorksheetFiles.read(f, w.completeness());
-        boolean trusted = w.trustStore().isTrusted(f, bytes);
-        if (!trusted) {
-            out.println("  " + f + " (" + shown.entries().size() + " entries), not yet trusted on this machine:");
-            for (String line : WorksheetFormat.print(shown).split("\n")) out.println("  | " + line);
-            out.flush();
-        }
-        Workspace.Opened o = w.open(f, c::confirm, c.stepPrinter());
+        Workspace.Opened o = w.open(f, c.asker(), c.stepPrinter());
         if (!o.ran()) {
             out.println("  not run. Read it; #trust " + arg.strip() + " marks it safe on this machine, then #open it again");
             return;
@@ -97,14 +85,14 @@ final class WorksheetCommands {
     }
 
     private void replay(String arg) {
-        List<Replay.Step> steps = ws().replay(c::confirm, c.stepPrinter());
+        List<Replay.Step> steps = ws().replay(c.asker(), c.stepPrinter());
         long failed = steps.stream().filter(s -> s.result().failed()).count();
         c.out().println("  replayed " + steps.size() + " entries" + (failed == 0 ? "" : ", " + failed + " failed"));
     }
 
     private void verify(String arg) throws Exception {
         Path other = arg.isBlank() ? null : Path.of(arg.strip());
-        List<Mismatch> m = ws().verify(other, c::confirm, s -> {});
+        List<Mismatch> m = ws().verify(other, c.asker(), s -> {});
         String what = other == null ? "this worksheet" : other.toString();
         if (m.isEmpty()) {
             c.out().println("  every recorded result of " + what + " holds");
@@ -122,7 +110,7 @@ final class WorksheetCommands {
 
     private void use(String arg) throws Exception {
         Path f = path(arg, "#use needs a worksheet file, e.g. #use shared/coils.atw");
-        List<Replay.Step> steps = ws().use(f, c::confirm, c.stepPrinter());
+        List<Replay.Step> steps = ws().use(f, c.asker(), c.stepPrinter());
         long failed = steps.stream().filter(s -> s.result().failed()).count();
         c.out().println("  used " + f + ": " + steps.size() + " entries" + (failed == 0 ? "" : ", " + failed + " failed"));
     }
@@ -142,8 +130,8 @@ final class WorksheetCommands {
 
     private void trust(String arg) throws Exception {
         Path f = path(arg, "#trust needs a file, e.g. #trust from-a-colleague.atw");
-        ws().trust(f);
-        c.out().println("  trusted " + f + " as it is now (SHA-256 " + TrustStore.hash(Files.readAllBytes(f)).substring(0, 12)
+        String hash = ws().trust(f);
+        c.out().println("  trusted " + f + " as it is now (SHA-256 " + hash.substring(0, 12)
                 + "...) on this machine; an edited copy needs trusting again");
     }
 
@@ -168,7 +156,7 @@ final class WorksheetCommands {
         }
         if (pick < 1 || pick > all.size()) throw new IllegalArgumentException("#recover takes a number from 1 to " + all.size() + ", got " + arg.strip());
         Recovery r = all.get(pick - 1);
-        List<Replay.Step> steps = w.recover(r, c::confirm, c.stepPrinter());
+        List<Replay.Step> steps = w.recover(r, c.asker(), c.stepPrinter());
         c.out().println("  recovered " + r.entries().size() + " unsaved entries" + (r.worksheet() == null ? "" : " on " + r.worksheet())
                 + " (" + steps.size() + " entries run); #save keeps them");
     }

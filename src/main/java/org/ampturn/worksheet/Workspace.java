@@ -24,7 +24,27 @@ public final class Workspace implements Closeable {
     public interface Confirm {
         boolean ask(String question);
 
+        /**
+         * Shows the review of a worksheet that is not trusted ({@link TrustReview#lines}), then asks
+         * {@code question}. The console prints the review; without a terminal only the question counts.
+         */
+        default boolean review(List<String> review, String question) {
+            return ask(question);
+        }
+
         Confirm NO = q -> false;
+    }
+
+    /**
+     * True when {@code bytes} (read from {@code f}) may run: trusted, or reviewed and confirmed
+     * (which trusts them). The review shows these bytes, the ones that will run.
+     */
+    private boolean approved(Path f, byte[] bytes, String question, Confirm confirm) throws IOException {
+        if (trust.isTrusted(f, bytes)) return true;
+        String text = WorksheetFiles.decode(bytes, f.toString());
+        if (!confirm.review(TrustReview.lines(f, text, trust.earlier(f)), question)) return false;
+        trust.trust(f, bytes);
+        return true;
     }
 
     private final Evaluator evaluator;
@@ -245,11 +265,7 @@ public final class Workspace implements Closeable {
     public Opened open(Path f, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
         byte[] bytes = WorksheetFiles.readBytes(f); // hashed and run: the same bytes
         Worksheet w = WorksheetFiles.parse(f, bytes, completeness());
-        boolean ok = trust.isTrusted(f, bytes);
-        if (!ok && confirm.ask(f + " was not saved or trusted on this machine. A worksheet is code: run it?")) {
-            trust.trust(f, bytes);
-            ok = true;
-        }
+        boolean ok = approved(f, bytes, f + " was not saved or trusted on this machine. A worksheet is code: run it?", confirm);
         if (!ok) return new Opened(f, w, false, List.of(), List.of());
         sheet = w;
         setFile(f);
@@ -264,11 +280,8 @@ public final class Workspace implements Closeable {
         return p -> {
             byte[] bytes = WorksheetFiles.readBytes(p);
             Worksheet w = WorksheetFiles.parse(p, bytes, completeness());
-            if (!trust.isTrusted(p, bytes)) {
-                if (!confirm.ask(p + " (used by this worksheet) is not trusted on this machine: run it?")) {
-                    throw new IOException(p + " is not trusted on this machine, so it was not run; #trust " + p + " to allow it");
-                }
-                trust.trust(p, bytes);
+            if (!approved(p, bytes, p + " (used by this worksheet) is not trusted on this machine: run it?", confirm)) {
+                throw new IOException(p + " is not trusted on this machine, so it was not run; #trust " + p + " to allow it");
             }
             return w;
         };
@@ -300,20 +313,19 @@ public final class Workspace implements Closeable {
         if (other == null) return Verifier.compare(file, replay(sheet, file, confirm, onStep));
         byte[] bytes = WorksheetFiles.readBytes(other);
         Worksheet w = WorksheetFiles.parse(other, bytes, completeness());
-        if (!trust.isTrusted(other, bytes)) {
-            if (!confirm.ask(other + " was not saved or trusted on this machine. A worksheet is code: run it?")) {
-                throw new IOException(other + " is not trusted on this machine, so it was not run; #trust " + other + " to allow it");
-            }
-            trust.trust(other, bytes);
+        if (!approved(other, bytes, other + " was not saved or trusted on this machine. A worksheet is code: run it?", confirm)) {
+            throw new IOException(other + " is not trusted on this machine, so it was not run; #trust " + other + " to allow it");
         }
         try (Evaluator ev = fresh.get()) {
             return Verifier.compare(other, Replay.run(w, other, ev, loader(confirm), onStep));
         }
     }
 
-    /** Marks a file's current content as safe to run on this machine. */
-    public void trust(Path f) throws IOException {
-        trust.trust(f, Files.readAllBytes(f));
+    /** Marks a file's current content as safe to run on this machine; returns its SHA-256. */
+    public String trust(Path f) throws IOException {
+        byte[] bytes = WorksheetFiles.readBytes(f);
+        trust.trust(f, bytes);
+        return TrustStore.hash(bytes);
     }
 
     public TrustStore trustStore() {
@@ -345,7 +357,7 @@ public final class Workspace implements Closeable {
         Worksheet base = Worksheet.titled("");
         if (r.worksheet() != null && Files.exists(r.worksheet())) {
             byte[] bytes = WorksheetFiles.readBytes(r.worksheet());
-            if (!trust.isTrusted(r.worksheet(), bytes) && !confirm.ask(r.worksheet() + " changed since that session and is not trusted: run it?")) {
+            if (!approved(r.worksheet(), bytes, r.worksheet() + " changed since that session and is not trusted: run it?", confirm)) {
                 throw new IOException(r.worksheet() + " is not trusted on this machine; #trust it, then #recover");
             }
             base = WorksheetFiles.parse(r.worksheet(), bytes, completeness());

@@ -20,8 +20,8 @@ class ConsoleFileTest {
         Files.writeString(ws, "// ampturn worksheet 1\n// title: valve coil\n\nvar bobbin = mm(18)\n//= bobbin = 18.00 mm\n"
                 + "double layers(double d) {\n  return bobbin.si() / d;\n}\nlayers(0.5e-3)\n");
         try (ConsoleHarness h = new ConsoleHarness(dir, null, ws)) {
-            int at = h.await(ws + " (3 entries), not yet trusted on this machine:");
-            at = h.await("  | var bobbin = mm(18)", at);
+            int at = h.await(ws + " (9 lines) is not trusted on this machine.");
+            at = h.await("  4 | var bobbin = mm(18)", at);
             at = h.await("A worksheet is code: run it?", at);
             h.type("y\r");
             at = h.await("valve-coil 1> var bobbin = mm(18)".replace(">", h.arrow()), at);

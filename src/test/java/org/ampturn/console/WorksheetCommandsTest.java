@@ -77,7 +77,9 @@ class WorksheetCommandsTest {
         }
         try (ConsoleHarness h = new ConsoleHarness(dir)) {
             h.type("#open " + f + "\r");
-            int at = h.await("not yet trusted on this machine:\n  | // ampturn worksheet 1\n");
+            int at = h.await(f + " (20 lines) is not trusted on this machine.");
+            at = h.await("  No line reaches files, processes, the network", at);
+            at = h.await(" 1 | // ampturn worksheet 1\n", at);
             at = h.await("A worksheet is code: run it?", at);
             h.type("n\r");
             at = h.await("not run.", at);
