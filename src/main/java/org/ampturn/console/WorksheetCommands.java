@@ -5,9 +5,11 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.ampturn.report.HtmlReport;
+import org.ampturn.worksheet.Block;
 import org.ampturn.worksheet.Mismatch;
 import org.ampturn.worksheet.Recovery;
 import org.ampturn.worksheet.Replay;
+import org.ampturn.worksheet.TrustReview;
 import org.ampturn.worksheet.Workspace;
 
 /**
@@ -156,6 +158,17 @@ final class WorksheetCommands {
         }
         if (pick < 1 || pick > all.size()) throw new IllegalArgumentException("#recover takes a number from 1 to " + all.size() + ", got " + arg.strip());
         Recovery r = all.get(pick - 1);
+        // what will run, before it runs: the journal is this tool's (its seals hold), but show it
+        c.out().println("  " + TrustReview.visible(r.toString()) + (r.worksheet() == null ? "" : "; its file's entries run first") + ":");
+        for (Block b : r.blocks()) {
+            if (b instanceof Block.Entry) for (String l : ((Block.Entry) b).source().split("\n")) c.out().println("  | " + TrustReview.visible(l));
+            else if (b instanceof Block.Failed) c.out().println("  | (failed, kept as a record, not run) " + TrustReview.visible(((Block.Failed) b).source().lines().findFirst().orElse("")));
+            else if (b instanceof Block.Use) c.out().println("  | #use " + TrustReview.visible(((Block.Use) b).path()));
+        }
+        if (!c.confirm("Run these again to bring the work back?")) {
+            c.out().println("  not recovered; the journal stays (#recover asks again)");
+            return;
+        }
         List<Replay.Step> steps = w.recover(r, c.asker(), c.stepPrinter());
         c.out().println("  recovered " + r.entries().size() + " unsaved entries" + (r.worksheet() == null ? "" : " on " + r.worksheet())
                 + " (" + steps.size() + " entries run); #save keeps them");

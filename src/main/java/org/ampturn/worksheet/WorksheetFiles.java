@@ -106,6 +106,13 @@ public final class WorksheetFiles {
     /** Writes {@code text} to {@code target} through a temporary file and an atomic rename. */
     public static byte[] saveText(String text, Path target, Writer writer) throws SaveException {
         Path abs = target.toAbsolutePath();
+        try {
+            // a symbolic link stays a link: the file it points to is replaced
+            if (Files.isSymbolicLink(abs)) abs = abs.toRealPath();
+        } catch (IOException e) {
+            throw new SaveException(target, true, e);
+        }
+        removeStaleTemporaries(abs);
         boolean existed = Files.exists(abs);
         byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
         Path tmp = null;
@@ -137,6 +144,27 @@ public final class WorksheetFiles {
                     // the temporary file is harmless; the message already says the save failed
                 }
             }
+        }
+    }
+
+    /**
+     * Deletes temporary files of earlier saves of {@code target} that a killed process left behind
+     * ({@code .NAME.*.tmp} beside it, older than a minute, so a save in progress elsewhere is spared).
+     */
+    private static void removeStaleTemporaries(Path target) {
+        Path dir = target.getParent();
+        String prefix = "." + target.getFileName() + ".";
+        long old = System.currentTimeMillis() - 60_000;
+        try (java.util.stream.Stream<Path> s = Files.list(dir)) {
+            for (Path p : s.filter(p -> p.getFileName().toString().startsWith(prefix) && p.getFileName().toString().endsWith(".tmp")).toList()) {
+                try {
+                    if (Files.getLastModifiedTime(p).toMillis() < old) Files.deleteIfExists(p);
+                } catch (IOException ignored) {
+                    // another process's file, or gone already
+                }
+            }
+        } catch (IOException | RuntimeException ignored) {
+            // tidying is a courtesy
         }
     }
 

@@ -54,6 +54,8 @@ public final class Workspace implements Closeable {
     private final Path journalDir;
     private Worksheet sheet = Worksheet.titled("");
     private Path file;
+    /** SHA-256 of the file as this worksheet last read or wrote it, or null when it has not. */
+    private String diskHash;
     private boolean dirty;
     private int replaying;
     private int replayDone;
@@ -232,22 +234,88 @@ public final class Workspace implements Closeable {
         Path t = target != null ? target : file;
         if (t == null) throw new IOException("this worksheet has no file yet: give a name, e.g. #save coil.atw");
         if (!t.getFileName().toString().contains(".")) t = t.resolveSibling(t.getFileName() + ".atw");
+        refuseIfChangedOnDisk(t);
         Worksheet w = sheet.withHeader("tool", "ampturn " + org.ampturn.Ampturn.version());
         if (w.title().isEmpty()) {
             String n = t.getFileName().toString().replaceFirst("\\.atw$", "");
             w = Worksheet.of(titleFirst(n, w), w.blocks());
         }
-        byte[] bytes = WorksheetFiles.save(w, t);
+        w = w.withBlocks(figuresBeside(w.blocks(), t));
+        byte[] bytes = WorksheetFormat.print(w).getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        String hash = TrustStore.hash(bytes);
+        Path saving = t;
+        // journal first, then trust, then the rename: a kill at any point leaves either the old file
+        // with the journal's work, or the new file, trusted, that the journal knows was written
+        log(j -> j.saving(saving, hash));
+        trust.trust(t, bytes);
+        WorksheetFiles.saveText(WorksheetFormat.print(w), t, WorksheetFiles.Writer.PLAIN);
         sheet = w;
         setFile(t);
+        diskHash = hash;
         dirty = false;
-        trust.trust(t, bytes);
-        Path saved = t;
-        log(j -> j.saved(saved));
+        log(j -> j.saved(saving));
         return t;
     }
 
-    private static java.util.Map<String, String> titleFirst(String title, Worksheet w) {
+    /**
+     * Refuses to save over a file that changed on disk since this worksheet opened or last saved it
+     * (another console, an editor), or over an existing file that is not this worksheet's: the work
+     * stays unsaved and journalled, and a new name keeps it.
+     */
+    private void refuseIfChangedOnDisk(Path t) throws IOException {
+        if (!Files.exists(t)) return;
+        boolean ours = file != null && t.toAbsolutePath().normalize().equals(file.toAbsolutePath().normalize());
+        if (!ours) {
+            throw new IOException(t + " already exists and is not this worksheet's file; save under a new name, or #open it");
+        }
+        String now = TrustStore.hash(WorksheetFiles.readBytes(t));
+        if (diskHash == null || !now.equals(diskHash)) {
+            throw new IOException(t + " changed on disk since this console opened or saved it (another console or an editor wrote it);"
+                    + " nothing was written and your work is kept: #save " + suggestion(t) + " saves it beside, or #open the file to see the other version");
+        }
+    }
+
+    private static String suggestion(Path t) {
+        String n = t.getFileName().toString().replaceFirst("\\.atw$", "");
+        for (int k = 2; ; k++) {
+            Path p = t.resolveSibling(n + "-" + k + ".atw");
+            if (!Files.exists(p)) return p.toString();
+        }
+    }
+
+    /**
+     * The blocks with their figures beside {@code t}: a chart file recorded elsewhere (made before
+     * the first save, or in another worksheet's folder) is moved (or, when an earlier file still
+     * names it, copied) into {@code t}'s figures folder, and every figure path becomes relative to {@code t}.
+     */
+    private List<Block> figuresBeside(List<Block> blocks, Path t) throws IOException {
+        Path folder = WorksheetFiles.figuresFolder(t);
+        Path newBase = t.toAbsolutePath().getParent();
+        Path oldBase = file == null ? Path.of("").toAbsolutePath() : file.toAbsolutePath().getParent();
+        List<Block> out = new ArrayList<>();
+        for (Block b : blocks) {
+            if (!(b instanceof Block.Entry) || ((Block.Entry) b).figures().isEmpty()) {
+                out.add(b);
+                continue;
+            }
+            Block.Entry e = (Block.Entry) b;
+            List<String> figs = new ArrayList<>();
+            for (String f : e.figures()) {
+                Path p = oldBase.resolve(f).normalize();
+                if (Files.isRegularFile(p) && !p.startsWith(folder)) {
+                    Files.createDirectories(folder);
+                    Path dest = folder.resolve(p.getFileName().toString());
+                    for (int k = 2; Files.exists(dest); k++) dest = folder.resolve(k + "-" + p.getFileName());
+                    if (file == null) Files.move(p, dest);
+                    else Files.copy(p, dest);
+                    p = dest;
+                }
+                figs.add(p.startsWith(newBase) ? newBase.relativize(p).toString().replace(java.io.File.separatorChar, '/') : f);
+            }
+            out.add(e.withRecord(e.results(), figs));
+        }
+        return out;
+    }    private static java.util.Map<String, String> titleFirst(String title, Worksheet w) {
         java.util.Map<String, String> h = new java.util.LinkedHashMap<>();
         h.put("title", title);
         h.putAll(w.header());
@@ -269,6 +337,7 @@ public final class Workspace implements Closeable {
         if (!ok) return new Opened(f, w, false, List.of(), List.of());
         sheet = w;
         setFile(f);
+        diskHash = TrustStore.hash(bytes);
         dirty = false;
         log(j -> j.opened(f));
         List<Replay.Step> steps = replay(w, f, confirm, onStep);
@@ -361,6 +430,7 @@ public final class Workspace implements Closeable {
                 throw new IOException(r.worksheet() + " is not trusted on this machine; #trust it, then #recover");
             }
             base = WorksheetFiles.parse(r.worksheet(), bytes, completeness());
+            diskHash = TrustStore.hash(bytes);
         }
         Worksheet w = r.applyTo(base);
         sheet = w;

@@ -199,4 +199,66 @@ class WorkspaceTest {
             assertEquals(3, ws.worksheet().entries().size(), "what was not run is still in the worksheet");
         }
     }
+
+    @Test
+    void twoConsolesOnOneFileDoNotLoseWork() throws Exception {
+        Path f = dir.resolve("shared.atw");
+        try (Workspace a = workspace(VerifierTest.truth()); Workspace b = workspace(VerifierTest.truth())) {
+            a.enter("var L = mH(4.7);");
+            a.save(f);
+            b.open(f, Workspace.Confirm.NO, s -> {});
+            a.enter("var I = A(2);");
+            b.enter("L.times(I.pow(2)).div(2)");
+            b.save(null); // B saves first
+            IOException e = assertThrows(IOException.class, () -> a.save(null));
+            assertTrue(e.getMessage().contains("changed on disk since this console opened or saved it"), e.getMessage());
+            assertTrue(e.getMessage().contains("#save " + dir.resolve("shared-2.atw")), e.getMessage());
+            assertTrue(a.isDirty(), "A's work is still unsaved, so its journal stays");
+            assertTrue(Files.readString(f).contains("L.times(I.pow(2)).div(2)"), "B's save is intact");
+            a.save(dir.resolve("shared-2.atw"));
+            assertTrue(Files.readString(dir.resolve("shared-2.atw")).contains("var I = A(2);"));
+            IOException other = assertThrows(IOException.class, () -> workspace(VerifierTest.truth()).save(f));
+            assertTrue(other.getMessage().contains("already exists and is not this worksheet's file"), other.getMessage());
+        }
+    }
+
+    @Test
+    void savingASymlinkedWorksheetKeepsTheLink() throws Exception {
+        Path real = Files.createDirectories(dir.resolve("repo")).resolve("coil.atw");
+        Path link = dir.resolve("coil.atw");
+        try (Workspace a = workspace(VerifierTest.truth())) {
+            a.enter("var L = mH(4.7);");
+            a.save(real);
+        }
+        Files.createSymbolicLink(link, real);
+        try (Workspace b = workspace(VerifierTest.truth())) {
+            b.open(link, Workspace.Confirm.NO, s -> {});
+            b.enter("var I = A(2);");
+            b.save(null);
+        }
+        assertTrue(Files.isSymbolicLink(link), "still a link");
+        assertTrue(Files.readString(real).contains("var I = A(2);"), "the file it points to got the work");
+        try (var s = Files.list(real.getParent())) {
+            assertEquals(List.of(real), s.toList(), "no temporary file left beside it");
+        }
+    }
+
+    @Test
+    void chartsMadeBeforeTheFirstSaveMoveBesideTheWorksheet() throws Exception {
+        Path loose = Files.createDirectories(dir.resolve("elsewhere")).resolve("03-current.svg");
+        Files.writeString(loose, "<svg xmlns='http://www.w3.org/2000/svg'/>");
+        FakeEvaluator ev = VerifierTest.truth();
+        ev.answers.put("plot(run)", new Evaluation(FakeEvaluator.evaluation("plot(run)", "  = figure current").outcome(), List.of(loose.toString())));
+        Path f = dir.resolve("proj/gate.atw");
+        Files.createDirectories(f.getParent());
+        try (Workspace ws = workspace(ev)) {
+            ws.enter("plot(run)");
+            assertEquals(List.of(loose.toString()), ws.worksheet().entries().get(0).figures(), "before a save: where it was made");
+            ws.save(f);
+            assertEquals(List.of("gate.figures/03-current.svg"), ws.worksheet().entries().get(0).figures());
+        }
+        assertTrue(Files.exists(dir.resolve("proj/gate.figures/03-current.svg")));
+        assertFalse(Files.exists(loose), "moved, not left behind");
+        assertTrue(Files.readString(f).contains("//= figure: gate.figures/03-current.svg\n"), Files.readString(f));
+    }
 }
