@@ -332,24 +332,27 @@ public final class WorksheetCli {
             byte[] bytes = WorksheetFiles.readBytes(f);
             Worksheet w = WorksheetFiles.parse(f, bytes, ev.completeness());
             if (!(o.trusted() || isTrusted(f, bytes))) return refused(f, bytes);
-            AtomicInteger done = chartsFor(f, null);
-            List<Replay.Step> steps = Replay.run(w, f, ev, loader(ev, o, f), s -> done.incrementAndGet());
-            List<Mismatch> m = Verifier.compare(f, steps);
-            // per entry: does the fresh result match the record?
-            Set<Integer> differing = new HashSet<>();
-            for (Mismatch x : m) if (x.file() != null && x.file().toAbsolutePath().normalize().equals(f.toAbsolutePath().normalize())) differing.add(x.line());
-            for (Replay.Step s : steps) {
-                if (!s.isIn(f)) continue;
-                String first = s.entry().source().lines().findFirst().orElse("");
-                String verdict = s.result().failed() || s.result().interrupted() ? "FAILED " : differing.contains(s.line()) ? "DIFFERS" : "matches";
-                out.println(verdict + "  " + f.getFileName() + ":" + s.line() + "  " + first + (s.entry().source().contains("\n") ? " ..." : ""));
+            // the fresh run draws its charts in a scratch folder: exporting leaves the worksheet's folder as it was
+            try (Scratch scratch = Scratch.create()) {
+                AtomicInteger done = chartsFor(f, scratch.dir());
+                List<Replay.Step> steps = Replay.run(w, f, ev, loader(ev, o, f), s -> done.incrementAndGet());
+                List<Mismatch> m = Verifier.compare(f, steps);
+                // per entry: does the fresh result match the record?
+                Set<Integer> differing = new HashSet<>();
+                for (Mismatch x : m) if (x.file() != null && x.file().toAbsolutePath().normalize().equals(f.toAbsolutePath().normalize())) differing.add(x.line());
+                for (Replay.Step s : steps) {
+                    if (!s.isIn(f)) continue;
+                    String first = s.entry().source().lines().findFirst().orElse("");
+                    String verdict = s.result().failed() || s.result().interrupted() ? "FAILED " : differing.contains(s.line()) ? "DIFFERS" : "matches";
+                    out.println(verdict + "  " + f.getFileName() + ":" + s.line() + "  " + first + (s.entry().source().contains("\n") ? " ..." : ""));
+                }
+                for (Mismatch x : m) out.println(x);
+                HtmlReport.write(w, f, steps, m, List.of(scratch.dir()), target);
+                boolean failed = steps.stream().anyMatch(s -> s.result().failed() || s.result().interrupted());
+                out.println("wrote " + target + (m.isEmpty() ? "; every result matches its record"
+                        : "; " + m.size() + (m.size() == 1 ? " result differs" : " results differ") + " from the record (marked in the report)"));
+                return failed ? FAILED : m.isEmpty() ? HOLD : DIFFER;
             }
-            for (Mismatch x : m) out.println(x);
-            HtmlReport.write(w, f, steps, m, target);
-            boolean failed = steps.stream().anyMatch(s -> s.result().failed() || s.result().interrupted());
-            out.println("wrote " + target + (m.isEmpty() ? "; every result matches its record"
-                    : "; " + m.size() + (m.size() == 1 ? " result differs" : " results differ") + " from the record (marked in the report)"));
-            return failed ? FAILED : m.isEmpty() ? HOLD : DIFFER;
         } catch (IOException | WorksheetFormatException e) {
             err.println("ampturn: " + e.getMessage());
             return USAGE;

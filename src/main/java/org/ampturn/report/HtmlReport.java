@@ -19,8 +19,8 @@ import org.ampturn.worksheet.WorksheetFiles;
 
 /**
  * The report of a worksheet: one self-contained HTML file with inline CSS (screen and A4 print),
- * the title and header, notes as prose, each entry with its result, the charts embedded (SVG as
- * text, PNG as a {@code data:} URI; nothing is fetched from a network), the cautions that apply
+ * the title and header, notes as prose, each entry with its result, the charts embedded as
+ * {@code data:} images (SVG too, so none of its scripts runs; nothing is fetched from a network), the cautions that apply
  * ({@link Cautions}), the tool and Java versions, and the statement that results defer to local
  * codes and licensed practice.
  */
@@ -40,6 +40,16 @@ public final class HtmlReport {
      * their entries and counted at the top.
      */
     public static String render(Worksheet w, Path file, List<Replay.Step> steps, List<Mismatch> differences) {
+        return render(w, file, steps, differences, List.of());
+    }
+
+    /**
+     * As above; charts are embedded from the worksheet's figures folder and from {@code drawnIn}
+     * (where a fresh run drew them), and from nowhere else.
+     */
+    public static String render(Worksheet w, Path file, List<Replay.Step> steps, List<Mismatch> differences, List<Path> drawnIn) {
+        List<Path> figureDirs = new ArrayList<>(drawnIn);
+        if (file != null) figureDirs.add(WorksheetFiles.figuresFolder(file));
         java.util.Map<Integer, List<Mismatch>> differ = new java.util.HashMap<>();
         for (Mismatch m : differences) {
             if (file == null || m.file() == null || m.file().toAbsolutePath().normalize().equals(file.toAbsolutePath().normalize())) {
@@ -141,7 +151,7 @@ public final class HtmlReport {
                             .append(esc(m.recorded() == null ? "(nothing)" : m.recorded())).append("</code>, now <code>")
                             .append(esc(m.fresh() == null ? "(nothing)" : m.fresh())).append("</code>.</p>\n");
                 }
-                for (String f : e.figures()) h.append(figure(base, f));
+                for (String f : e.figures()) h.append(figure(base, f, figureDirs));
                 h.append("</section>\n");
             }
         }
@@ -162,9 +172,15 @@ public final class HtmlReport {
      * is the worksheet itself or another worksheet ({@link #clash}).
      */
     public static Path write(Worksheet w, Path file, List<Replay.Step> steps, List<Mismatch> differences, Path out) throws IOException {
+        return write(w, file, steps, differences, List.of(), out);
+    }
+
+    /** As above, embedding charts the fresh run drew in {@code drawnIn} too. */
+    public static Path write(Worksheet w, Path file, List<Replay.Step> steps, List<Mismatch> differences, List<Path> drawnIn, Path out)
+            throws IOException {
         String clash = clash(file, out);
         if (clash != null) throw new IOException(clash);
-        WorksheetFiles.saveText(render(w, file, steps, differences), out, WorksheetFiles.Writer.PLAIN);
+        WorksheetFiles.saveText(render(w, file, steps, differences, drawnIn), out, WorksheetFiles.Writer.PLAIN);
         return out;
     }
 
@@ -228,29 +244,50 @@ public final class HtmlReport {
         para.setLength(0);
     }
 
-    private static String figure(Path base, String name) {
+    /**
+     * A chart embedded as an image, never as markup: an SVG goes in as a {@code data:} image, where a
+     * browser runs none of its scripts or event handlers and fetches nothing. Only a file inside
+     * one of {@code allowed} (the worksheet's figures folder, or the folder the fresh run drew in)
+     * is embedded; a path that leads elsewhere ({@code ../}, an absolute path, a link) is named and
+     * left out.
+     */
+    private static String figure(Path base, String name, List<Path> allowed) {
         Path f = base.resolve(name).normalize();
-        if (f.startsWith(base)) name = base.relativize(f).toString();
-        String lower = name.toLowerCase(java.util.Locale.ROOT);
-        String cap = "<figcaption>" + esc(name) + "</figcaption>";
+        String shownName = f.startsWith(base) ? base.relativize(f).toString() : name;
+        String lower = shownName.toLowerCase(java.util.Locale.ROOT);
+        String cap = "<figcaption>" + esc(shownName) + "</figcaption>";
+        if (!Files.exists(f)) return "<p class=\"missing\">Figure " + esc(shownName) + " was not found next to the worksheet.</p>\n";
+        if (!inside(f, allowed)) {
+            return "<p class=\"missing\">Figure " + esc(shownName) + " is outside the worksheet's figures folder, so it is not embedded.</p>\n";
+        }
         try {
             if (lower.endsWith(".svg")) {
-                String svg = Files.readString(f, StandardCharsets.UTF_8)
-                        .replaceAll("(?s)<\\?xml.*?\\?>", "")
-                        .replaceAll("(?s)<!DOCTYPE[^>]*>", "")
-                        .replaceAll("(?is)<script.*?</script>", "")
-                        .strip();
-                return "<figure class=\"chart\">" + scalable(svg) + cap + "</figure>\n";
+                String svg = scalable(Files.readString(f, StandardCharsets.UTF_8));
+                return "<figure class=\"chart\"><img alt=\"" + esc(shownName) + "\" src=\"data:image/svg+xml;base64,"
+                        + Base64.getEncoder().encodeToString(svg.getBytes(StandardCharsets.UTF_8)) + "\">" + cap + "</figure>\n";
             }
             if (lower.endsWith(".png") || lower.endsWith(".jpg") || lower.endsWith(".jpeg")) {
                 String type = lower.endsWith(".png") ? "image/png" : "image/jpeg";
-                return "<figure class=\"chart\"><img alt=\"" + esc(name) + "\" src=\"data:" + type + ";base64,"
+                return "<figure class=\"chart\"><img alt=\"" + esc(shownName) + "\" src=\"data:" + type + ";base64,"
                         + Base64.getEncoder().encodeToString(Files.readAllBytes(f)) + "\">" + cap + "</figure>\n";
             }
-            return "<p class=\"missing\">Figure " + esc(name) + " is not SVG or PNG, so it is not embedded.</p>\n";
+            return "<p class=\"missing\">Figure " + esc(shownName) + " is not SVG or PNG, so it is not embedded.</p>\n";
         } catch (IOException e) {
-            return "<p class=\"missing\">Figure " + esc(name) + " was not found next to the worksheet.</p>\n";
+            return "<p class=\"missing\">Figure " + esc(shownName) + " could not be read, so it is not embedded.</p>\n";
         }
+    }
+
+    /** True when the real location of {@code f} (links followed) lies in one of the folders. */
+    private static boolean inside(Path f, List<Path> folders) {
+        try {
+            Path real = f.toRealPath();
+            for (Path d : folders) {
+                if (d != null && Files.isDirectory(d) && real.startsWith(d.toRealPath())) return true;
+            }
+        } catch (IOException e) {
+            return false;
+        }
+        return false;
     }
 
     private static final java.util.regex.Pattern SVG_TAG = java.util.regex.Pattern.compile("<svg\\b[^>]*>");

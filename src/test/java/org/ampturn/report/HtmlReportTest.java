@@ -60,8 +60,8 @@ class HtmlReportTest {
         assertTrue(html.contains("<p class=\"note\">The latch coil runs from 12 V. Its switch opens at 20 ms.</p>\n<p class=\"note\">A second paragraph.</p>"), html);
         assertTrue(html.contains("<pre class=\"src\"><code>var L = mH(180);</code></pre>\n<pre class=\"out\">L = 180.0 mH</pre>"));
         assertTrue(html.contains("<pre class=\"out\">= 1.588 J</pre>"));
-        // charts inline: SVG as markup (prologue and scripts removed), PNG as a data URI
-        assertTrue(html.contains("<figure class=\"chart\"><svg xmlns=\"http://www.w3.org/2000/svg\""));
+        // charts inline as data images: SVG too, so a browser runs none of its scripts
+        assertTrue(html.contains("<figure class=\"chart\"><img alt=\"gate.figures/01-current.svg\" src=\"data:image/svg+xml;base64,"), html);
         assertTrue(html.contains("src=\"data:image/png;base64,iVBORw0KGgo"), "PNG signature in base64");
         assertTrue(html.contains("Figure gate.figures/missing.svg was not found next to the worksheet."));
         assertFalse(html.contains("<script"), "no script");
@@ -127,5 +127,34 @@ class HtmlReportTest {
         Path out = Path.of("target/report-sample.html").toAbsolutePath();
         HtmlReport.write(WorksheetFiles.read(f, Completeness.BRACKETS), f, null, out);
         assertTrue(Files.size(out) > 2000);
+    }
+
+    @Test
+    void aHostileSvgNeverRunsAndOnlyTheFiguresFolderIsRead() throws Exception {
+        Path f = sheet();
+        Files.writeString(dir.resolve("gate.figures/03-evil.svg"), "<svg xmlns=\"http://www.w3.org/2000/svg\" onload=\"alert(1)\">"
+                + "<foreignObject><body xmlns=\"http://www.w3.org/1999/xhtml\"><script>alert(2)</script></body></foreignObject></svg>");
+        Files.writeString(dir.resolve("secret.svg"), "<svg xmlns=\"http://www.w3.org/2000/svg\"><text>private drawing</text></svg>");
+        Path outside = Files.createTempFile("ampturn-outside-", ".svg");
+        Files.writeString(outside, "<svg xmlns=\"http://www.w3.org/2000/svg\"><text>another folder</text></svg>");
+        Files.createSymbolicLink(dir.resolve("gate.figures/04-link.svg"), dir.resolve("secret.svg"));
+        try {
+            String text = Files.readString(f) + "mm(1)\n//= 1.000 mm\n//= figure: gate.figures/03-evil.svg\n//= figure: gate.figures/../secret.svg\n"
+                    + "//= figure: " + outside + "\n//= figure: gate.figures/04-link.svg\n";
+            Files.writeString(f, text);
+            String html = HtmlReport.render(WorksheetFiles.read(f, Completeness.BRACKETS), f, null);
+            assertFalse(html.contains("onload") || html.contains("foreignObject") || html.contains("<svg") || html.contains("alert("),
+                    "SVG markup never reaches the page");
+            assertTrue(html.contains("<img alt=\"gate.figures/03-evil.svg\" src=\"data:image/svg+xml;base64,"), "embedded as an image only");
+            assertTrue(html.contains("Figure secret.svg is outside the worksheet's figures folder, so it is not embedded."), html);
+            assertTrue(html.contains("Figure " + outside + " is outside the worksheet's figures folder"), html);
+            assertTrue(html.contains("Figure gate.figures/04-link.svg is outside the worksheet's figures folder"), "a link out is followed and refused");
+            for (var m : Pattern.compile("base64,([A-Za-z0-9+/=]+)").matcher(html).results().toList()) {
+                String decoded = new String(java.util.Base64.getDecoder().decode(m.group(1)), java.nio.charset.StandardCharsets.ISO_8859_1);
+                assertFalse(decoded.contains("private drawing") || decoded.contains("another folder"), "no outside file was read into the report");
+            }
+        } finally {
+            Files.deleteIfExists(outside);
+        }
     }
 }
