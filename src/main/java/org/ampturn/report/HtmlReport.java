@@ -79,14 +79,33 @@ public final class HtmlReport {
                 .append("<meta name=\"generator\" content=\"ampturn ").append(esc(Ampturn.version())).append("\">\n")
                 .append("<title>").append(esc(title)).append("</title>\n<style>\n").append(CSS).append("</style>\n</head>\n<body>\n");
         h.append("<header>\n<h1>").append(esc(title)).append("</h1>\n<dl class=\"meta\">\n");
+        // what a design file needs first: who, which revision, which exact text, which tool, checked or not
+        for (String key : List.of("author", "checker", "revision", "date")) {
+            h.append("<dt>").append(key).append("</dt><dd>").append(esc(w.header().getOrDefault(key, "(not given in the header)"))).append("</dd>\n");
+        }
         for (Map.Entry<String, String> e : w.header().entrySet()) {
-            if (e.getKey().equals("title")) continue;
+            if (List.of("title", "author", "checker", "revision", "date").contains(e.getKey())) continue;
             h.append("<dt>").append(esc(e.getKey())).append("</dt><dd>").append(esc(e.getValue())).append("</dd>\n");
         }
-        if (file != null) h.append("<dt>file</dt><dd>").append(esc(file.getFileName().toString())).append("</dd>\n");
-        h.append("<dt>results</dt><dd>").append(steps == null ? "as recorded in the worksheet" : "computed afresh on " + LocalDate.now()
-                        + (differences.isEmpty() ? ", every one as recorded" : "; " + differences.size() + " differ from the record (marked below)"))
+        if (file != null) {
+            h.append("<dt>file</dt><dd>").append(esc(file.getFileName().toString())).append("</dd>\n");
+            try {
+                h.append("<dt>SHA-256</dt><dd><code>").append(org.ampturn.worksheet.TrustStore.hash(Files.readAllBytes(file)))
+                        .append("</code> (the file as it is on disk)</dd>\n");
+            } catch (IOException e) {
+                h.append("<dt>SHA-256</dt><dd>(the file could not be read)</dd>\n");
+            }
+        }
+        h.append("<dt>made with</dt><dd>Ampturn ").append(esc(Ampturn.version())).append(" on Java ")
+                .append(esc(System.getProperty("java.version"))).append("</dd>\n");
+        boolean anyFailed = failed.stream().anyMatch(b -> b);
+        String verdict = steps == null ? "not verified: the results are as recorded in the worksheet"
+                : anyFailed ? "NOT verified: entries failed when run on " + LocalDate.now()
+                : differences.isEmpty() ? "verified: computed afresh on " + LocalDate.now() + ", every result as recorded"
+                : "NOT verified: computed afresh on " + LocalDate.now() + "; " + differences.size() + " differ from the record (marked below)";
+        h.append("<dt>results</dt><dd class=\"").append(verdict.startsWith("verified") ? "ok" : "notok").append("\">").append(esc(verdict))
                 .append("</dd>\n</dl>\n</header>\n");
+        h.append(summary(w, fresh));
 
         h.append("<section class=\"cautions\" id=\"cautions\">\n<h2>Cautions</h2>\n");
         if (cautions.isEmpty()) {
@@ -222,6 +241,38 @@ public final class HtmlReport {
     }
 
     /**
+     * The summary at the top: the inputs (the worksheet's named values) and the key results (the
+     * values its expressions gave), first line of each, at most a dozen of each.
+     */
+    private static String summary(Worksheet w, List<Block.Entry> entries) {
+        List<String> inputs = new ArrayList<>(), results = new ArrayList<>();
+        for (Block.Entry e : entries) {
+            if (e.results().isEmpty()) continue;
+            String r = e.results().get(0);
+            if (r.startsWith("! ") || r.startsWith("| ") || r.startsWith("defined ") || r.startsWith("redefined ") || r.startsWith("imported ")) continue;
+            if (r.matches("^[\\p{L}_$][\\p{L}\\p{N}_$]* = .*")) {
+                if (inputs.size() < 12) inputs.add(r);
+            } else if (results.size() < 12) {
+                String src = e.source().lines().findFirst().orElse("");
+                results.add(src + "  =  " + r);
+            }
+        }
+        if (inputs.isEmpty() && results.isEmpty()) return "";
+        StringBuilder h = new StringBuilder("<section class=\"summary\" id=\"summary\">\n<h2>Summary</h2>\n");
+        if (!inputs.isEmpty()) {
+            h.append("<h3>Inputs</h3>\n<ul>\n");
+            for (String i : inputs) h.append("<li><code>").append(esc(i)).append("</code></li>\n");
+            h.append("</ul>\n");
+        }
+        if (!results.isEmpty()) {
+            h.append("<h3>Results</h3>\n<ul>\n");
+            for (String r : results) h.append("<li><code>").append(esc(r)).append("</code></li>\n");
+            h.append("</ul>\n");
+        }
+        return h.append("</section>\n").toString();
+    }
+
+    /**
      * Per entry of the worksheet, whether it failed: from the fresh run's typed outcome, or for a
      * report of the records alone, from the record's error mark ({@code //= ! ...}).
      */
@@ -342,6 +393,8 @@ public final class HtmlReport {
             "dl.meta dt { font-weight: 600; } dl.meta dd { margin: 0; }",
             ".caution { background: var(--warnbg); border-left: 4px solid var(--warn); padding: .5rem .8rem; margin: .5rem 0; break-inside: avoid; }",
             ".caution p { margin: .2rem 0; } .where { font: .8rem system-ui, sans-serif; color: var(--muted); }",
+            "dd.ok { color: #1f6b2a; font-weight: 600; } dd.notok { color: #a00000; font-weight: 600; }",
+            ".summary ul { margin: .2rem 0 .6rem; padding-left: 1.2rem; } .summary h3 { color: var(--ink); }",
             ".differs { color: #a00000; font: .85rem system-ui, sans-serif; margin: .1rem 0; }",
             ".defer { font-style: italic; } .failed { color: #a00000; font-weight: 600; }",
             ".entry.notrun pre.src { border-color: #d8a0a0; } .failed-note { font: .8rem system-ui, sans-serif; color: #a00000; margin: .1rem 0; }",

@@ -157,4 +157,27 @@ class HtmlReportTest {
             Files.deleteIfExists(outside);
         }
     }
+
+    @Test
+    void theReportCarriesWhatADesignFileNeedsAtTheTop() throws Exception {
+        Path f = dir.resolve("choke.atw");
+        Files.writeString(f, FakeEvaluator.SHEET.replace("// title: t\n", "// title: Choke energy\n// author: R. Ortiz\n// checker: M. Lind\n"
+                + "// revision: C\n// date: 2026-11-30\n"));
+        Worksheet w = WorksheetFiles.read(f, Completeness.BRACKETS);
+        String recorded = HtmlReport.render(w, f, null);
+        for (String s : List.of("<dt>author</dt><dd>R. Ortiz</dd>", "<dt>checker</dt><dd>M. Lind</dd>", "<dt>revision</dt><dd>C</dd>",
+                "<dt>date</dt><dd>2026-11-30</dd>", "<dt>SHA-256</dt><dd><code>" + org.ampturn.worksheet.TrustStore.hash(Files.readAllBytes(f)),
+                "<dt>made with</dt><dd>Ampturn " + org.ampturn.Ampturn.version(), "not verified: the results are as recorded",
+                "<h3>Inputs</h3>\n<ul>\n<li><code>L = 4.700 mH</code></li>\n<li><code>I = 2.000 A</code></li>",
+                "<h3>Results</h3>\n<ul>\n<li><code>L.times(I.pow(2)).div(2)  =  9.400 mJ</code></li>")) {
+            assertTrue(recorded.contains(s), s + " in:\n" + recorded);
+        }
+        assertTrue(recorded.indexOf("id=\"summary\"") < recorded.indexOf("<main>"), "the summary comes before the entries");
+        List<Replay.Step> steps = Replay.run(w, f, FakeEvaluator.truth(), p -> null, s -> {});
+        assertTrue(HtmlReport.render(w, f, steps, List.of()).contains("<dd class=\"ok\">verified: computed afresh on"));
+        List<Replay.Step> wrong = Replay.run(w, f, FakeEvaluator.truth().answer("L.times(I.pow(2)).div(2)", "  = 9.900 mJ"), p -> null, s -> {});
+        String differs = HtmlReport.render(w, f, wrong, org.ampturn.worksheet.Verifier.compare(f, wrong));
+        assertTrue(differs.contains("<dd class=\"notok\">NOT verified: computed afresh on"), differs);
+        assertTrue(HtmlReport.render(Worksheet.titled("none"), null, null).contains("<dt>author</dt><dd>(not given in the header)</dd>"));
+    }
 }
