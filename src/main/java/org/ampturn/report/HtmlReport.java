@@ -58,6 +58,7 @@ public final class HtmlReport {
         }
         List<Block.Entry> fresh = freshEntries(w, file, steps);
         List<Boolean> failed = failedEntries(w, file, steps);
+        List<List<Object>> values = freshValues(w, file, steps);
         Path base = file == null || file.toAbsolutePath().getParent() == null ? Path.of(".") : file.toAbsolutePath().getParent();
         String title = w.title().isEmpty() ? (file == null ? "Worksheet" : file.getFileName().toString()) : w.title();
 
@@ -67,7 +68,7 @@ public final class HtmlReport {
         for (int k = 0; k < w.blocks().size(); k++) {
             if (w.blocks().get(k) instanceof Block.Entry) {
                 Block.Entry e = fresh.get(ei++);
-                seen.add(new Cautions.Seen(w.lineOf(k), e.source(), e.results()));
+                seen.add(new Cautions.Seen(w.lineOf(k), e.source(), e.results(), values.get(ei - 1)));
                 if (failed.get(ei - 1)) errors.add("line " + w.lineOf(k));
             }
         }
@@ -237,6 +238,20 @@ public final class HtmlReport {
             out.add(recorded.get(k++).withRecord(s.result().records(), s.result().figures()));
         }
         while (k < recorded.size()) out.add(recorded.get(k++));
+        return out;
+    }
+
+    /** Per entry of the worksheet, the objects behind its fresh results (empty when it did not run now). */
+    static List<List<Object>> freshValues(Worksheet w, Path file, List<Replay.Step> steps) {
+        List<List<Object>> out = new ArrayList<>();
+        if (steps != null) {
+            for (Replay.Step s : steps) {
+                if (s.isIn(file) && !s.entry().source().startsWith("#use ")) out.add(s.result().outcome().values());
+            }
+        }
+        int n = w.entries().size();
+        while (out.size() < n) out.add(List.of());
+        while (out.size() > n) out.remove(out.size() - 1);
         return out;
     }
 

@@ -48,10 +48,19 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
      * @param text   the text without indent: {@code "9.000 mJ"}, {@code "coil = ..."},
      *               {@code "defined method f(double)"}, or the error message
      * @param detail for a compile error, the offending source line and a caret line under it; else empty
+     * @param value  for a value or a declaration, the object itself (a {@code Quantity}, a
+     *               {@code Transient}, ...), read from the session when the entry ran; null when
+     *               there is none or it could not be read. It lives only in this process: a worksheet
+     *               records the text
      */
-    public record Result(Kind kind, String text, List<String> detail) {
+    public record Result(Kind kind, String text, List<String> detail, Object value) {
         public Result {
             detail = List.copyOf(detail);
+        }
+
+        /** A result without the object behind it. */
+        public Result(Kind kind, String text, List<String> detail) {
+            this(kind, text, detail, null);
         }
 
         public static Result of(Kind kind, String text) {
@@ -102,6 +111,13 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
             for (int i = 1; i < parts.length; i++) out.add("  " + parts[i]);
             for (String d : r.detail()) out.add("  " + d);
         }
+        return out;
+    }
+
+    /** The objects the entry's values and declarations hold, in order (none for an entry that failed). */
+    public List<Object> values() {
+        List<Object> out = new ArrayList<>();
+        for (Result r : results) if (r.value() != null) out.add(r.value());
         return out;
     }
 

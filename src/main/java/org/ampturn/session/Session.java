@@ -79,7 +79,10 @@ public final class Session implements AutoCloseable {
     private volatile boolean stopRequested;
     private volatile long generation;
 
-    private Session(JShell shell, SessionImports library) {
+    private final SessionEngine engine;
+
+    private Session(JShell shell, SessionImports library, SessionEngine engine) {
+        this.engine = engine;
         this.shell = shell;
         this.analysis = shell.sourceCodeAnalysis();
         this.library = library;
@@ -122,13 +125,14 @@ public final class Session implements AutoCloseable {
 
     private static Session build() {
         CompilerNoise.install();
+        SessionEngine engine = new SessionEngine();
         JShell.Builder builder = JShell.builder()
-                .executionEngine(new SessionEngine(), Map.of())
+                .executionEngine(engine, Map.of())
                 .out(System.out)
                 .err(System.err);
         List<File> classPath = SessionClassPath.forEntries();
         if (!classPath.isEmpty()) builder.fileManager(fm -> SessionClassPath.apply(fm, classPath));
-        Session s = new Session(builder.build(), SessionImports.ofLibrary());
+        Session s = new Session(builder.build(), SessionImports.ofLibrary(), engine);
         synchronized (s.lock) {
             s.addImport(SessionImports.FACADE);
         }
@@ -524,8 +528,9 @@ public final class Session implements AutoCloseable {
                 return Result.of(Kind.ERROR, v.name() + " cannot be used until " + unresolved + " is defined");
             }
             String value = shown(e.value(), v.typeName());
-            if (v.subKind() == Snippet.SubKind.TEMP_VAR_EXPRESSION_SUBKIND) return Result.of(Kind.VALUE, value);
-            return Result.of(Kind.DECLARATION, v.name() + " = " + value);
+            Object object = e.status() == Snippet.Status.VALID ? engine.lastValue(v.name()) : null;
+            if (v.subKind() == Snippet.SubKind.TEMP_VAR_EXPRESSION_SUBKIND) return new Result(Kind.VALUE, value, List.of(), object);
+            return new Result(Kind.DECLARATION, v.name() + " = " + value, List.of(), object);
         }
         if (sn instanceof ExpressionSnippet) {
             ExpressionSnippet x = (ExpressionSnippet) sn;

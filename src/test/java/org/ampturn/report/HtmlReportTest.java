@@ -180,4 +180,21 @@ class HtmlReportTest {
         assertTrue(differs.contains("<dd class=\"notok\">NOT verified: computed afresh on"), differs);
         assertTrue(HtmlReport.render(Worksheet.titled("none"), null, null).contains("<dt>author</dt><dd>(not given in the header)</dd>"));
     }
+
+    @Test
+    void cautionsComeFromTheResultsThatRaisedThem() throws Exception {
+        Path f = dir.resolve("typed.atw");
+        // a text that reads like 300 V, and a quantity of 300 V; 60 V is the common-practice touch limit
+        Files.writeString(f, "// ampturn worksheet 1\n\n\"300 V\"\n//= 300 V\nV(300).times(0.2)\n//= 60.00 V\n");
+        try (org.ampturn.worksheet.ShellEvaluator shell = org.ampturn.worksheet.ShellEvaluator.start()) {
+            Worksheet w = WorksheetFiles.read(f, shell.completeness());
+            List<Replay.Step> steps = Replay.run(w, f, shell, p -> null, s -> {});
+            assertTrue(steps.get(1).result().outcome().values().get(0) instanceof org.ampturn.units.Quantity, "the object itself is kept");
+            String html = HtmlReport.render(w, f, steps, List.of());
+            assertFalse(html.contains("<h3>Voltage above 60 V</h3>"),
+                    "a string is not a voltage, and 300 V × 0.2 = 60 V is not above 60 V, whatever the text: " + html);
+            String recorded = HtmlReport.render(w, f, null);
+            assertTrue(recorded.contains("<h3>Voltage above 60 V</h3>"), "from records alone the text is all there is");
+        }
+    }
 }
