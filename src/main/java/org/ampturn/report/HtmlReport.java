@@ -59,6 +59,7 @@ public final class HtmlReport {
         List<Block.Entry> fresh = freshEntries(w, file, steps);
         List<Boolean> failed = failedEntries(w, file, steps);
         List<List<Object>> values = freshValues(w, file, steps);
+        List<org.ampturn.session.Outcome> outcomes = freshOutcomes(w, file, steps);
         Path base = file == null || file.toAbsolutePath().getParent() == null ? Path.of(".") : file.toAbsolutePath().getParent();
         String title = w.title().isEmpty() ? (file == null ? "Worksheet" : file.getFileName().toString()) : w.title();
 
@@ -156,7 +157,22 @@ public final class HtmlReport {
                 Block.Entry e = fresh.get(ei++);
                 h.append("<section class=\"entry\" id=\"line-").append(w.lineOf(k)).append("\">\n<div class=\"line\">")
                         .append(w.lineOf(k)).append("</div>\n<pre class=\"src\"><code>").append(esc(e.source())).append("</code></pre>\n");
-                if (!e.results().isEmpty()) {
+                org.ampturn.session.Outcome now = outcomes.get(ei - 1);
+                if (now != null && !now.results().isEmpty()) {
+                    // a fresh result: shown from its typed parts, as the console shows it
+                    h.append("<pre class=\"out\">");
+                    for (org.ampturn.session.Outcome.Result r : now.results()) {
+                        List<String> shown = new org.ampturn.session.Outcome(now.source(), r.kind(), List.of(r), false, true).lines();
+                        StringBuilder t = new StringBuilder();
+                        for (String l : shown) t.append(l.substring(2)).append('\n');
+                        t.setLength(t.length() - 1);
+                        if (r.kind() == org.ampturn.session.Outcome.Kind.ERROR) h.append("<span class=\"err\">").append(esc(t.toString())).append("</span>\n");
+                        else h.append(esc(t.toString())).append('\n');
+                    }
+                    h.setLength(h.length() - 1);
+                    h.append("</pre>\n");
+                } else if (now == null && !e.results().isEmpty()) {
+                    // a recorded result: the file keeps text, marked "! " for an error
                     h.append("<pre class=\"out\">");
                     for (String r : e.results()) {
                         String d = Evaluation.toDisplay(r).substring(2);
@@ -238,6 +254,20 @@ public final class HtmlReport {
             out.add(recorded.get(k++).withRecord(s.result().records(), s.result().figures()));
         }
         while (k < recorded.size()) out.add(recorded.get(k++));
+        return out;
+    }
+
+    /** Per entry of the worksheet, the outcome of its fresh run, or null when it did not run now. */
+    static List<org.ampturn.session.Outcome> freshOutcomes(Worksheet w, Path file, List<Replay.Step> steps) {
+        List<org.ampturn.session.Outcome> out = new ArrayList<>();
+        if (steps != null) {
+            for (Replay.Step s : steps) {
+                if (s.isIn(file) && !s.entry().source().startsWith("#use ")) out.add(s.result().outcome());
+            }
+        }
+        int n = w.entries().size();
+        while (out.size() < n) out.add(null);
+        while (out.size() > n) out.remove(out.size() - 1);
         return out;
     }
 
