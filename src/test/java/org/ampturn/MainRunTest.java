@@ -19,6 +19,13 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** {@code ampturn run}: entries and results in plain text, the run goes on after an error, exit codes. */
 class MainRunTest {
+
+    /** Runs and workspaces number and place charts for their worksheet: leave the chart layer as other tests expect it. */
+    @org.junit.jupiter.api.AfterEach
+    void resetCharts() {
+        org.ampturn.chart.Figures.useNumbering(null);
+        org.ampturn.chart.Figures.useDirectory(java.nio.file.Path.of(""));
+    }
     @TempDir
     Path dir;
 

@@ -77,6 +77,8 @@ public final class Console {
         }
         this.worksheet = w;
         this.journalProblem = problem;
+        // a chart is numbered by the entry that makes it, alike in the console, run, verify and export
+        org.ampturn.chart.Figures.useNumbering(w::nextEntryNumber);
         for (ConsoleCommand c : ConsoleBuiltins.of(this)) commands.register(c);
         for (ConsoleCommand c : WorksheetCommands.of(this)) commands.register(c);
         LineReaderBuilder b = LineReaderBuilder.builder()

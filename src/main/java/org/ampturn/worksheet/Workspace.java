@@ -69,8 +69,6 @@ public final class Workspace implements Closeable {
         this.trust = trust;
         this.journal = journal;
         this.journalDir = journalDir;
-        // a chart is numbered by the entry that makes it, alike in the console, run, verify and export
-        Figures.useNumbering(this::nextEntryNumber);
     }
 
     /**

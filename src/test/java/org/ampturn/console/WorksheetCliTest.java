@@ -17,6 +17,13 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** ampturn run / verify / export: output, exit codes, trust refusal and --trust. */
 class WorksheetCliTest {
+
+    /** Runs and workspaces number and place charts for their worksheet: leave the chart layer as other tests expect it. */
+    @org.junit.jupiter.api.AfterEach
+    void resetCharts() {
+        org.ampturn.chart.Figures.useNumbering(null);
+        org.ampturn.chart.Figures.useDirectory(java.nio.file.Path.of(""));
+    }
     @TempDir
     Path dir;
 
@@ -188,5 +195,25 @@ class WorksheetCliTest {
         assertTrue(err.toString(StandardCharsets.UTF_8).contains("the report would replace the worksheet " + f + " itself"), err.toString());
         assertEquals(2, cli("").verb("export", List.of(f.toString(), "--html", dir.resolve("other.atw").toString())));
         assertEquals(FakeEvaluator.SHEET, Files.readString(f));
+    }
+
+    @Test
+    void exportDrawsItsChartsAsideAndEmbedsThem() throws Exception {
+        Path f = sheet("coil.atw", "// ampturn worksheet 1\n\n"
+                + "var t = sweep(\"turns\", 100, 300, 3, n -> Outputs.of(\"L\", Solenoid.singleLayer(n, mm(30), mm(10)).inductance()))\n"
+                + "plot(t)\n", true);
+        Path html = dir.resolve("coil.html");
+        WorksheetCli c = WorksheetCli.of(org.ampturn.worksheet.ShellEvaluator::start, TrustStore.of(dir.resolve("home/trusted"), null),
+                new ByteArrayInputStream(new byte[0]), new PrintStream(out, true, StandardCharsets.UTF_8), new PrintStream(err, true, StandardCharsets.UTF_8));
+        try {
+            c.verb("export", List.of(f.toString(), "--html", html.toString()));
+        } finally {
+            org.ampturn.chart.Figures.useNumbering(null);
+            org.ampturn.chart.Figures.useDirectory(Path.of(""));
+            org.ampturn.chart.Figures.useFormats("png");
+        }
+        assertTrue(!Files.exists(dir.resolve("coil.figures")), "the worksheet's folder is left as it was: " + out());
+        String text = Files.readString(html);
+        assertTrue(text.contains("src=\"data:image/svg+xml;base64,"), "the chart drawn aside is in the report: " + out() + err);
     }
 }

@@ -23,6 +23,13 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** The report: self-contained, notes as prose, entries with results, charts inline, cautions, deferral. */
 class HtmlReportTest {
+
+    /** Runs and workspaces number and place charts for their worksheet: leave the chart layer as other tests expect it. */
+    @org.junit.jupiter.api.AfterEach
+    void resetCharts() {
+        org.ampturn.chart.Figures.useNumbering(null);
+        org.ampturn.chart.Figures.useDirectory(java.nio.file.Path.of(""));
+    }
     @TempDir
     Path dir;
 

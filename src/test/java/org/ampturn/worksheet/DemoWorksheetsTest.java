@@ -28,6 +28,13 @@ import org.junit.jupiter.api.io.TempDir;
  * title, the tool version, prose notes, a recorded result under every entry, and the cautions.
  */
 class DemoWorksheetsTest {
+
+    /** Runs and workspaces number and place charts for their worksheet: leave the chart layer as other tests expect it. */
+    @org.junit.jupiter.api.AfterEach
+    void resetCharts() {
+        org.ampturn.chart.Figures.useNumbering(null);
+        org.ampturn.chart.Figures.useDirectory(java.nio.file.Path.of(""));
+    }
     static final Path DEMOS = Path.of("worksheets");
     static final List<String> EXPECTED = List.of("buoy-choke.atw", "fixture-magnet.atw", "gate-latch.atw", "seed-sorter-valve.atw");
 

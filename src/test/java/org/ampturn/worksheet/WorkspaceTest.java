@@ -16,6 +16,13 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** The console's worksheet: entries, notes, undo, save (trusted), open (trust first), replay, verify. */
 class WorkspaceTest {
+
+    /** Runs and workspaces number and place charts for their worksheet: leave the chart layer as other tests expect it. */
+    @org.junit.jupiter.api.AfterEach
+    void resetCharts() {
+        org.ampturn.chart.Figures.useNumbering(null);
+        org.ampturn.chart.Figures.useDirectory(java.nio.file.Path.of(""));
+    }
     @TempDir
     Path dir;
 
