@@ -72,6 +72,8 @@ public final class WorksheetCli {
     private final PrintStream out;
     private final PrintStream err;
     private final Runnable stuck;
+    /** The #use'd files refused for want of trust in the current run. */
+    private final List<Path> refusedUses = new ArrayList<>();
 
     private WorksheetCli(Supplier<Evaluator> evaluators, TrustStore trust, InputStream in, PrintStream out, PrintStream err, Runnable stuck) {
         this.evaluators = evaluators;
@@ -215,7 +217,7 @@ public final class WorksheetCli {
             } finally {
                 Figures.printTo(before);
             }
-            return failed[0] ? FAILED : HOLD;
+            return !refusedUses.isEmpty() ? NOT_TRUSTED : failed[0] ? FAILED : HOLD;
         } catch (IOException | WorksheetFormatException e) {
             err.println("ampturn: " + e.getMessage());
             return USAGE;
@@ -255,6 +257,7 @@ public final class WorksheetCli {
                 continue;
             }
             ev.clear();
+            refusedUses.clear();
             List<Replay.Step> steps;
             // charts made while verifying are not kept: the records are what is compared
             try (Scratch scratch = Scratch.create()) {
@@ -273,7 +276,8 @@ public final class WorksheetCli {
                 for (Mismatch x : m) out.println(x);
                 for (Replay.Step s : steps) if (s.result().interrupted()) out.println(where(s) + ": stopped; the entries after it were not run");
                 out.println(f + ": " + m.size() + (m.size() == 1 ? " mismatch" : " mismatches") + " in " + own + " entries" + kept);
-                if (anyFailed) failedFiles++;
+                if (!refusedUses.isEmpty()) refused++; // a #use'd file was not trusted: its entries did not run
+                else if (anyFailed) failedFiles++;
                 else differ++;
             }
             out.flush();
@@ -351,7 +355,7 @@ public final class WorksheetCli {
                 boolean failed = steps.stream().anyMatch(s -> s.result().failed() || s.result().interrupted());
                 out.println("wrote " + target + (m.isEmpty() ? "; every result matches its record"
                         : "; " + m.size() + (m.size() == 1 ? " result differs" : " results differ") + " from the record (marked in the report)"));
-                return failed ? FAILED : m.isEmpty() ? HOLD : DIFFER;
+                return !refusedUses.isEmpty() ? NOT_TRUSTED : failed ? FAILED : m.isEmpty() ? HOLD : DIFFER;
             }
         } catch (IOException | WorksheetFormatException e) {
             err.println("ampturn: " + e.getMessage());
@@ -393,6 +397,7 @@ public final class WorksheetCli {
             byte[] bytes = WorksheetFiles.readBytes(p);
             Worksheet w = WorksheetFiles.parse(p, bytes, ev.completeness());
             if (!named.contains(canonical(p)) && !trust.isTrusted(p, bytes)) {
+                refusedUses.add(p);
                 throw new IOException(p + " is not trusted on this machine, so it was not run; --trust covers only the files named:"
                         + " name it too, or #trust it");
             }
