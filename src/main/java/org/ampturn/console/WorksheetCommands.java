@@ -36,7 +36,8 @@ final class WorksheetCommands {
                 new ConsoleCommand("figures", "#figures", "list the charts made so far and their files", w::figures),
                 new ConsoleCommand("export", "#export FILE.html", "write the report: one self-contained HTML file", w::export),
                 new ConsoleCommand("trust", "#trust FILE", "mark a worksheet as safe to run on this machine", w::trust),
-                new ConsoleCommand("recover", "#recover [N]", "bring back the entries of a session that ended without saving", w::recover));
+                new ConsoleCommand("recover", "#recover [N]", "bring back the entries of a session that ended without saving", w::recover),
+                new ConsoleCommand("rerun", "#rerun", "run the last failed or stopped entry again (its record stays)", w::rerun));
     }
 
     /** {@code ampturn FILE.atw}: opens the file, or names it for the first save when it does not exist yet. */
@@ -172,6 +173,14 @@ final class WorksheetCommands {
         List<Replay.Step> steps = w.recover(r, c.asker(), c.stepPrinter());
         c.out().println("  recovered " + r.entries().size() + " unsaved entries" + (r.worksheet() == null ? "" : " on " + r.worksheet())
                 + " (" + steps.size() + " entries run); #save keeps them");
+    }
+
+    private void rerun(String arg) {
+        List<Block.Failed> failed = ws().worksheet().failed();
+        if (failed.isEmpty()) throw new IllegalArgumentException("no failed or stopped entry to run again");
+        String source = failed.get(failed.size() - 1).source();
+        c.out().println("  running again: " + Console.firstLine(source));
+        c.enter(source);
     }
 
     private static Path path(String arg, String usage) {

@@ -95,4 +95,28 @@ class WorksheetCommandsTest {
             assertFalse(h.screen().substring(at - 200).contains("[y/N]"), h.screen());
         }
     }
+
+    @Test
+    void aStoppedEntryStaysAsARecordAndRunsAgainOnlyWhenAsked() throws Exception {
+        try (ConsoleHarness h = new ConsoleHarness(dir)) {
+            h.type("long spins = 0;\r");
+            int at = h.await("  spins = 0");
+            h.type("while (spins < 1) { }\r");
+            Thread.sleep(300);
+            h.interrupt();
+            at = h.await("  ! interrupted", at);
+            h.type("spins = 5;\r");
+            at = h.await("  = 5", at);
+            Path f = dir.resolve("spin.atw");
+            h.type("#save " + f + "\r");
+            at = h.await("saved " + f + " (2 entries)", at);
+            assertTrue(Files.readString(f).contains("//! while (spins < 1) { }\n//= ! interrupted\n"), Files.readString(f));
+            h.type("#replay\r");
+            at = h.await("  replayed 2 entries", at);
+            h.type("#rerun\r");
+            at = h.await("  running again: while (spins < 1) { }", at);
+            h.await("spin 4" + h.arrow(), at);
+            assertEquals(3, h.console.worksheet().entryCount(), "it ran (spins is 5 now) and is an entry again");
+        }
+    }
 }
