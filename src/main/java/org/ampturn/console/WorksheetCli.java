@@ -161,6 +161,8 @@ public final class WorksheetCli {
             case "run":
                 return run(o);
             case "verify":
+                // a sink rather than nothing, so that the session's capture of standard output does not point the chart notes back at it
+                Figures.printTo(new PrintStream(java.io.OutputStream.nullOutputStream(), true, StandardCharsets.UTF_8));
                 Figures.silence();
                 return verify(o);
             case "export":
