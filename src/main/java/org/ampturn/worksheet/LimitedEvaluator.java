@@ -28,18 +28,25 @@ public final class LimitedEvaluator implements Evaluator {
 
     private final Evaluator inner;
     private final Duration limit;
+    private final Duration grace;
     private final Runnable stuck;
 
-    private LimitedEvaluator(Evaluator inner, Duration limit, Runnable stuck) {
+    private LimitedEvaluator(Evaluator inner, Duration limit, Duration grace, Runnable stuck) {
         this.inner = inner;
         this.limit = limit;
+        this.grace = grace;
         this.stuck = stuck;
     }
 
     /** Each entry of {@code inner} may run for {@code limit}. */
     public static LimitedEvaluator of(Evaluator inner, Duration limit, Runnable stuck) {
+        return of(inner, limit, GRACE, stuck);
+    }
+
+    /** As above, with another time to stop after the limit (tests). */
+    static LimitedEvaluator of(Evaluator inner, Duration limit, Duration grace, Runnable stuck) {
         if (limit == null || limit.isNegative() || limit.isZero()) throw new IllegalArgumentException("the entry limit must be positive, got " + limit);
-        return new LimitedEvaluator(inner, limit, stuck);
+        return new LimitedEvaluator(inner, limit, grace, stuck);
     }
 
     /** The limit as written on the command line: {@code 30 s}, {@code 5 min}. */
@@ -58,7 +65,7 @@ public final class LimitedEvaluator implements Evaluator {
             over.set(true);
             inner.stop();
         }, limit.toMillis(), TimeUnit.MILLISECONDS);
-        ScheduledFuture<?> kill = TIMER.schedule(stuck, limit.plus(GRACE).toMillis(), TimeUnit.MILLISECONDS);
+        ScheduledFuture<?> kill = TIMER.schedule(stuck, limit.plus(grace).toMillis(), TimeUnit.MILLISECONDS);
         Evaluation e;
         try {
             e = inner.eval(source);
