@@ -261,8 +261,11 @@ public final class Console {
 
             @Override
             public boolean review(List<String> review, String question) {
-                for (String line : review) out().println("  " + line);
-                out().flush();
+                // the lines that do more than calculate stand out; every line's control characters are already visible
+                for (String line : review) {
+                    boolean risky = line.startsWith("  ! ") || line.startsWith("Do more than calculate") || line.startsWith("  + ");
+                    println(new AttributedString("  " + line, risky ? AttributedStyle.BOLD.foreground(AttributedStyle.RED) : AttributedStyle.DEFAULT));
+                }
                 return confirm(question);
             }
         };

@@ -119,4 +119,22 @@ class WorksheetCommandsTest {
             assertEquals(3, h.console.worksheet().entryCount(), "it ran (spins is 5 now) and is an entry again");
         }
     }
+
+    @Test
+    void theTrustQuestionComesAfterTheRiskyLinesWithEscapesMadeVisible() throws Exception {
+        Path f = dir.resolve("mailed.atw");
+        Files.writeString(f, "// ampturn worksheet 1\n\nvar L = mH(4.7);\n//= L = 4.700 mH \u001B[1A\u001B[2K\n"
+                + "java.nio.file.Files.writeString(java.nio.file.Path.of(\"/tmp/x\"), \"y\");\n");
+        try (ConsoleHarness h = new ConsoleHarness(dir)) {
+            h.type("#open " + f + "\r");
+            int at = h.await("  ! line 4: hidden text: //= L = 4.700 mH \\x1B[1A\\x1B[2K");
+            at = h.await("  ! line 5: files: java.nio.file.Files.writeString(", at);
+            at = h.await("4 | //= L = 4.700 mH \\x1B[1A\\x1B[2K", at);
+            at = h.await("Do more than calculate: line 4 (hidden text), line 5 (files)", at);
+            at = h.await("A worksheet is code: run it?", at);
+            h.type("n\r");
+            h.await("not run.", at);
+            assertEquals(0, h.console.worksheet().entryCount());
+        }
+    }
 }
