@@ -137,4 +137,19 @@ class WorksheetCommandsTest {
             assertEquals(0, h.console.worksheet().entryCount());
         }
     }
+
+    @Test
+    void exportNeverReplacesTheOpenWorksheet() throws Exception {
+        Path f = dir.resolve("latch.atw");
+        try (ConsoleHarness h = new ConsoleHarness(dir)) {
+            h.type("var L = mH(4.7);\r");
+            int at = h.await("  L = 4.700 mH");
+            h.type("#save " + f + "\r");
+            at = h.await("saved " + f, at);
+            String saved = Files.readString(f);
+            h.type("#export " + f + "\r");
+            at = h.await("  ! the report would replace the worksheet " + f + " itself; name an .html file", at);
+            assertEquals(saved, Files.readString(f), "the worksheet is as it was saved");
+        }
+    }
 }
