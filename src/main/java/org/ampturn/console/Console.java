@@ -6,18 +6,21 @@ import java.nio.charset.Charset;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CompletionException;
+import java.util.function.Supplier;
 import org.ampturn.Ampturn;
-import org.ampturn.worksheet.Outcome;
-import org.ampturn.worksheet.Session;
-import org.ampturn.worksheet.SessionCommand;
-import org.ampturn.worksheet.SessionConsole;
-import org.ampturn.worksheet.SessionExtension;
-import org.ampturn.worksheet.SessionExtensions;
+import org.ampturn.session.Outcome;
+import org.ampturn.session.Session;
+import org.ampturn.worksheet.AmpturnHome;
+import org.ampturn.worksheet.Evaluation;
+import org.ampturn.worksheet.Journal;
+import org.ampturn.worksheet.Recovery;
+import org.ampturn.worksheet.Replay;
+import org.ampturn.worksheet.ShellEvaluator;
+import org.ampturn.worksheet.Workspace;
 import org.jline.reader.EndOfFileException;
 import org.jline.reader.LineReader;
 import org.jline.reader.LineReaderBuilder;
@@ -29,21 +32,21 @@ import org.jline.utils.AttributedStringBuilder;
 import org.jline.utils.AttributedStyle;
 
 /**
- * The interactive console: a JLine line reader over a {@link Session}. The engine starts in the
- * background while the first prompt waits; entries are Java, lines beginning with {@code #} are
- * commands (see {@link ConsoleCommands}).
+ * The interactive console: a JLine line reader over a worksheet ({@link Workspace}) whose entries
+ * run in a {@link Session}. The engine starts in the background while the first prompt waits;
+ * entries are Java, lines beginning with {@code #} are commands (see {@link ConsoleBuiltins} and
+ * {@link WorksheetCommands}). The worksheet owns the file, the entries and the unsaved state; the
+ * console only reads and shows them.
  */
-public final class Console implements SessionConsole {
+public final class Console {
     private final Terminal terminal;
     private final LineReader reader;
     private final CompletableFuture<Session> engine;
     private final ConsoleCommands commands = new ConsoleCommands();
-    private final List<SessionExtension> extensions;
     private final HelpPages help;
-    private final List<Outcome> history = new ArrayList<>();
+    private final Workspace worksheet;
+    private final String journalProblem;
     private final String arrow;
-    private Path file;
-    private boolean unsaved;
     private boolean quit;
     private volatile long interruptAt;
 
@@ -52,23 +55,32 @@ public final class Console implements SessionConsole {
      *
      * @param engine      the session, usually still starting ({@link #startEngine(boolean)})
      * @param historyFile where typed lines are kept across sessions, or null for none
-     * @param extensions  the plug-ins that add worksheet commands
      */
-    public Console(Terminal terminal, CompletableFuture<Session> engine, Path historyFile, List<SessionExtension> extensions, HelpPages help) {
-        this(terminal, engine, historyFile, extensions, help, null);
+    public Console(Terminal terminal, CompletableFuture<Session> engine, Path historyFile, HelpPages help) {
+        this(terminal, engine, historyFile, help, null);
     }
 
     /** As above; {@code localeCharset} is the charset of the user's locale when known (the prompt then avoids what it cannot show). */
-    Console(Terminal terminal, CompletableFuture<Session> engine, Path historyFile, List<SessionExtension> extensions, HelpPages help,
-            String localeCharset) {
+    Console(Terminal terminal, CompletableFuture<Session> engine, Path historyFile, HelpPages help, String localeCharset) {
         this.terminal = terminal;
         this.engine = engine;
-        this.extensions = List.copyOf(extensions);
         this.help = help;
         this.arrow = canShow('\u203A', terminal.encoding(), localeCharset) ? "\u203A" : ">";
-        for (SessionCommand c : ConsoleBuiltins.of(this)) commands.register(c);
-        for (SessionCommand c : ConsoleCommands.worksheetPlaceholders()) commands.register(c);
-        commands.registerAll(this.extensions);
+        Workspace w;
+        String problem = null;
+        ShellEvaluator shell = ShellEvaluator.over(this::session);
+        try {
+            w = Workspace.forUser(shell, ShellEvaluator::start);
+        } catch (IOException e) {
+            problem = "the journal could not be started (" + e.getMessage() + "): unsaved entries are not protected against a crash";
+            w = Workspace.unjournaled(shell, ShellEvaluator::start, org.ampturn.worksheet.TrustStore.user());
+        }
+        this.worksheet = w;
+        this.journalProblem = problem;
+        // a chart is numbered by the entry that makes it, alike in the console, run, verify and export
+        org.ampturn.chart.Figures.useNumbering(w::nextEntryNumber);
+        for (ConsoleCommand c : ConsoleBuiltins.of(this)) commands.register(c);
+        for (ConsoleCommand c : WorksheetCommands.of(this)) commands.register(c);
         LineReaderBuilder b = LineReaderBuilder.builder()
                 .terminal(terminal)
                 .appName("ampturn")
@@ -100,7 +112,7 @@ public final class Console implements SessionConsole {
             }
             // JLine writes UTF-8 unless told otherwise; the locale says what the terminal shows
             String locale = System.getProperty("stdout.encoding", System.getProperty("sun.stdout.encoding"));
-            Console c = new Console(terminal, engine, hist, SessionExtensions.all(), HelpPages.find(), locale);
+            Console c = new Console(terminal, engine, hist, HelpPages.find(), locale);
             return c.loop(fileName == null ? null : Path.of(fileName));
         } catch (IOException e) {
             System.err.println("ampturn: no terminal: " + e.getMessage());
@@ -138,17 +150,19 @@ public final class Console implements SessionConsole {
 
     /** The folder for history and per-user files, shared with the journal and trust store. */
     static Path userDir() {
-        return org.ampturn.worksheet.AmpturnHome.dir();
+        return AmpturnHome.dir();
     }
 
     /** Reads and runs entries until {@code #quit}, Ctrl-D or the end of input; returns the exit code. */
-    public int loop(Path worksheet) {
+    public int loop(Path file) {
         println(new AttributedStringBuilder().styled(AttributedStyle.BOLD, "ampturn " + Ampturn.version())
                 .append(": Java entries over the coil library; #help for help, #quit to leave").toAttributedString());
         // long sweeps and Monte Carlo runs draw their bar on the terminal, not in the entry's output
         org.ampturn.study.Progress.install(org.ampturn.study.Progress.bar(
                 new java.io.PrintStream(terminal.output(), true, java.nio.charset.StandardCharsets.UTF_8)));
-        if (worksheet != null) openAtStart(worksheet);
+        if (journalProblem != null) error(journalProblem);
+        offerRecovery();
+        if (file != null) WorksheetCommands.openAtStart(this, file);
         while (!quit) {
             String line;
             try {
@@ -162,7 +176,7 @@ public final class Console implements SessionConsole {
             if (line.isBlank()) continue;
             try {
                 if (line.stripLeading().startsWith("#")) command(line.strip());
-                else enter(line, false);
+                else enter(line);
             } catch (RuntimeException e) {
                 error(e.getMessage() != null ? e.getMessage() : e.toString()); // e.g. the engine did not start
             }
@@ -172,13 +186,36 @@ public final class Console implements SessionConsole {
         } catch (IOException ignored) {
             // history is a convenience
         }
+        // a clean end with everything saved needs no journal; unsaved work keeps it for #recover
+        if (!worksheet.isDirty()) {
+            try {
+                worksheet.close();
+            } catch (IOException ignored) {
+                // the next start tidies it away
+            }
+        }
         return 0;
     }
 
-    // ---- SessionConsole ------------------------------------------------------------------------
+    /** Tells the user at the start when an earlier session left unsaved work. */
+    private void offerRecovery() {
+        try {
+            List<Recovery> all = worksheet.recoverable();
+            if (all.isEmpty()) return;
+            Recovery r = all.get(0);
+            out().println("  an earlier session ended without saving (" + r.entries().size() + " entries"
+                    + (r.worksheet() == null ? "" : " on " + r.worksheet().getFileName()) + "): #recover brings "
+                    + (all.size() == 1 ? "it" : "one of the " + all.size()) + " back");
+            out().flush();
+        } catch (IOException | RuntimeException ignored) {
+            // the offer is a convenience; #recover looks again
+        }
+    }
 
-    @Override
-    public Session session() {
+    // ---- what the commands use -----------------------------------------------------------------
+
+    /** The running session (waits for it if it is still starting). */
+    Session session() {
         try {
             return engine.join();
         } catch (CompletionException e) {
@@ -200,14 +237,38 @@ public final class Console implements SessionConsole {
         return engine.isDone() && !engine.isCompletedExceptionally() ? engine.join() : null;
     }
 
-    @Override
-    public PrintWriter out() {
+    /** The worksheet this console works on. */
+    Workspace worksheet() {
+        return worksheet;
+    }
+
+    PrintWriter out() {
         return terminal.writer();
     }
 
-    @Override
-    public boolean confirm(String question) {
+    /** Asks a yes/no question; false on no, on an empty answer or at the end of input. */
+    boolean confirm(String question) {
         return ask(question) == Answer.YES;
+    }
+
+    /** Questions of the worksheet: asked here; a trust review is printed first. */
+    Workspace.Confirm asker() {
+        return new Workspace.Confirm() {
+            @Override
+            public boolean ask(String question) {
+                return confirm(question);
+            }
+
+            @Override
+            public boolean review(List<String> review, String question) {
+                // the lines that do more than calculate stand out; every line's control characters are already visible
+                for (String line : review) {
+                    boolean risky = line.startsWith("  ! ") || line.startsWith("Do more than calculate") || line.startsWith("  + ");
+                    println(new AttributedString("  " + line, risky ? AttributedStyle.BOLD.foreground(AttributedStyle.RED) : AttributedStyle.DEFAULT));
+                }
+                return confirm(question);
+            }
+        };
     }
 
     enum Answer { YES, NO, END }
@@ -227,77 +288,46 @@ public final class Console implements SessionConsole {
         }
     }
 
-    @Override
-    public Outcome enter(String entrySource, boolean echo) {
-        Session s = session();
-        if (echo) echo(entrySource);
-        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, sig -> interrupt(s));
-        Outcome o;
+    /** Runs a typed entry through the worksheet (which records and journals it) and shows its result. */
+    void enter(String source) {
+        Evaluation e = interruptible(() -> worksheet.enter(source));
+        show(e.outcome());
+        for (String t : worksheet.takeJournalTrouble()) error(t);
+    }
+
+    /**
+     * Runs {@code work} with Ctrl-C stopping the entry that runs in it; a replay stops after the
+     * stopped entry (see {@link Replay}).
+     */
+    <T> T interruptible(Supplier<T> work) {
+        Terminal.SignalHandler previous = terminal.handle(Terminal.Signal.INT, sig -> interrupt());
         try {
-            o = s.eval(entrySource);
+            return work.get();
         } finally {
             terminal.handle(Terminal.Signal.INT, previous);
             System.out.flush();
             System.err.flush();
         }
-        if (o.kept()) {
-            history.add(o);
-            unsaved = true;
-        }
-        for (SessionExtension e : extensions) {
-            try {
-                e.evaluated(this, o);
-            } catch (RuntimeException ex) {
-                error("could not record the entry: " + ex.getMessage());
-            }
-        }
-        show(o);
-        return o;
     }
 
-    @Override
-    public List<Outcome> history() {
-        return List.copyOf(history);
-    }
-
-    @Override
-    public void clear() {
-        session().clear();
-        history.clear();
-    }
-
-    @Override
-    public Optional<Path> file() {
-        return Optional.ofNullable(file);
-    }
-
-    @Override
-    public void file(Path file) {
-        this.file = file;
-    }
-
-    @Override
-    public boolean unsaved() {
-        return unsaved;
-    }
-
-    @Override
-    public void saved() {
-        unsaved = false;
+    /** What a replay shows of each entry it runs: the entry under its number, then its result. */
+    java.util.function.Consumer<Replay.Step> stepPrinter() {
+        int[] n = {0};
+        return s -> {
+            echo(s.entry().source(), ++n[0]);
+            show(s.result().outcome());
+        };
     }
 
     // ---- inside the console --------------------------------------------------------------------
 
-    /** The worksheet's name for the prompt: the file name without {@code .atw}, or "untitled". */
-    String worksheetName() {
-        if (file == null) return "untitled";
-        String n = file.getFileName().toString();
-        return n.endsWith(".atw") ? n.substring(0, n.length() - 4) : n;
+    String prompt() {
+        return prompt(worksheet.entryCount() + 1);
     }
 
-    String prompt() {
-        return new AttributedStringBuilder().styled(AttributedStyle.BOLD, worksheetName())
-                .append(" " + (history.size() + 1) + arrow + " ").toAnsi(terminal);
+    private String prompt(int number) {
+        return new AttributedStringBuilder().styled(AttributedStyle.BOLD, worksheet.name())
+                .append(" " + number + arrow + " ").toAnsi(terminal);
     }
 
     ConsoleCommands commands() {
@@ -310,24 +340,17 @@ public final class Console implements SessionConsole {
 
     /** Takes the last entry back; false when there is none. */
     boolean undo() {
-        if (history.isEmpty() || !session().undoLast()) return false;
-        Outcome o = history.remove(history.size() - 1);
-        unsaved = true;
-        for (SessionExtension e : extensions) {
-            try {
-                e.undone(this, o);
-            } catch (RuntimeException ex) {
-                error("could not record the undo: " + ex.getMessage());
-            }
-        }
-        out().println("  took back: " + firstLine(o.source()));
+        String last = worksheet.undo();
+        if (last == null) return false;
+        out().println("  took back: " + firstLine(last));
         return true;
     }
 
     /** #quit and Ctrl-D: leave, asking first when there is unsaved work. Returns true when leaving. */
     boolean leave(boolean fromEndOfInput) {
-        if (unsaved && !history.isEmpty()) {
-            Answer a = ask("Leave without saving " + history.size() + (history.size() == 1 ? " entry?" : " entries?"));
+        int n = worksheet.entryCount();
+        if (worksheet.isDirty() && n > 0) {
+            Answer a = ask("Leave without saving " + n + (n == 1 ? " entry?" : " entries?"));
             if (a == Answer.NO) return false;
         }
         quit = true;
@@ -337,40 +360,37 @@ public final class Console implements SessionConsole {
     void command(String line) {
         String word = line.split("\\s+", 2)[0];
         String arg = line.length() > word.length() ? line.substring(word.length()).strip() : "";
-        Optional<SessionCommand> c = commands.find(word);
+        Optional<ConsoleCommand> c = commands.find(word);
         if (c.isEmpty()) {
             error("no command " + word + "; #help lists them");
             return;
         }
         try {
-            c.get().run(arg, this);
-        } catch (Exception e) {
+            interruptible(() -> {
+                try {
+                    c.get().run(arg);
+                    return null;
+                } catch (Exception e) {
+                    throw new CommandFailed(e);
+                }
+            });
+        } catch (CommandFailed f) {
+            Exception e = (Exception) f.getCause();
             error(e.getMessage() != null ? e.getMessage() : e.toString());
         }
         out().flush();
     }
 
-    private void openAtStart(Path worksheet) {
-        file(worksheet);
-        try {
-            for (SessionExtension e : extensions) if (e.open(this, worksheet)) return;
-            if (!Files.exists(worksheet)) {
-                out().println("  new worksheet: " + worksheet + " does not exist yet");
-                return;
-            }
-            List<String> entries = session().splitEntries(Files.readString(worksheet, StandardCharsets.UTF_8));
-            out().println("  " + worksheet + ": " + entries.size() + (entries.size() == 1 ? " entry" : " entries"));
-            for (String e : entries) for (String l : e.split("\n", -1)) out().println("    " + l);
-            if (entries.isEmpty() || !confirm("Run the entries of " + worksheet.getFileName() + "?")) return;
-            for (String e : entries) enter(e, true);
-            unsaved = false;
-        } catch (Exception e) {
-            error("cannot open " + worksheet + ": " + e.getMessage());
+    /** Carries a command's checked failure out of {@link #interruptible}. */
+    private static final class CommandFailed extends RuntimeException {
+        CommandFailed(Exception cause) {
+            super(cause);
         }
     }
 
-    private void interrupt(Session s) {
-        if (!s.isRunning()) return;
+    private void interrupt() {
+        Session s = readySession();
+        if (s == null || !s.isRunning()) return;
         long now = System.nanoTime();
         if (interruptAt != 0 && now - interruptAt > 1_000_000_000L) {
             out().println("  (still running: on Java 21 and newer only entry code and library loops that check"
@@ -378,12 +398,12 @@ public final class Console implements SessionConsole {
             out().flush();
         }
         if (interruptAt == 0) interruptAt = now;
-        s.stop();
+        worksheet.stop();
     }
 
-    private void echo(String source) {
+    private void echo(String source, int number) {
         String[] lines = source.split("\n", -1);
-        String p = prompt();
+        String p = prompt(number);
         int width = AttributedString.fromAnsi(p).columnLength();
         out().println(p + lines[0]);
         for (int i = 1; i < lines.length; i++) out().println(" ".repeat(width) + lines[i]);

@@ -3,22 +3,21 @@ package org.ampturn.console;
 import java.util.List;
 import java.util.Optional;
 import org.ampturn.units.Quantity;
-import org.ampturn.worksheet.Session;
-import org.ampturn.worksheet.SessionCommand;
+import org.ampturn.session.Session;
 
 /** The console's own commands: #help, #names, #undo, #digits, #quit. */
 final class ConsoleBuiltins {
     private ConsoleBuiltins() {}
 
-    static List<SessionCommand> of(Console c) {
+    static List<ConsoleCommand> of(Console c) {
         return List.of(
-                new ConsoleCommand("help", "#help [topic]", "this list, or the page of a topic", (arg, con) -> help(c, arg)),
-                new ConsoleCommand("names", "#names", "the names defined so far, with type and value", (arg, con) -> names(c)),
-                new ConsoleCommand("undo", "#undo", "take the last entry out of the worksheet and the session", (arg, con) -> {
+                new ConsoleCommand("help", "#help [topic]", "this list, or the page of a topic", arg -> help(c, arg)),
+                new ConsoleCommand("names", "#names", "the names defined so far, with type and value", arg -> names(c)),
+                new ConsoleCommand("undo", "#undo", "take the last entry out of the worksheet and the session", arg -> {
                     if (!c.undo()) c.error("nothing to take back");
                 }),
-                new ConsoleCommand("digits", "#digits N", "significant digits shown for quantities (1 to 15)", (arg, con) -> digits(c, arg)),
-                new ConsoleCommand("quit", "#quit", "leave (asks when there is unsaved work)", (arg, con) -> c.leave(false)));
+                new ConsoleCommand("digits", "#digits N", "significant digits shown for quantities (1 to 15)", arg -> digits(c, arg)),
+                new ConsoleCommand("quit", "#quit", "leave (asks when there is unsaved work)", arg -> c.leave(false)));
     }
 
     private static void help(Console c, String topic) {
@@ -28,13 +27,13 @@ final class ConsoleBuiltins {
             out.println("  Tab completes, Ctrl-C stops a running entry, Ctrl-D on an empty line leaves.");
             out.println("  Commands:");
             int w = c.commands().all().stream().mapToInt(x -> x.usage().length()).max().orElse(10);
-            for (SessionCommand cmd : c.commands().all()) out.println("    " + pad(cmd.usage(), w) + "  " + cmd.summary());
+            for (ConsoleCommand cmd : c.commands().all()) out.println("    " + pad(cmd.usage(), w) + "  " + cmd.summary());
             List<String> topics = c.help().topics();
             out.println(topics.isEmpty() ? "  No help topics found (lib-docs/ is missing)."
                     : "  Topics (#help TOPIC): " + String.join(", ", topics));
             return;
         }
-        Optional<SessionCommand> cmd = topic.startsWith("#") ? c.commands().find(topic) : Optional.empty();
+        Optional<ConsoleCommand> cmd = topic.startsWith("#") ? c.commands().find(topic) : Optional.empty();
         if (cmd.isEmpty()) {
             Optional<List<String>> page = c.help().page(topic);
             if (page.isPresent()) {

@@ -2,7 +2,7 @@ package org.ampturn.console;
 
 import java.util.List;
 import java.util.function.Supplier;
-import org.ampturn.worksheet.Session;
+import org.ampturn.session.Session;
 import org.jline.reader.Candidate;
 import org.jline.reader.Completer;
 import org.jline.reader.LineReader;

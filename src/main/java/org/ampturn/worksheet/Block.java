@@ -3,8 +3,9 @@ package org.ampturn.worksheet;
 import java.util.List;
 
 /**
- * One piece of a worksheet, in file order: a prose note, an entry with its recorded results, a
- * blank line, or a reference to another worksheet whose entries run first.
+ * One piece of a worksheet, in file order: a prose note, an entry with its recorded results, an
+ * entry that failed or was stopped (kept as a record, never run again), a blank line, or a
+ * reference to another worksheet whose entries run first.
  */
 public sealed interface Block {
 
@@ -35,6 +36,19 @@ public sealed interface Block {
         /** The same source with these recorded results and figures. */
         public Entry withRecord(List<String> newResults, List<String> newFigures) {
             return new Entry(source, newResults, newFigures);
+        }
+    }
+
+    /**
+     * An entry that failed (did not compile, threw) or was stopped (Ctrl-C, its time limit), with
+     * what it gave: kept so the worksheet records what happened, but never run by open, replay or
+     * verify. In the file its source lines start with {@code //!} and its results follow as
+     * {@code //=} lines.
+     */
+    record Failed(String source, List<String> results) implements Block {
+        public Failed {
+            if (source == null || source.isBlank()) throw new IllegalArgumentException("a failed entry needs source text");
+            results = List.copyOf(results);
         }
     }
 

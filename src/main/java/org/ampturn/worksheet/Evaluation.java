@@ -1,47 +1,59 @@
 package org.ampturn.worksheet;
 
-import java.util.ArrayList;
 import java.util.List;
+import org.ampturn.session.Outcome;
 
 /**
- * What one entry printed: display lines as the console shows them ({@code   = 2.103 mH},
- * {@code   coil = ...}, {@code   ! message}), the chart files it wrote, and whether it failed.
+ * What one entry gave when it ran: the session's typed {@link Outcome} and the chart files the entry
+ * wrote (paths as the chart layer wrote them). Whether it failed, and how it is recorded and shown,
+ * come from the outcome's typed results, never from its display text.
  */
-public record Evaluation(List<String> lines, List<String> figures, boolean failed) {
+public record Evaluation(Outcome outcome, List<String> figures) {
     public Evaluation {
-        lines = List.copyOf(lines);
+        java.util.Objects.requireNonNull(outcome, "outcome");
         figures = List.copyOf(figures);
     }
 
-    /** A successful evaluation with these display lines and no figures. */
-    public static Evaluation of(String... displayLines) {
-        List<String> l = List.of(displayLines);
-        return new Evaluation(l, List.of(), l.stream().anyMatch(s -> s.startsWith("  !")));
+    /** An entry that failed with one message and ran nothing (a refused {@code #use}, an entry over its time limit). */
+    public static Evaluation error(String source, String message) {
+        return new Evaluation(new Outcome(source, Outcome.Kind.ERROR, List.of(Outcome.Result.of(Outcome.Kind.ERROR, message)), false, false),
+                List.of());
     }
 
-    /** A failed evaluation with one error message. */
-    public static Evaluation error(String message) {
-        return new Evaluation(List.of("  ! " + message), List.of(), true);
+    /** True when the entry did not run cleanly (compile error, exception, interrupt, blocked call). */
+    public boolean failed() {
+        return outcome.failed();
     }
 
-    /** The lines as a worksheet records them after {@code //= }: {@code 2.103 mH}, {@code coil = ...}. */
+    /** True when the entry was stopped before it finished (Ctrl-C or its time limit). */
+    public boolean interrupted() {
+        return outcome.interrupted();
+    }
+
+    /** The display lines ({@code "  = 2.103 mH"}, {@code "  ! message"}). */
+    public List<String> lines() {
+        return outcome.lines();
+    }
+
+    /** The results as a worksheet records them after {@code //= }. */
     public List<String> records() {
-        List<String> out = new ArrayList<>();
-        for (String l : lines) out.add(toRecord(l));
-        return out;
+        return outcome.recorded();
     }
 
-    /** One display line in recorded form: the two-space indent and a leading {@code "= "} removed. */
-    public static String toRecord(String displayLine) {
-        String s = displayLine.startsWith("  ") ? displayLine.substring(2) : displayLine;
-        if (s.startsWith("= ")) return s.substring(2);
-        if (s.equals("=")) return "";
-        return s;
+    /** The first error message, or "" when the entry did not fail. */
+    public String error() {
+        for (Outcome.Result r : outcome.results()) if (r.kind() == Outcome.Kind.ERROR) return r.text();
+        return "";
     }
 
-    /** A recorded line as the console would display it (the inverse of {@link #toRecord} for results). */
+    /**
+     * A recorded line as the console would display it: {@code "! msg"}, {@code "| printed"},
+     * {@code "coil = ..."} and definitions as they are, values after {@code "= "}. For records read
+     * from a file, where no typed result exists.
+     */
     public static String toDisplay(String record) {
-        if (record.startsWith("! ") || record.startsWith("| ") || record.equals("|") || record.startsWith(" ") || record.matches("^[\\p{L}_$][\\p{L}\\p{N}_$]* = .*")) return "  " + record;
+        if (record.startsWith("! ") || record.startsWith("| ") || record.equals("|") || record.startsWith(" ") || record.matches("^[\\p{L}_$][\\p{L}\\p{N}_$]* = .*")
+                || record.startsWith("defined ") || record.startsWith("redefined ") || record.startsWith("imported ")) return "  " + record;
         return "  = " + record;
     }
 }

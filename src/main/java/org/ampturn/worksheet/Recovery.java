@@ -17,28 +17,52 @@ public final class Recovery {
     private final Path worksheet;
     private final List<Block> blocks; // unsaved notes and entries, undos applied
     private final int undosPastBase;
+    private final boolean sealed;
 
-    private Recovery(Path journal, long pid, Path worksheet, List<Block> blocks, int undosPastBase) {
+    private Recovery(Path journal, long pid, Path worksheet, List<Block> blocks, int undosPastBase, boolean sealed) {
         this.journal = journal;
         this.pid = pid;
         this.worksheet = worksheet;
         this.blocks = List.copyOf(blocks);
         this.undosPastBase = undosPastBase;
+        this.sealed = sealed;
     }
 
-    static Recovery read(Path journal) throws IOException {
+    /** True when every record carries this tool's seal for this user: only such a journal is recovered. */
+    public boolean sealed() {
+        return sealed;
+    }
+
+    /** Reads a journal, checking its seals with the key beside its folder. */
+    public static Recovery read(Path journal) throws IOException {
+        return read(journal, Journal.key(journal.toAbsolutePath().getParent()));
+    }
+
+    /**
+     * Reads a journal. A record counts only when its seal (see {@link Journal}) matches under
+     * {@code key}; a journal with any record that does not is not this tool's ({@link #sealed()} false).
+     */
+    static Recovery read(Path journal, byte[] key) throws IOException {
         List<String> lines = List.of(new String(Files.readAllBytes(journal), StandardCharsets.UTF_8).split("\n", -1));
         if (lines.isEmpty() || !lines.get(0).equals(Journal.MAGIC)) throw new IOException(journal + " is not a journal");
+        javax.crypto.Mac mac = Journal.mac(key);
         long pid = -1;
         Path base = null;
         List<Block> blocks = new ArrayList<>();
         int undos = 0;
+        boolean sealed = true;
+        String[] saving = null; // path and SHA-256 of a save that may not have finished
         List<String> rec = new ArrayList<>();
-        for (int i = 1; i < lines.size(); i++) {
+        for (int i = 0; i < lines.size(); i++) {
             String l = lines.get(i);
-            if (l.startsWith("// pid: ")) {
-                pid = Long.parseLong(l.substring(8).strip());
-            } else if (l.equals(".")) {
+            boolean last = i == lines.size() - 1;
+            byte[] bytes = (last ? l : l + "\n").getBytes(StandardCharsets.UTF_8);
+            if (l.equals(".") || l.startsWith(". ")) {
+                if (!l.equals(". " + Journal.seal(mac))) {
+                    sealed = false; // not written by this tool with this key
+                    break;
+                }
+                mac.update(bytes);
                 // a whole record: apply it
                 char tag = rec.isEmpty() ? '?' : rec.get(0).charAt(0);
                 String arg = rec.isEmpty() ? "" : rec.get(0).length() > 2 ? rec.get(0).substring(2) : "";
@@ -48,7 +72,13 @@ public final class Recovery {
                         base = arg.equals("-") ? null : Path.of(arg);
                         blocks.clear();
                         undos = 0;
+                        saving = null;
                         break;
+                    case 'p': {
+                        int sp = arg.lastIndexOf(' ');
+                        saving = sp > 0 ? new String[] {arg.substring(0, sp), arg.substring(sp + 1)} : null;
+                        break;
+                    }
                     case 'n':
                         blocks.add(new Block.Note(arg));
                         break;
@@ -56,27 +86,50 @@ public final class Recovery {
                         blocks.add(new Block.Use(arg));
                         break;
                     case 'u':
-                        int last = lastEntry(blocks);
-                        if (last >= 0) blocks.subList(last, blocks.size()).clear();
+                        int lastEntry = lastEntry(blocks);
+                        if (lastEntry >= 0) blocks.subList(lastEntry, blocks.size()).clear();
                         else undos++;
                         break;
                     case 'e':
                         blocks.add(entry(rec));
                         break;
+                    case 'F':
+                        Block.Entry e = entry(rec);
+                        blocks.add(new Block.Failed(e.source(), e.results()));
+                        break;
                     default:
                         break;
                 }
                 rec.clear();
+                continue;
+            }
+            mac.update(bytes);
+            if (l.startsWith("// pid: ")) {
+                pid = Long.parseLong(l.substring(8).strip());
             } else if (l.length() >= 1 && !l.startsWith("//")) {
                 rec.add(l);
             }
         }
         // lines left in rec belong to a record torn by the crash: it was never shown, so it is dropped
-        return new Recovery(journal, pid, base, blocks, undos);
+        if (saving != null) {
+            // killed between the save's rename and its journal record: if the file holds what was
+            // being saved, the work is in it and nothing is to be brought back twice
+            Path f = Path.of(saving[0]);
+            try {
+                if (Files.exists(f) && TrustStore.hash(Files.readAllBytes(f)).equals(saving[1])) {
+                    base = f;
+                    blocks.clear();
+                    undos = 0;
+                }
+            } catch (IOException ignored) {
+                // the file cannot be read: recover the journal's own record of the work
+            }
+        }
+        return new Recovery(journal, pid, base, blocks, undos, sealed);
     }
 
     private static int lastEntry(List<Block> blocks) {
-        for (int i = blocks.size() - 1; i >= 0; i--) if (blocks.get(i) instanceof Block.Entry) return i;
+        for (int i = blocks.size() - 1; i >= 0; i--) if (blocks.get(i) instanceof Block.Entry || blocks.get(i) instanceof Block.Failed) return i;
         return -1;
     }
 
@@ -85,7 +138,7 @@ public final class Recovery {
         for (String l : rec) {
             String body = l.length() > 2 ? l.substring(2) : "";
             switch (l.charAt(0)) {
-                case 'e': src.add(body); break;
+                case 'e': case 'F': src.add(body); break;
                 case '=': res.add(body); break;
                 case 'f': fig.add(body); break;
                 default: break;

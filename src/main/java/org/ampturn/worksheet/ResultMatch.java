@@ -22,7 +22,7 @@ public final class ResultMatch {
     private static final Pattern UNIT = Pattern.compile("\\G ([^\\s,;()\\[\\]{}]+)");
 
     /** A number in the text, with the unit written after it (or null) and the text before it. */
-    record Piece(String textBefore, String number, String unit) {}
+    public record Piece(String textBefore, String number, String unit) {}
 
     /** True when {@code fresh} shows the same result as {@code recorded}, to the digits recorded. */
     public static boolean matches(String recorded, String fresh) {
@@ -73,7 +73,7 @@ public final class ResultMatch {
     }
 
     /** The numbers in the text with the text before each; the last piece holds the rest (number null). */
-    static List<Piece> pieces(String s) {
+    public static List<Piece> pieces(String s) {
         List<Piece> out = new ArrayList<>();
         Matcher m = NUMBER.matcher(s);
         int from = 0;

@@ -81,14 +81,47 @@ public final class TrustStore {
         }
     }
 
-    /** Adds this content to the store (no change when it is there already). */
+    /**
+     * Adds this content to the store (no change when it is there already), and keeps a copy of it,
+     * so that a later version of the same path can be shown with what changed ({@link #earlier}).
+     */
     public void trust(Path file, byte[] content) throws IOException {
         String h = hash(content);
         if (hashes().contains(h)) return;
         Files.createDirectories(store.toAbsolutePath().getParent());
+        Path copy = copies().resolve(h + ".atw");
+        if (!Files.exists(copy)) {
+            Files.createDirectories(copies());
+            WorksheetFiles.saveText(new String(content, StandardCharsets.UTF_8), copy, WorksheetFiles.Writer.PLAIN);
+        }
         String line = h + " " + (file == null ? "-" : file.toAbsolutePath().normalize()) + "\n";
         Files.writeString(store, line, StandardCharsets.UTF_8, java.nio.file.StandardOpenOption.CREATE,
                 java.nio.file.StandardOpenOption.APPEND);
+    }
+
+    private Path copies() {
+        return store.toAbsolutePath().resolveSibling("trusted-copies");
+    }
+
+    /**
+     * The text last trusted at {@code file}'s path (as kept when it was trusted), or null when
+     * that path was never trusted or its copy is gone.
+     */
+    public String earlier(Path file) {
+        if (file == null || !Files.exists(store)) return null;
+        String path = file.toAbsolutePath().normalize().toString();
+        try {
+            String found = null;
+            for (String l : Files.readAllLines(store, StandardCharsets.UTF_8)) {
+                int sp = l.indexOf(' ');
+                if (sp > 0 && l.substring(sp + 1).equals(path)) found = l.substring(0, sp);
+            }
+            if (found == null) return null;
+            Path copy = copies().resolve(found + ".atw");
+            return Files.exists(copy) ? WorksheetFiles.decode(Files.readAllBytes(copy), copy.toString()) : null;
+        } catch (IOException e) {
+            return null;
+        }
     }
 
     /** Where the store lives. */

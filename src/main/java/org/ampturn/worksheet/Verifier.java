@@ -20,7 +20,7 @@ public final class Verifier {
             Path where = s.file() == null ? file : s.file();
             List<String> rec = s.entry().results(), now = s.result().records();
             if (s.result().failed()) {
-                String err = now.stream().filter(l -> l.startsWith("!")).findFirst().orElse(String.join(" ", now));
+                String err = "! " + s.result().error();
                 out.add(new Mismatch(where, s.line(), s.entry().source(), rec.isEmpty() ? null : String.join(" / ", rec), err, "the entry failed"));
                 continue;
             }

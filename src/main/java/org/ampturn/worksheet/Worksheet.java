@@ -100,12 +100,28 @@ public final class Worksheet {
         return new Worksheet(header, newBlocks, null);
     }
 
-    /** A copy without its last entry (and any notes and blanks after it); unchanged when there is none. */
+    /**
+     * A copy without its last entry, failed or not (and any notes and blanks after it); unchanged
+     * when there is none.
+     */
     public Worksheet withoutLastEntry() {
+        int i = lastEntryIndex();
+        return i < 0 ? this : new Worksheet(header, blocks.subList(0, i), null);
+    }
+
+    /** The index of the last entry block, failed or not, or -1. */
+    public int lastEntryIndex() {
         for (int i = blocks.size() - 1; i >= 0; i--) {
-            if (blocks.get(i) instanceof Block.Entry) return new Worksheet(header, blocks.subList(0, i), null);
+            if (blocks.get(i) instanceof Block.Entry || blocks.get(i) instanceof Block.Failed) return i;
         }
-        return this;
+        return -1;
+    }
+
+    /** The entries that failed or were stopped, in order (kept as records, never run). */
+    public List<Block.Failed> failed() {
+        List<Block.Failed> out = new ArrayList<>();
+        for (Block b : blocks) if (b instanceof Block.Failed) out.add((Block.Failed) b);
+        return out;
     }
 
     @Override

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.nio.channels.Channels;
 import java.nio.channels.FileChannel;
-import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
@@ -30,9 +29,32 @@ public final class WorksheetFiles {
         Writer PLAIN = OutputStream::write;
     }
 
+    /** The folder where a worksheet's charts live: {@code <name>.figures/} beside the file. */
+    public static Path figuresFolder(Path worksheet) {
+        String n = worksheet.getFileName().toString().replaceFirst("\\.atw$", "");
+        return worksheet.toAbsolutePath().getParent().resolve(n + ".figures");
+    }
+
     /** Reads a worksheet; errors name the file. */
     public static Worksheet read(Path file, Completeness completeness) throws IOException, WorksheetFormatException {
-        String text = readText(file);
+        return parse(file, readBytes(file), completeness);
+    }
+
+    /**
+     * The file's bytes, read once: the caller checks trust on these bytes and parses the same ones
+     * ({@link #parse}), so a file swapped between the check and the run cannot run unchecked.
+     */
+    public static byte[] readBytes(Path file) throws IOException {
+        try {
+            return Files.readAllBytes(file);
+        } catch (NoSuchFileException e) {
+            throw new NoSuchFileException(file.toString(), null, "no such file");
+        }
+    }
+
+    /** Parses bytes read from {@code file}; errors name the file. */
+    public static Worksheet parse(Path file, byte[] bytes, Completeness completeness) throws IOException, WorksheetFormatException {
+        String text = decode(bytes, file.toString());
         try {
             return WorksheetFormat.parse(text, completeness);
         } catch (WorksheetFormatException e) {
@@ -48,12 +70,32 @@ public final class WorksheetFiles {
         } catch (NoSuchFileException e) {
             throw new NoSuchFileException(file.toString(), null, "no such file");
         }
-        try {
-            return StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
-                    .decode(java.nio.ByteBuffer.wrap(bytes)).toString();
-        } catch (CharacterCodingException e) {
-            throw new IOException(file + " is not a worksheet: it is not UTF-8 text");
+        return decode(bytes, file.toString());
+    }
+
+    /**
+     * The bytes as UTF-8 text; text that is not UTF-8 is refused with the line and the byte where
+     * it stops being UTF-8 ({@code name} says whose bytes they are in the message).
+     */
+    public static String decode(byte[] bytes, String name) throws IOException {
+        java.nio.ByteBuffer in = java.nio.ByteBuffer.wrap(bytes);
+        java.nio.CharBuffer out = java.nio.CharBuffer.allocate(bytes.length);
+        java.nio.charset.CoderResult r = StandardCharsets.UTF_8.newDecoder().onMalformedInput(CodingErrorAction.REPORT)
+                .onUnmappableCharacter(CodingErrorAction.REPORT).decode(in, out, true);
+        if (r.isError()) {
+            int at = in.position();
+            int line = 1, lineStart = 0;
+            for (int k = 0; k < at; k++) {
+                if (bytes[k] == '\n') {
+                    line++;
+                    lineStart = k + 1;
+                }
+            }
+            throw new IOException(name + " is not UTF-8 text: line " + line + ", byte " + (at - lineStart + 1) + " of the line (0x"
+                    + String.format("%02X", bytes[at] & 0xFF) + ", byte " + (at + 1) + " of the file); save it as UTF-8");
         }
+        out.flip();
+        return out.toString();
     }
 
     /** Saves the worksheet atomically; returns the bytes written (for the trust store). */
@@ -64,6 +106,13 @@ public final class WorksheetFiles {
     /** Writes {@code text} to {@code target} through a temporary file and an atomic rename. */
     public static byte[] saveText(String text, Path target, Writer writer) throws SaveException {
         Path abs = target.toAbsolutePath();
+        try {
+            // a symbolic link stays a link: the file it points to is replaced
+            if (Files.isSymbolicLink(abs)) abs = abs.toRealPath();
+        } catch (IOException e) {
+            throw new SaveException(target, true, e);
+        }
+        removeStaleTemporaries(abs);
         boolean existed = Files.exists(abs);
         byte[] bytes = text.getBytes(StandardCharsets.UTF_8);
         Path tmp = null;
@@ -95,6 +144,27 @@ public final class WorksheetFiles {
                     // the temporary file is harmless; the message already says the save failed
                 }
             }
+        }
+    }
+
+    /**
+     * Deletes temporary files of earlier saves of {@code target} that a killed process left behind
+     * ({@code .NAME.*.tmp} beside it, older than a minute, so a save in progress elsewhere is spared).
+     */
+    private static void removeStaleTemporaries(Path target) {
+        Path dir = target.getParent();
+        String prefix = "." + target.getFileName() + ".";
+        long old = System.currentTimeMillis() - 60_000;
+        try (java.util.stream.Stream<Path> s = Files.list(dir)) {
+            for (Path p : s.filter(p -> p.getFileName().toString().startsWith(prefix) && p.getFileName().toString().endsWith(".tmp")).toList()) {
+                try {
+                    if (Files.getLastModifiedTime(p).toMillis() < old) Files.deleteIfExists(p);
+                } catch (IOException ignored) {
+                    // another process's file, or gone already
+                }
+            }
+        } catch (IOException | RuntimeException ignored) {
+            // tidying is a courtesy
         }
     }
 

@@ -19,6 +19,8 @@ import org.ampturn.Ampturn;
  * coil.inductance()
  * //= 2.103 mH
  * //= figure: gate-latch.figures/03-current.svg
+ * //! while (true) {}
+ * //= ! interrupted
  * </pre>
  * The header is the first run of {@code // key: value} lines after the first line. Code lines are
  * gathered line by line, like typed input, until the {@link Completeness} says the entry is whole.
@@ -28,11 +30,13 @@ import org.ampturn.Ampturn;
 public final class WorksheetFormat {
     private WorksheetFormat() {}
 
-    static final String MAGIC = "// ampturn worksheet ";
+    /** The start of a worksheet's first line, before the format number. */
+    public static final String MAGIC = "// ampturn worksheet ";
     private static final Pattern MAGIC_LINE = Pattern.compile("^// ampturn worksheet (\\d+)\\s*$");
     private static final Pattern HEADER_LINE = Pattern.compile("^// ([a-z][a-z0-9_-]*): (.*)$");
     private static final String RESULT = "//=";
     private static final String FIGURE = "figure: ";
+    private static final String FAILED = "//!";
 
     static boolean isHeaderKey(String k) {
         return k != null && k.matches("[a-z][a-z0-9_-]*");
@@ -81,13 +85,37 @@ public final class WorksheetFormat {
                     + "; its entries may use library calls this version lacks; update Ampturn to open it", 2);
         }
         if (i < n && lines[i].isEmpty()) i++; // the blank line after the header
+        return body(lines, n, i, header, completeness, false);
+    }
 
+    /**
+     * Parses entries given without a header (standard input of {@code ampturn run -}): lines are
+     * numbered from 1 as given, and a line that starts with {@code #} (other than {@code #use}) is
+     * kept as an entry of its own, which fails when it runs (see {@link Replay}), instead of refusing
+     * all the input.
+     */
+    public static Worksheet parseEntries(String text, Completeness completeness) throws WorksheetFormatException {
+        String[] lines = text.replace("\r\n", "\n").split("\n", -1);
+        int n = lines.length;
+        if (n > 0 && lines[n - 1].isEmpty()) n--;
+        if (n > 0 && lines[0].startsWith("\uFEFF")) lines[0] = lines[0].substring(1);
+        return body(lines, n, 0, new LinkedHashMap<>(), completeness, true);
+    }
+
+    private static Worksheet body(String[] lines, int n, int i, Map<String, String> header, Completeness completeness, boolean commandsAsEntries)
+            throws WorksheetFormatException {
         List<Block> blocks = new ArrayList<>();
         List<Integer> starts = new ArrayList<>();
         StringBuilder pending = null;
         int pendingStart = 0;
         for (; i < n; i++) {
             String line = lines[i];
+            if (pending != null && startsAfresh(pending, line)) {
+                // an unfinished line followed by one that starts a statement: the unfinished one is an
+                // entry of its own (the compiler says what it lacks), and does not swallow this one
+                addEntry(blocks, starts, pending.toString(), pendingStart);
+                pending = null;
+            }
             if (pending != null) {
                 pending.append('\n').append(line);
                 if (completeness.isComplete(pending.toString()) && !continuedBelow(lines, i)) {
@@ -99,6 +127,24 @@ public final class WorksheetFormat {
             if (line.isBlank()) {
                 blocks.add(new Block.Blank());
                 starts.add(i + 1);
+            } else if (line.startsWith(FAILED)) {
+                String src = line.substring(FAILED.length());
+                if (src.startsWith(" ")) src = src.substring(1);
+                int last = blocks.size() - 1;
+                if (last >= 0 && blocks.get(last) instanceof Block.Failed && ((Block.Failed) blocks.get(last)).results().isEmpty()) {
+                    Block.Failed f = (Block.Failed) blocks.get(last);
+                    blocks.set(last, new Block.Failed(f.source() + "\n" + src, List.of()));
+                } else if (!src.isBlank()) {
+                    blocks.add(new Block.Failed(src, List.of()));
+                    starts.add(i + 1);
+                }
+            } else if (line.startsWith(RESULT) && !blocks.isEmpty() && blocks.get(blocks.size() - 1) instanceof Block.Failed) {
+                Block.Failed f = (Block.Failed) blocks.get(blocks.size() - 1);
+                String r = line.substring(RESULT.length());
+                if (r.startsWith(" ")) r = r.substring(1);
+                List<String> results = new ArrayList<>(f.results());
+                results.add(r);
+                blocks.set(blocks.size() - 1, new Block.Failed(f.source(), results));
             } else if (line.startsWith(RESULT)) {
                 int last = blocks.size() - 1;
                 if (last < 0 || !(blocks.get(last) instanceof Block.Entry)) {
@@ -120,6 +166,8 @@ public final class WorksheetFormat {
             } else if (line.startsWith("#use ")) {
                 blocks.add(new Block.Use(line.substring(5).strip()));
                 starts.add(i + 1);
+            } else if (line.startsWith("#") && commandsAsEntries) {
+                addEntry(blocks, starts, line, i + 1);
             } else if (line.startsWith("#")) {
                 throw new WorksheetFormatException("line " + (i + 1) + ": \"" + abbreviate(line)
                         + "\" is a console command; a worksheet may hold only #use lines", i + 1);
@@ -135,6 +183,48 @@ public final class WorksheetFormat {
         if (pending != null) addEntry(blocks, starts, pending.toString(), pendingStart); // unfinished: the run reports it
         int[] at = starts.stream().mapToInt(Integer::intValue).toArray();
         return new Worksheet(header, blocks, at);
+    }
+
+    /**
+     * True when {@code line} cannot continue the unfinished {@code pending} text: the pending text
+     * is open only in round or square brackets or after an operator (not in a block, a comment or a
+     * text block), and the line starts at its first column with a word or a number. A body of a
+     * method or a class, open in a brace, is never cut.
+     */
+    static boolean startsAfresh(CharSequence pending, String line) {
+        if (line.isEmpty() || !(Character.isJavaIdentifierStart(line.charAt(0)) || Character.isDigit(line.charAt(0)))) return false;
+        String p = pending.toString();
+        if (p.contains("\"\"\"") || p.contains("/*")) return false;
+        int braces = 0, others = 0;
+        boolean inString = false;
+        char quote = 0;
+        for (int k = 0; k < p.length(); k++) {
+            char c = p.charAt(k);
+            if (inString) {
+                if (c == '\\') k++;
+                else if (c == quote || c == '\n') inString = false;
+                continue;
+            }
+            if (c == '/' && k + 1 < p.length() && p.charAt(k + 1) == '/') {
+                int nl = p.indexOf('\n', k);
+                if (nl < 0) break;
+                k = nl;
+                continue;
+            }
+            if (c == '"' || c == '\'') {
+                inString = true;
+                quote = c;
+            } else if (c == '{') {
+                braces++;
+            } else if (c == '}') {
+                braces--;
+            } else if (c == '(' || c == '[') {
+                others++;
+            } else if (c == ')' || c == ']') {
+                others--;
+            }
+        }
+        return braces <= 0 && others > 0 && !inString;
     }
 
     /**
@@ -170,6 +260,10 @@ public final class WorksheetFormat {
             sb.append(t.isEmpty() ? "//" : "// " + t).append('\n');
         } else if (b instanceof Block.Use) {
             sb.append("#use ").append(((Block.Use) b).path()).append('\n');
+        } else if (b instanceof Block.Failed) {
+            Block.Failed f = (Block.Failed) b;
+            for (String l : f.source().split("\n", -1)) sb.append(l.isEmpty() ? FAILED : FAILED + " " + l).append('\n');
+            for (String r : f.results()) sb.append(r.isEmpty() ? RESULT : RESULT + " " + r).append('\n');
         } else {
             Block.Entry e = (Block.Entry) b;
             sb.append(e.source()).append('\n');

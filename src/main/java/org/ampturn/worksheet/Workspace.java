@@ -8,12 +8,15 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.function.Consumer;
 import java.util.function.Supplier;
+import org.ampturn.chart.Figures;
 
 /**
- * The worksheet the console is working on: entries typed or opened, their results, the file it
- * belongs to, the journal that protects unsaved work, and the trust rules for opening files. The
- * console feeds entries through {@link #enter}; the {@code #} commands call the other methods
- * (see {@code WorksheetCommands}). Not thread-safe: one console thread uses it.
+ * The worksheet being worked on, and its only owner: the entries typed or opened with their typed
+ * results, the file it belongs to, whether there is unsaved work, the journal that protects that
+ * work, and the trust rules for opening files. The console runs every entry through
+ * {@link #enter} and every {@code #} worksheet command through the other methods; nothing else
+ * keeps a copy of this state. Not thread-safe: one console thread uses it, except
+ * {@link #stop()}.
  */
 public final class Workspace implements Closeable {
     /** Asks the user a yes/no question; the console reads the answer, batch mode says no. */
@@ -21,7 +24,27 @@ public final class Workspace implements Closeable {
     public interface Confirm {
         boolean ask(String question);
 
+        /**
+         * Shows the review of a worksheet that is not trusted ({@link TrustReview#lines}), then asks
+         * {@code question}. The console prints the review; without a terminal only the question counts.
+         */
+        default boolean review(List<String> review, String question) {
+            return ask(question);
+        }
+
         Confirm NO = q -> false;
+    }
+
+    /**
+     * True when {@code bytes} (read from {@code f}) may run: trusted, or reviewed and confirmed
+     * (which trusts them). The review shows these bytes, the ones that will run.
+     */
+    private boolean approved(Path f, byte[] bytes, String question, Confirm confirm) throws IOException {
+        if (trust.isTrusted(f, bytes)) return true;
+        String text = WorksheetFiles.decode(bytes, f.toString());
+        if (!confirm.review(TrustReview.lines(f, text, trust.earlier(f)), question)) return false;
+        trust.trust(f, bytes);
+        return true;
     }
 
     private final Evaluator evaluator;
@@ -31,10 +54,14 @@ public final class Workspace implements Closeable {
     private final Path journalDir;
     private Worksheet sheet = Worksheet.titled("");
     private Path file;
+    /** SHA-256 of the file as this worksheet last read or wrote it, or null when it has not. */
+    private String diskHash;
     private boolean dirty;
     private int replaying;
     private int replayDone;
     private final List<String> journalTrouble = new ArrayList<>();
+    /** Failed records whose entry left something in the session (a stopped study's partial result). */
+    private final java.util.Set<Block> keptFailed = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
 
     private Workspace(Evaluator evaluator, Supplier<Evaluator> fresh, TrustStore trust, Journal journal, Path journalDir) {
         this.evaluator = evaluator;
@@ -76,7 +103,13 @@ public final class Workspace implements Closeable {
 
     /** Names the file a new worksheet will be saved to ({@code ampturn new.atw} on a file not yet written). */
     public void useFile(Path f) {
+        setFile(f);
+    }
+
+    /** The worksheet's file changes: its charts now go to the folder beside it. */
+    private void setFile(Path f) {
         file = f;
+        if (f != null) Figures.useDirectory(WorksheetFiles.figuresFolder(f));
     }
 
     /** True when there is work that is not in the file. */
@@ -110,30 +143,41 @@ public final class Workspace implements Closeable {
     /**
      * Runs a typed entry, adds it with its results to the worksheet and writes it to the journal,
      * forced to disk, before returning; so once the caller shows the result, a crash loses nothing.
-     * A failed entry is shown but not kept (the session did not keep it either).
+     * An entry that failed or was stopped is added as a {@link Block.Failed} record: shown and
+     * saved, never run again. It leaves nothing in the session (as on a replay, where it does not
+     * run), except a stopped study's partial result, which stays usable until the next replay.
      */
     public Evaluation enter(String source) {
         Evaluation e = evaluator.eval(source);
-        return record(source, e, !e.failed());
-    }
-
-    /**
-     * Adds an entry that the console has just run (the console's own loop calls this before it
-     * shows the result): kept entries go into the worksheet and the journal, forced to disk. While
-     * the workspace itself replays (open, replay, verify, recover, use) this does nothing. Returns
-     * the evaluation to show, with a warning line when the journal could not be written.
-     */
-    public Evaluation record(String source, Evaluation e, boolean kept) {
-        if (replaying > 0 || !kept) return e;
+        if (e.failed() || e.interrupted()) {
+            boolean inSession = e.outcome().kept();
+            if (inSession && e.failed()) {
+                evaluator.undoLast();
+                inSession = false;
+            }
+            Block.Failed f = new Block.Failed(source.strip().isEmpty() ? "?" : source, e.records());
+            sheet = sheet.with(f);
+            if (inSession) keptFailed.add(f);
+            dirty = true;
+            log(j -> j.failed(f));
+            return e;
+        }
+        if (!e.outcome().kept()) return e;
         Block.Entry entry = new Block.Entry(source, e.records(), relativeFigures(e.figures()));
         sheet = sheet.with(entry);
         dirty = true;
-        if (!log(j -> j.entry(entry))) {
-            List<String> lines = new ArrayList<>(e.lines());
-            lines.add("  ! " + journalTrouble.get(journalTrouble.size() - 1));
-            return new Evaluation(lines, e.figures(), e.failed());
-        }
+        log(j -> j.entry(entry));
         return e;
+    }
+
+    /** Stops the entry that is running (Ctrl-C); a replay in progress stops after it. Safe from any thread. */
+    public void stop() {
+        evaluator.stop();
+    }
+
+    /** How many entries the worksheet holds. */
+    public int entryCount() {
+        return sheet.entries().size();
     }
 
     private List<String> relativeFigures(List<String> figures) {
@@ -144,14 +188,6 @@ public final class Workspace implements Closeable {
             out.add(base != null && p.isAbsolute() && p.startsWith(base) ? base.relativize(p).toString() : f);
         }
         return out;
-    }
-
-    /** The console took the last entry back: it leaves the worksheet too (and the journal says so). */
-    public void undone() {
-        if (sheet.entries().isEmpty()) return;
-        sheet = sheet.withoutLastEntry();
-        dirty = true;
-        log(Journal::undo);
     }
 
     /** Adds a prose note. */
@@ -166,17 +202,22 @@ public final class Workspace implements Closeable {
         dirty = true;
     }
 
-    /** Takes the last entry out of the worksheet and the session; returns it, or null when there is none. */
-    public Block.Entry undo() {
-        List<Block.Entry> all = sheet.entries();
-        if (all.isEmpty()) return null;
-        Block.Entry last = all.get(all.size() - 1);
-        evaluator.undoLast();
-        undone();
-        return last;
+    /**
+     * Takes the last entry, failed or not, out of the worksheet and (when it is there) the session;
+     * returns its source, or null when there is none.
+     */
+    public String undo() {
+        int i = sheet.lastEntryIndex();
+        if (i < 0) return null;
+        Block last = sheet.blocks().get(i);
+        if (last instanceof Block.Entry || keptFailed.remove(last)) evaluator.undoLast();
+        sheet = sheet.withoutLastEntry();
+        dirty = true;
+        log(Journal::undo);
+        return last instanceof Block.Entry ? ((Block.Entry) last).source() : ((Block.Failed) last).source();
     }
 
-    /** Messages about journal writes that failed (shown once by the console), then cleared. */
+    /** Messages about journal writes that failed (the console shows each once), then cleared. */
     public List<String> takeJournalTrouble() {
         List<String> out = List.copyOf(journalTrouble);
         journalTrouble.clear();
@@ -191,22 +232,88 @@ public final class Workspace implements Closeable {
         Path t = target != null ? target : file;
         if (t == null) throw new IOException("this worksheet has no file yet: give a name, e.g. #save coil.atw");
         if (!t.getFileName().toString().contains(".")) t = t.resolveSibling(t.getFileName() + ".atw");
+        refuseIfChangedOnDisk(t);
         Worksheet w = sheet.withHeader("tool", "ampturn " + org.ampturn.Ampturn.version());
         if (w.title().isEmpty()) {
             String n = t.getFileName().toString().replaceFirst("\\.atw$", "");
             w = Worksheet.of(titleFirst(n, w), w.blocks());
         }
-        byte[] bytes = WorksheetFiles.save(w, t);
-        sheet = w;
-        file = t;
-        dirty = false;
+        w = w.withBlocks(figuresBeside(w.blocks(), t));
+        byte[] bytes = WorksheetFormat.print(w).getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        String hash = TrustStore.hash(bytes);
+        Path saving = t;
+        // journal first, then trust, then the rename: a kill at any point leaves either the old file
+        // with the journal's work, or the new file, trusted, that the journal knows was written
+        log(j -> j.saving(saving, hash));
         trust.trust(t, bytes);
-        Path saved = t;
-        log(j -> j.saved(saved));
+        WorksheetFiles.saveText(WorksheetFormat.print(w), t, WorksheetFiles.Writer.PLAIN);
+        sheet = w;
+        setFile(t);
+        diskHash = hash;
+        dirty = false;
+        log(j -> j.saved(saving));
         return t;
     }
 
-    private static java.util.Map<String, String> titleFirst(String title, Worksheet w) {
+    /**
+     * Refuses to save over a file that changed on disk since this worksheet opened or last saved it
+     * (another console, an editor), or over an existing file that is not this worksheet's: the work
+     * stays unsaved and journalled, and a new name keeps it.
+     */
+    private void refuseIfChangedOnDisk(Path t) throws IOException {
+        if (!Files.exists(t)) return;
+        boolean ours = file != null && t.toAbsolutePath().normalize().equals(file.toAbsolutePath().normalize());
+        if (!ours) {
+            throw new IOException(t + " already exists and is not this worksheet's file; save under a new name, or #open it");
+        }
+        String now = TrustStore.hash(WorksheetFiles.readBytes(t));
+        if (diskHash == null || !now.equals(diskHash)) {
+            throw new IOException(t + " changed on disk since this console opened or saved it (another console or an editor wrote it);"
+                    + " nothing was written and your work is kept: #save " + suggestion(t) + " saves it beside, or #open the file to see the other version");
+        }
+    }
+
+    private static String suggestion(Path t) {
+        String n = t.getFileName().toString().replaceFirst("\\.atw$", "");
+        for (int k = 2; ; k++) {
+            Path p = t.resolveSibling(n + "-" + k + ".atw");
+            if (!Files.exists(p)) return p.toString();
+        }
+    }
+
+    /**
+     * The blocks with their figures beside {@code t}: a chart file recorded elsewhere (made before
+     * the first save, or in another worksheet's folder) is moved (or, when an earlier file still
+     * names it, copied) into {@code t}'s figures folder, and every figure path becomes relative to {@code t}.
+     */
+    private List<Block> figuresBeside(List<Block> blocks, Path t) throws IOException {
+        Path folder = WorksheetFiles.figuresFolder(t);
+        Path newBase = t.toAbsolutePath().getParent();
+        Path oldBase = file == null ? Path.of("").toAbsolutePath() : file.toAbsolutePath().getParent();
+        List<Block> out = new ArrayList<>();
+        for (Block b : blocks) {
+            if (!(b instanceof Block.Entry) || ((Block.Entry) b).figures().isEmpty()) {
+                out.add(b);
+                continue;
+            }
+            Block.Entry e = (Block.Entry) b;
+            List<String> figs = new ArrayList<>();
+            for (String f : e.figures()) {
+                Path p = oldBase.resolve(f).normalize();
+                if (Files.isRegularFile(p) && !p.startsWith(folder)) {
+                    Files.createDirectories(folder);
+                    Path dest = folder.resolve(p.getFileName().toString());
+                    for (int k = 2; Files.exists(dest); k++) dest = folder.resolve(k + "-" + p.getFileName());
+                    if (file == null) Files.move(p, dest);
+                    else Files.copy(p, dest);
+                    p = dest;
+                }
+                figs.add(p.startsWith(newBase) ? newBase.relativize(p).toString().replace(java.io.File.separatorChar, '/') : f);
+            }
+            out.add(e.withRecord(e.results(), figs));
+        }
+        return out;
+    }    private static java.util.Map<String, String> titleFirst(String title, Worksheet w) {
         java.util.Map<String, String> h = new java.util.LinkedHashMap<>();
         h.put("title", title);
         h.putAll(w.header());
@@ -222,16 +329,13 @@ public final class Workspace implements Closeable {
      * reading only and not run. Fails with a clear message for a file that is not a worksheet.
      */
     public Opened open(Path f, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
-        Worksheet w = WorksheetFiles.read(f, completeness());
-        byte[] bytes = Files.readAllBytes(f);
-        boolean ok = trust.isTrusted(f, bytes);
-        if (!ok && confirm.ask(f + " was not saved or trusted on this machine. A worksheet is code: run it?")) {
-            trust.trust(f, bytes);
-            ok = true;
-        }
+        byte[] bytes = WorksheetFiles.readBytes(f); // hashed and run: the same bytes
+        Worksheet w = WorksheetFiles.parse(f, bytes, completeness());
+        boolean ok = approved(f, bytes, f + " was not saved or trusted on this machine. A worksheet is code: run it?", confirm);
         if (!ok) return new Opened(f, w, false, List.of(), List.of());
         sheet = w;
-        file = f;
+        setFile(f);
+        diskHash = TrustStore.hash(bytes);
         dirty = false;
         log(j -> j.opened(f));
         List<Replay.Step> steps = replay(w, f, confirm, onStep);
@@ -241,13 +345,10 @@ public final class Workspace implements Closeable {
     /** Loads {@code #use}d worksheets, refusing untrusted ones unless the user confirms. */
     public Replay.Loader loader(Confirm confirm) {
         return p -> {
-            Worksheet w = WorksheetFiles.read(p, completeness());
-            byte[] bytes = Files.readAllBytes(p);
-            if (!trust.isTrusted(p, bytes)) {
-                if (!confirm.ask(p + " (used by this worksheet) is not trusted on this machine: run it?")) {
-                    throw new IOException(p + " is not trusted on this machine, so it was not run; #trust " + p + " to allow it");
-                }
-                trust.trust(p, bytes);
+            byte[] bytes = WorksheetFiles.readBytes(p);
+            Worksheet w = WorksheetFiles.parse(p, bytes, completeness());
+            if (!approved(p, bytes, p + " (used by this worksheet) is not trusted on this machine: run it?", confirm)) {
+                throw new IOException(p + " is not trusted on this machine, so it was not run; #trust " + p + " to allow it");
             }
             return w;
         };
@@ -277,22 +378,21 @@ public final class Workspace implements Closeable {
      */
     public List<Mismatch> verify(Path other, Confirm confirm, Consumer<Replay.Step> onStep) throws IOException, WorksheetFormatException {
         if (other == null) return Verifier.compare(file, replay(sheet, file, confirm, onStep));
-        Worksheet w = WorksheetFiles.read(other, completeness());
-        byte[] bytes = Files.readAllBytes(other);
-        if (!trust.isTrusted(other, bytes)) {
-            if (!confirm.ask(other + " was not saved or trusted on this machine. A worksheet is code: run it?")) {
-                throw new IOException(other + " is not trusted on this machine, so it was not run; #trust " + other + " to allow it");
-            }
-            trust.trust(other, bytes);
+        byte[] bytes = WorksheetFiles.readBytes(other);
+        Worksheet w = WorksheetFiles.parse(other, bytes, completeness());
+        if (!approved(other, bytes, other + " was not saved or trusted on this machine. A worksheet is code: run it?", confirm)) {
+            throw new IOException(other + " is not trusted on this machine, so it was not run; #trust " + other + " to allow it");
         }
         try (Evaluator ev = fresh.get()) {
             return Verifier.compare(other, Replay.run(w, other, ev, loader(confirm), onStep));
         }
     }
 
-    /** Marks a file's current content as safe to run on this machine. */
-    public void trust(Path f) throws IOException {
-        trust.trust(f, Files.readAllBytes(f));
+    /** Marks a file's current content as safe to run on this machine; returns its SHA-256. */
+    public String trust(Path f) throws IOException {
+        byte[] bytes = WorksheetFiles.readBytes(f);
+        trust.trust(f, bytes);
+        return TrustStore.hash(bytes);
     }
 
     public TrustStore trustStore() {
@@ -323,20 +423,22 @@ public final class Workspace implements Closeable {
         if (dirty) throw new IOException("this worksheet has unsaved work; #save it first, then #recover");
         Worksheet base = Worksheet.titled("");
         if (r.worksheet() != null && Files.exists(r.worksheet())) {
-            byte[] bytes = Files.readAllBytes(r.worksheet());
-            if (!trust.isTrusted(r.worksheet(), bytes) && !confirm.ask(r.worksheet() + " changed since that session and is not trusted: run it?")) {
+            byte[] bytes = WorksheetFiles.readBytes(r.worksheet());
+            if (!approved(r.worksheet(), bytes, r.worksheet() + " changed since that session and is not trusted: run it?", confirm)) {
                 throw new IOException(r.worksheet() + " is not trusted on this machine; #trust it, then #recover");
             }
-            base = WorksheetFiles.read(r.worksheet(), completeness());
+            base = WorksheetFiles.parse(r.worksheet(), bytes, completeness());
+            diskHash = TrustStore.hash(bytes);
         }
         Worksheet w = r.applyTo(base);
         sheet = w;
-        file = r.worksheet();
+        setFile(r.worksheet());
         dirty = true;
         log(j -> j.opened(r.worksheet()));
         for (int k = 0; k < r.undosPastBase(); k++) log(Journal::undo);
         for (Block b : r.blocks()) {
             if (b instanceof Block.Entry) log(j -> j.entry((Block.Entry) b));
+            else if (b instanceof Block.Failed) log(j -> j.failed((Block.Failed) b));
             else if (b instanceof Block.Note) log(j -> j.note(((Block.Note) b).text()));
             else if (b instanceof Block.Use) log(j -> j.use(((Block.Use) b).path()));
         }
@@ -349,6 +451,7 @@ public final class Workspace implements Closeable {
         if (replaying++ == 0) replayDone = 0;
         try {
             evaluator.clear();
+            keptFailed.clear();
             return Replay.run(w, f, evaluator, loader(confirm), st -> {
                 replayDone++;
                 onStep.accept(st);

@@ -6,17 +6,12 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.List;
 import org.ampturn.units.Quantity;
-import org.ampturn.worksheet.Outcome;
-import org.ampturn.worksheet.SessionCommand;
-import org.ampturn.worksheet.SessionConsole;
-import org.ampturn.worksheet.SessionExtension;
+import org.ampturn.worksheet.AmpturnHome;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
-/** The # commands of DESIGN.md, and how a worksheet extension plugs its commands in. */
+/** The # commands of DESIGN.md: help, names, undo, digits, unknown words, leaving after a save. */
 class ConsoleCommandTest {
     @TempDir
     Path docs;
@@ -25,7 +20,7 @@ class ConsoleCommandTest {
     void helpListsCommandsAndTopicsAndShowsAPage() throws Exception {
         Files.writeString(docs.resolve("solenoid.md"), "# Single-layer solenoid\nNagaoka coefficient page\n");
         Files.writeString(docs.resolve("wire.md"), "# Magnet wire\n");
-        try (ConsoleHarness h = new ConsoleHarness(List.of(), docs)) {
+        try (ConsoleHarness h = new ConsoleHarness(docs)) {
             h.type("#help\r");
             int at = h.await("Topics (#help TOPIC): solenoid, wire");
             assertTrue(h.screen().contains("#digits N"), h.screen());
@@ -40,7 +35,7 @@ class ConsoleCommandTest {
     @Test
     void namesUndoAndDigits() throws Exception {
         int digits = Quantity.displayDigits();
-        try (ConsoleHarness h = new ConsoleHarness(List.of(), docs)) {
+        try (ConsoleHarness h = new ConsoleHarness(docs)) {
             h.type("var bore = mm(12.5);\r");
             int at = h.await("  bore = 12.50 mm");
             h.type("var spare = A(2);\r");
@@ -66,51 +61,37 @@ class ConsoleCommandTest {
     }
 
     @Test
-    void worksheetCommandsAnswerBeforeTheyExistAndUnknownWordsAreNamed() throws Exception {
-        try (ConsoleHarness h = new ConsoleHarness(List.of(), docs)) {
-            int at = 0;
-            for (String w : List.of("open x.atw", "save", "replay", "verify", "note a", "figures", "export r.html", "trust x.atw", "recover")) {
-                h.type("#" + w + "\r");
-                at = h.await("  ! #" + w.split(" ")[0] + " is not available yet in this build", at);
-            }
+    void unknownWordsAreNamedAndTheConsoleGoesOn() throws Exception {
+        try (ConsoleHarness h = new ConsoleHarness(docs)) {
             h.type("#frobnicate\r");
-            at = h.await("  ! no command #frobnicate", at);
+            int at = h.await("  ! no command #frobnicate");
+            h.type("#note\r");
+            at = h.await("  ! #note needs text, e.g. #note pull-in measured at 9.1 V", at);
             h.type("6 * 7\r");
             h.await("  = 42", at);
         }
     }
 
     @Test
-    void anExtensionReplacesAPlaceholderAndSeesEveryEntry() throws Exception {
-        List<String> journal = new ArrayList<>();
-        SessionCommand save = new SessionCommand() {
-            public String name() { return "save"; }
-            public String usage() { return "#save [FILE]"; }
-            public String summary() { return "write the worksheet"; }
-            public void run(String argument, SessionConsole console) {
-                console.out().println("  wrote " + console.history().size() + " entries to " + argument);
-                console.saved();
+    void savedWorkNeedsNoQuestionOnLeaving() throws Exception {
+        Path home = docs.resolve("home");
+        String old = System.getProperty(AmpturnHome.PROPERTY);
+        System.setProperty(AmpturnHome.PROPERTY, home.toString());
+        try {
+            ConsoleHarness h = new ConsoleHarness(docs);
+            h.type("uH(47)\r");
+            int at = h.await("  = 47.00 µH");
+            h.type("#save " + docs.resolve("choke.atw") + "\r");
+            h.await("  saved " + docs.resolve("choke.atw") + " (1 entries)", at);
+            assertEquals(0, h.end());
+            assertFalse(h.screen().contains("Leave without saving"), "saved work needs no question:\n" + h.screen());
+            h.close();
+            try (var files = Files.list(home.resolve("journal"))) {
+                assertEquals(0, files.count(), "a clean end with everything saved leaves no journal");
             }
-        };
-        SessionExtension ext = new SessionExtension() {
-            @Override
-            public List<SessionCommand> commands() {
-                return List.of(save);
-            }
-
-            @Override
-            public void evaluated(SessionConsole console, Outcome outcome) {
-                journal.add(outcome.source() + " -> " + outcome.recorded());
-            }
-        };
-        ConsoleHarness h = new ConsoleHarness(List.of(ext), docs);
-        h.type("uH(47)\r");
-        int at = h.await("  = 47.00 µH");
-        h.type("#save choke.atw\r");
-        h.await("  wrote 1 entries to choke.atw", at);
-        assertEquals(0, h.end());
-        assertFalse(h.screen().contains("Leave without saving"), "saved work needs no question:\n" + h.screen());
-        assertEquals(List.of("uH(47) -> [47.00 µH]"), journal);
-        h.close();
+        } finally {
+            if (old == null) System.clearProperty(AmpturnHome.PROPERTY);
+            else System.setProperty(AmpturnHome.PROPERTY, old);
+        }
     }
 }

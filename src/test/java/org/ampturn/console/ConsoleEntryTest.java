@@ -16,7 +16,7 @@ class ConsoleEntryTest {
 
     @Test
     void aValueADeclarationAndAMultiLineMethod() throws Exception {
-        try (ConsoleHarness h = new ConsoleHarness(List.of(), docs)) {
+        try (ConsoleHarness h = new ConsoleHarness(docs)) {
             h.await("untitled 1");
             h.type("mm(25).times(2)\r");
             int at = h.await("  = 50.00 mm");
@@ -34,7 +34,7 @@ class ConsoleEntryTest {
 
     @Test
     void aCompileErrorShowsItsMessageAndACaret() throws Exception {
-        try (ConsoleHarness h = new ConsoleHarness(List.of(), docs)) {
+        try (ConsoleHarness h = new ConsoleHarness(docs)) {
             h.type("mm(1).times(qq)\r");
             int at = h.await("  ! cannot find symbol: variable qq");
             at = h.await("    mm(1).times(qq)\n", at);
@@ -43,13 +43,13 @@ class ConsoleEntryTest {
             h.type("1 + 1\r");
             h.await("  = 2", at);
             assertTrue(h.screen().contains("untitled 1>") || h.screen().contains("untitled 1\u203A"), h.screen());
-            assertEquals(1, h.console.history().size());
+            assertEquals(1, h.console.worksheet().entryCount());
         }
     }
 
     @Test
     void tabCompletesALibraryMethodAndASessionVariable() throws Exception {
-        try (ConsoleHarness h = new ConsoleHarness(List.of(), docs)) {
+        try (ConsoleHarness h = new ConsoleHarness(docs)) {
             h.type("var wireLength = m(3);\r");
             int at = h.await("  wireLength = 3.000 m");
             h.type("wireLen\t.ti\t2)\r"); // wireLen -> wireLength, .ti -> .times(
@@ -59,7 +59,7 @@ class ConsoleEntryTest {
 
     @Test
     void ctrlCStopsARunawayLoopAndTheSessionKeepsItsVariables() throws Exception {
-        try (ConsoleHarness h = new ConsoleHarness(List.of(), docs)) {
+        try (ConsoleHarness h = new ConsoleHarness(docs)) {
             h.type("long spins = 0;\r");
             int at = h.await("  spins = 0");
             h.type("while (true) { spins++; }\r");
@@ -75,7 +75,7 @@ class ConsoleEntryTest {
 
     @Test
     void theEndOfInputLeavesEvenWithUnsavedWork() throws Exception {
-        ConsoleHarness h = new ConsoleHarness(List.of(), docs);
+        ConsoleHarness h = new ConsoleHarness(docs);
         h.type("mm(2)\r");
         h.await("  = 2.000 mm");
         assertEquals(0, h.end());

@@ -8,10 +8,9 @@ import java.io.PipedInputStream;
 import java.io.PipedOutputStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.CompletableFuture;
-import org.ampturn.worksheet.Session;
-import org.ampturn.worksheet.SessionExtension;
+import org.ampturn.session.Session;
+import org.ampturn.worksheet.AmpturnHome;
 import org.jline.terminal.Terminal;
 import org.jline.terminal.Size;
 import org.jline.terminal.impl.DumbTerminal;
@@ -30,18 +29,25 @@ final class ConsoleHarness implements AutoCloseable {
     private final Thread loop;
     private volatile Integer exit;
 
-    ConsoleHarness(List<SessionExtension> extensions, Path docs) throws IOException {
-        this(extensions, docs, null, null);
+    ConsoleHarness(Path docs) throws IOException {
+        this(docs, null, null);
     }
 
-    /** A console with a history file (or null) that opens {@code worksheet} (or null) at the start. */
-    ConsoleHarness(List<SessionExtension> extensions, Path docs, Path history, Path worksheet) throws IOException {
+    /**
+     * A console with a history file (or null) that opens {@code worksheet} (or null) at the start.
+     * Its per-user folder (journal, trust store) is a temporary one unless the test named one
+     * with the {@code ampturn.home} property.
+     */
+    ConsoleHarness(Path docs, Path history, Path worksheet) throws IOException {
+        if (System.getProperty(AmpturnHome.PROPERTY) == null) {
+            System.setProperty(AmpturnHome.PROPERTY, java.nio.file.Files.createTempDirectory("ampturn-console-test-").toString());
+        }
         PipedInputStream in = new PipedInputStream(keys, 1 << 16);
         // a dumb terminal that calls itself "ansi", so that the reader edits and completes as on a
         // real one (JLine's own reader tests do the same)
         terminal = new DumbTerminal("ampturn-test", "ansi", in, screen, StandardCharsets.UTF_8);
         terminal.setSize(new Size(120, 40));
-        console = new Console(terminal, freshSession(), history, extensions, new HelpPages(docs));
+        console = new Console(terminal, freshSession(), history, new HelpPages(docs));
         loop = new Thread(() -> exit = console.loop(worksheet), "console-under-test");
         loop.setDaemon(true);
         loop.start();
@@ -50,6 +56,11 @@ final class ConsoleHarness implements AutoCloseable {
     /** A fresh session per console (sessions are cheap once the JVM is warm). */
     private static CompletableFuture<Session> freshSession() {
         return Console.startEngine(false);
+    }
+
+    /** The prompt's arrow as this terminal shows it. */
+    String arrow() {
+        return console.prompt().replaceAll("\u001B\\[[0-9;?]*[A-Za-z]", "").strip().endsWith("\u203A") ? "\u203A" : ">";
     }
 
     void type(String text) throws IOException {
@@ -96,5 +107,8 @@ final class ConsoleHarness implements AutoCloseable {
     public void close() throws Exception {
         if (loop.isAlive()) end();
         terminal.close();
+        // the console numbers charts by entry and puts them beside its worksheet: leave the chart layer as other tests expect it
+        org.ampturn.chart.Figures.useNumbering(null);
+        org.ampturn.chart.Figures.useDirectory(Path.of(""));
     }
 }

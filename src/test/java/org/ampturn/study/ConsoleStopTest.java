@@ -2,8 +2,8 @@ package org.ampturn.study;
 
 import static org.junit.jupiter.api.Assertions.*;
 
-import org.ampturn.worksheet.Outcome;
-import org.ampturn.worksheet.Session;
+import org.ampturn.session.Outcome;
+import org.ampturn.session.Session;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -29,6 +29,8 @@ class ConsoleStopTest {
             t.join(10_000);
             assertFalse(t.isAlive(), "the entry did not end after the stop");
             assertTrue(slow[0].interrupted(), slow[0].toString());
+            assertFalse(slow[0].failed(), "the partial result is shown, not \"! interrupted\": " + slow[0]);
+            assertTrue(slow[0].toString().contains("incomplete: stopped after"), slow[0].toString());
             Outcome after = s.eval("t.isComplete() + \" \" + (t.size() - t.failures())");
             assertFalse(after.failed(), after.toString());
             String text = String.join("\n", after.lines());

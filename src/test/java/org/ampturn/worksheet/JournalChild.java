@@ -21,7 +21,7 @@ public final class JournalChild {
         @Override
         public Evaluation eval(String source) {
             Matcher m = VAR.matcher(source);
-            return m.matches() ? Evaluation.of("  " + m.group(1) + " = " + m.group(2)) : Evaluation.of("  = " + source);
+            return m.matches() ? FakeEvaluator.evaluation(source, "  " + m.group(1) + " = " + m.group(2)) : FakeEvaluator.evaluation(source, "  = " + source);
         }
     }
 

@@ -13,6 +13,13 @@ import org.junit.jupiter.api.io.TempDir;
 
 /** The units fixture verifies against the real JShell session, and a changed record is caught. */
 class ShellVerifyTest {
+
+    /** Runs and workspaces number and place charts for their worksheet: leave the chart layer as other tests expect it. */
+    @org.junit.jupiter.api.AfterEach
+    void resetCharts() {
+        org.ampturn.chart.Figures.useNumbering(null);
+        org.ampturn.chart.Figures.useDirectory(java.nio.file.Path.of(""));
+    }
     static ShellEvaluator shell;
 
     @TempDir

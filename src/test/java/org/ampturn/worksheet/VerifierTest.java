@@ -14,17 +14,10 @@ class VerifierTest {
     @TempDir
     Path dir;
 
-    static final String SHEET = "// ampturn worksheet 1\n// title: t\n\n"
-            + "var L = mH(4.7);\n//= L = 4.700 mH\n"
-            + "var I = A(2);\n//= I = 2.000 A\n"
-            + "L.times(I.pow(2)).div(2)\n//= 9.400 mJ\n";
+    static final String SHEET = FakeEvaluator.SHEET;
 
     static FakeEvaluator truth() {
-        return new FakeEvaluator()
-                .answer("var L = mH(4.7);", "  L = 4.700 mH")
-                .answer("var I = A(2);", "  I = 2.000 A")
-                .answer("L.times(I.pow(2)).div(2)", "  = 9.4000 mJ")
-                .needs("L.times(I.pow(2)).div(2)", "L", "I");
+        return FakeEvaluator.truth();
     }
 
     private List<Mismatch> verify(String text, Evaluator ev) throws Exception {

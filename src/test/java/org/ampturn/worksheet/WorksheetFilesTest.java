@@ -68,7 +68,7 @@ class WorksheetFilesTest {
         Path f = dir.resolve("bin.atw");
         Files.write(f, new byte[] {(byte) 0xff, (byte) 0xfe, 0, 1});
         IOException e = assertThrows(IOException.class, () -> WorksheetFiles.read(f, Completeness.BRACKETS));
-        assertEquals(f + " is not a worksheet: it is not UTF-8 text", e.getMessage());
+        assertEquals(f + " is not UTF-8 text: line 1, byte 1 of the line (0xFF, byte 1 of the file); save it as UTF-8", e.getMessage());
     }
 
     @Test
@@ -83,5 +83,13 @@ class WorksheetFilesTest {
         try (Stream<Path> s = Files.list(dir)) {
             return s.toList();
         }
+    }
+
+    @Test
+    void textThatIsNotUtf8IsRefusedWithItsLineAndByte() throws IOException {
+        Path f = dir.resolve("latin1.atw");
+        Files.write(f, "// ampturn worksheet 1\n\n\"caf\u00e9\"\n".getBytes(StandardCharsets.ISO_8859_1));
+        IOException e = assertThrows(IOException.class, () -> WorksheetFiles.readText(f));
+        assertEquals(f + " is not UTF-8 text: line 3, byte 5 of the line (0xE9, byte 29 of the file); save it as UTF-8", e.getMessage());
     }
 }

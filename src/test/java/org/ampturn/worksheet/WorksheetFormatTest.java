@@ -1,5 +1,6 @@
 package org.ampturn.worksheet;
 
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -142,5 +143,17 @@ class WorksheetFormatTest {
         assertFalse(Completeness.BRACKETS.isComplete("coil."));
         assertTrue(Completeness.BRACKETS.isComplete("i++"));
         assertTrue(Completeness.BRACKETS.isComplete("char c = '}';"));
+    }
+
+    @Test
+    void entriesWithoutAHeaderAreNumberedFromTheirFirstLine() throws Exception {
+        Worksheet w = WorksheetFormat.parseEntries("mm(1)\n\n#digits 3\nfoo(\nbar()\n", Completeness.BRACKETS);
+        assertEquals(List.of("mm(1)", "#digits 3", "foo(", "bar()"), w.entries().stream().map(Block.Entry::source).toList());
+        int[] lines = new int[4];
+        int e = 0;
+        for (int k = 0; k < w.blocks().size(); k++) if (w.blocks().get(k) instanceof Block.Entry) lines[e++] = w.lineOf(k);
+        assertArrayEquals(new int[] {1, 3, 4, 5}, lines);
+        // in a file, a console command is refused by line; an open brace still gathers its body
+        assertEquals(1, WorksheetFormat.parse("// ampturn worksheet 1\n\nvoid f() {\nint x = 1;\n}\n", Completeness.BRACKETS).entries().size());
     }
 }

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -15,7 +15,9 @@ import java.util.List;
  * @param source      the entry as typed (may span several lines)
  * @param kind        the entry's kind; {@link Kind#ERROR} when any part of it failed
  * @param results     one result per part that shows something, in order
- * @param interrupted true when the entry was stopped by {@link Session#stop()}
+ * @param interrupted true when the entry was stopped by {@link Session#stop()}: it failed with
+ *                    {@value Session#INTERRUPTED}, or (a study that keeps what it did) it ended early
+ *                    with a partial value, which it shows
  * @param kept        true when the entry left something in the session (a value, a definition,
  *                    a statement that ran), so it counts as an entry of the worksheet and
  *                    {@link Session#undoLast()} takes it back; false when the compiler rejected all
@@ -46,13 +48,22 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
      * @param text   the text without indent: {@code "9.000 mJ"}, {@code "coil = ..."},
      *               {@code "defined method f(double)"}, or the error message
      * @param detail for a compile error, the offending source line and a caret line under it; else empty
+     * @param value  for a value or a declaration, the object itself (a {@code Quantity}, a
+     *               {@code Transient}, ...), read from the session when the entry ran; null when
+     *               there is none or it could not be read. It lives only in this process: a worksheet
+     *               records the text
      */
-    public record Result(Kind kind, String text, List<String> detail) {
+    public record Result(Kind kind, String text, List<String> detail, Object value) {
         public Result {
             detail = List.copyOf(detail);
         }
 
-        static Result of(Kind kind, String text) {
+        /** A result without the object behind it. */
+        public Result(Kind kind, String text, List<String> detail) {
+            this(kind, text, detail, null);
+        }
+
+        public static Result of(Kind kind, String text) {
             return new Result(kind, text, List.of());
         }
     }
@@ -86,15 +97,27 @@ public record Outcome(String source, Kind kind, List<Result> results, boolean in
     }
 
     /**
-     * The results as a worksheet records them after {@code //=}: a value's text alone
-     * ({@code "9.000 mJ"}), a declaration as {@code "coil = ..."}, a definition as shown, and an
-     * error as {@code "! message"}.
+     * The results as a worksheet records them after {@code //=}, one line each: a value's text alone
+     * ({@code "9.000 mJ"}), a declaration as {@code "coil = ..."}, a definition as shown, an error
+     * as {@code "! message"}, printed text as {@code "| text"}; the further lines of a result (a
+     * table, a compile error's source line and caret) indented by two spaces.
      */
     public List<String> recorded() {
         List<String> out = new ArrayList<>();
         for (Result r : results) {
-            out.add(r.kind() == Kind.ERROR ? "! " + r.text() : r.kind() == Kind.PRINTED ? "| " + r.text() : r.text());
+            String head = r.kind() == Kind.ERROR ? "! " : r.kind() == Kind.PRINTED ? "| " : "";
+            String[] parts = r.text().split("\n", -1);
+            out.add(head + parts[0]);
+            for (int i = 1; i < parts.length; i++) out.add("  " + parts[i]);
+            for (String d : r.detail()) out.add("  " + d);
         }
+        return out;
+    }
+
+    /** The objects the entry's values and declarations hold, in order (none for an entry that failed). */
+    public List<Object> values() {
+        List<Object> out = new ArrayList<>();
+        for (Result r : results) if (r.value() != null) out.add(r.value());
         return out;
     }
 

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -6,8 +6,8 @@ import java.util.Locale;
 import jdk.jshell.Diag;
 import jdk.jshell.EvalException;
 import jdk.jshell.JShellException;
-import org.ampturn.worksheet.Outcome.Kind;
-import org.ampturn.worksheet.Outcome.Result;
+import org.ampturn.session.Outcome.Kind;
+import org.ampturn.session.Outcome.Result;
 
 /** Turns JShell's diagnostics and exceptions into the one-line messages a worksheet shows. */
 final class SessionMessages {

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import java.io.ByteArrayOutputStream;
 import java.io.DataOutputStream;
@@ -39,13 +39,47 @@ final class SessionEngine implements ExecutionControlProvider {
         return Map.of();
     }
 
+    private volatile Guarded engine;
+
     @Override
     public ExecutionControl generate(ExecutionEnv env, Map<String, String> parameters) {
-        return new Guarded();
+        Guarded g = new Guarded();
+        engine = g;
+        return g;
+    }
+
+    /**
+     * The object a variable of the snippet that ran last holds (an expression's value is held in
+     * one too), or null when there is none or it cannot be read. The session keeps it beside the
+     * value's text, so what is made of a result (the report's cautions) reads the object itself.
+     */
+    Object lastValue(String variable) {
+        Guarded g = engine;
+        return g == null ? null : g.value(variable);
     }
 
     /** The local engine with the exit guard applied to every class it loads. */
     static final class Guarded extends LocalExecutionControl {
+        private volatile String lastClass;
+
+        @Override
+        public String invoke(String className, String methodName) throws RunException, EngineTerminationException, InternalException {
+            lastClass = className;
+            return super.invoke(className, methodName);
+        }
+
+        Object value(String variable) {
+            String c = lastClass;
+            if (c == null) return null;
+            try {
+                java.lang.reflect.Field f = findClass(c).getDeclaredField(variable);
+                f.setAccessible(true);
+                return f.get(null);
+            } catch (ReflectiveOperationException | RuntimeException | LinkageError e) {
+                return null;
+            }
+        }
+
         @Override
         public void load(ClassBytecodes[] cbcs) throws ClassInstallException, NotImplementedException, EngineTerminationException {
             super.load(guardAll(cbcs));

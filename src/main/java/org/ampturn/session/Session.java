@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import java.io.File;
 import java.util.ArrayList;
@@ -24,8 +24,8 @@ import jdk.jshell.SourceCodeAnalysis.CompletionInfo;
 import jdk.jshell.TypeDeclSnippet;
 import jdk.jshell.UnresolvedReferenceException;
 import jdk.jshell.VarSnippet;
-import org.ampturn.worksheet.Outcome.Kind;
-import org.ampturn.worksheet.Outcome.Result;
+import org.ampturn.session.Outcome.Kind;
+import org.ampturn.session.Outcome.Result;
 
 /**
  * A running worksheet session: an embedded JShell that runs entries in this JVM, with the
@@ -59,9 +59,6 @@ public final class Session implements AutoCloseable {
     /** A name defined in the session, for {@code #names}. */
     public record Name(String kind, String name, String type, String value) {}
 
-    /** One entry of a worksheet's text and the 1-based line it starts on. */
-    public record Entry(int line, String source) {}
-
     /** Completion candidates: each is the text that replaces {@code code[anchor, cursor)}. */
     public record Completion(int anchor, List<String> candidates) {}
 
@@ -75,12 +72,17 @@ public final class Session implements AutoCloseable {
     /** The snippets of those imports: part of the session, not of any entry, so {@link #clear()} keeps them. */
     private final Set<Snippet> preloaded = new HashSet<>();
     private final List<List<Snippet>> entries = new ArrayList<>();
+    /** Variables whose declaring entry threw: declared, but holding no value. */
+    private final Set<String> failedVariables = new HashSet<>();
     private final Object lock = new Object();
     private volatile boolean running;
     private volatile boolean stopRequested;
     private volatile long generation;
 
-    private Session(JShell shell, SessionImports library) {
+    private final SessionEngine engine;
+
+    private Session(JShell shell, SessionImports library, SessionEngine engine) {
+        this.engine = engine;
         this.shell = shell;
         this.analysis = shell.sourceCodeAnalysis();
         this.library = library;
@@ -122,13 +124,15 @@ public final class Session implements AutoCloseable {
     }
 
     private static Session build() {
+        CompilerNoise.install();
+        SessionEngine engine = new SessionEngine();
         JShell.Builder builder = JShell.builder()
-                .executionEngine(new SessionEngine(), Map.of())
+                .executionEngine(engine, Map.of())
                 .out(System.out)
                 .err(System.err);
         List<File> classPath = SessionClassPath.forEntries();
         if (!classPath.isEmpty()) builder.fileManager(fm -> SessionClassPath.apply(fm, classPath));
-        Session s = new Session(builder.build(), SessionImports.ofLibrary());
+        Session s = new Session(builder.build(), SessionImports.ofLibrary(), engine);
         synchronized (s.lock) {
             s.addImport(SessionImports.FACADE);
         }
@@ -203,6 +207,33 @@ public final class Session implements AutoCloseable {
      */
     public Outcome eval(String entrySource) {
         synchronized (lock) {
+            try {
+                return evalGuarded(entrySource);
+            } catch (RuntimeException | LinkageError | VirtualMachineError | AssertionError e) {
+                // the compiler or the engine failed on this entry: that is the entry's error, not the session's end
+                return new Outcome(entrySource, Kind.ERROR, List.of(Result.of(Kind.ERROR, toolFailure(e))), false, false);
+            }
+        }
+    }
+
+    /**
+     * The message of a failure inside the compiler or the engine (not in the entry's own code): what
+     * happened, in one line, and that the session goes on.
+     */
+    static String toolFailure(Throwable e) {
+        Throwable root = e;
+        while (root.getCause() != null && root.getCause() != root) root = root.getCause();
+        if (e instanceof StackOverflowError || root instanceof StackOverflowError) {
+            return "this entry is nested or chained too deeply for the Java compiler; split it into smaller entries";
+        }
+        if (e instanceof OutOfMemoryError || root instanceof OutOfMemoryError) {
+            return "this entry ran out of memory; the session goes on without it";
+        }
+        return "the Java compiler failed on this entry (" + e.getClass().getSimpleName() + "); rewrite it, the session goes on";
+    }
+
+    private Outcome evalGuarded(String entrySource) {
+        {
             importFor(entrySource);
             List<Snippet> added = new ArrayList<>();
             List<Result> results = new ArrayList<>();
@@ -212,11 +243,11 @@ public final class Session implements AutoCloseable {
             String rest = entrySource;
             int consumed = 0;
             while (!rest.isBlank() && !failed) {
-                CompletionInfo ci = analysis.analyzeCompletion(rest);
-                if (ci.completeness() == Completeness.EMPTY) break;
+                CompletionInfo ci = analyze(rest);
+                if (ci != null && ci.completeness() == Completeness.EMPTY) break;
                 String piece;
                 String remaining;
-                if (ci.completeness().isComplete()) {
+                if (ci != null && ci.completeness().isComplete()) {
                     piece = ci.source();
                     remaining = ci.remaining();
                 } else {
@@ -237,10 +268,13 @@ public final class Session implements AutoCloseable {
                     break;
                 } finally {
                     running = false;
+                    CompilerNoise.reset();
                     for (String line : printed.end()) results.add(Result.of(Kind.PRINTED, line));
                 }
-                if (stopRequested) {
-                    interrupted = true;
+                // stopped mid-run; an entry that caught the stop and returned (a study with its partial
+                // result) finished normally and shows its value
+                if (stopRequested) interrupted = true;
+                if (stopRequested && !gaveValue(events)) {
                     failed = true;
                     results.add(Result.of(Kind.ERROR, INTERRUPTED));
                     for (SnippetEvent e : events) if (e.causeSnippet() == null) added.add(e.snippet());
@@ -255,6 +289,7 @@ public final class Session implements AutoCloseable {
                     if (r.kind() == Kind.ERROR) failed = true;
                     else kind = r.kind();
                 }
+                if (interrupted) break; // the rest of a stopped entry does not run
                 consumed = entrySource.length() - remaining.length();
                 if (consumed < 0) consumed = 0;
                 rest = remaining;
@@ -325,6 +360,7 @@ public final class Session implements AutoCloseable {
             Collections.reverse(all);
             for (Snippet s : all) if (!preloaded.contains(s)) dropQuietly(s);
             entries.clear();
+            failedVariables.clear();
         }
     }
 
@@ -360,46 +396,6 @@ public final class Session implements AutoCloseable {
             shell.types().forEach(t -> out.add(new Name(typeKind(t), t.name(), "", "")));
             return out;
         }
-    }
-
-    /**
-     * Splits worksheet text into entries, feeding it line by line as if typed: lines gather until
-     * JShell's completeness analysis says the entry is complete, so a method or a multi-line
-     * expression is one entry. Blank lines and comment lines between entries are skipped (the
-     * worksheet reads its notes and {@code //=} lines itself).
-     */
-    public List<Entry> entries(String text) {
-        synchronized (lock) {
-            List<Entry> out = new ArrayList<>();
-            StringBuilder buf = new StringBuilder();
-            int start = 0;
-            String[] lines = text.split("\r?\n", -1);
-            for (int i = 0; i < lines.length; i++) {
-                String line = lines[i];
-                if (buf.length() == 0) {
-                    String t = line.strip();
-                    if (t.isEmpty() || t.startsWith("//")) continue;
-                    start = i + 1;
-                } else {
-                    buf.append('\n');
-                }
-                buf.append(line);
-                Completeness c = completeness(buf.toString());
-                if (c == Completeness.EMPTY) {
-                    buf.setLength(0);
-                } else if (c.isComplete() && !WorksheetFormat.continuedBelow(lines, i)) {
-                    out.add(new Entry(start, buf.toString()));
-                    buf.setLength(0);
-                }
-            }
-            if (buf.length() > 0 && !buf.toString().isBlank()) out.add(new Entry(start, buf.toString()));
-            return out;
-        }
-    }
-
-    /** The sources of {@link #entries(String)}. */
-    public List<String> splitEntries(String text) {
-        return entries(text).stream().map(Entry::source).collect(Collectors.toList());
     }
 
     /**
@@ -446,8 +442,31 @@ public final class Session implements AutoCloseable {
 
     // ---- helpers ------------------------------------------------------------------------------
 
+    /** True when a stopped snippet still ended with a value of its own (a study that returned its partial result). */
+    private static boolean gaveValue(List<SnippetEvent> events) {
+        return events.stream().anyMatch(e -> e.causeSnippet() == null && e.exception() == null && e.value() != null
+                && e.status() == Snippet.Status.VALID);
+    }
+
+    /** The analysis of the text's first snippet, or null when the analysis itself failed on it. */
+    private CompletionInfo analyze(String text) {
+        try {
+            return analysis.analyzeCompletion(text);
+        } catch (RuntimeException | LinkageError | VirtualMachineError | AssertionError e) {
+            return null;
+        }
+    }
+
     /** Completeness of the whole text, which may hold several snippets. */
     private Completeness completeness(String text) {
+        try {
+            return completenessUnguarded(text);
+        } catch (RuntimeException | LinkageError | VirtualMachineError | AssertionError e) {
+            return Completeness.COMPLETE; // the analysis failed: let the compiler report on the entry
+        }
+    }
+
+    private Completeness completenessUnguarded(String text) {
         String rest = text;
         boolean any = false;
         while (true) {
@@ -474,10 +493,22 @@ public final class Session implements AutoCloseable {
             }
             return Result.of(Kind.ERROR, name + " cannot run until " + needs + " is defined");
         }
-        if (ex != null) return Result.of(Kind.ERROR, SessionMessages.exception(ex));
+        if (ex != null) {
+            if (sn instanceof VarSnippet) failedVariables.add(((VarSnippet) sn).name());
+            String noValue = noValue(ex, piece);
+            return Result.of(Kind.ERROR, noValue != null ? noValue : SessionMessages.exception(ex));
+        }
+        if (sn instanceof VarSnippet && e.status() == Snippet.Status.VALID) failedVariables.remove(((VarSnippet) sn).name());
         switch (e.status()) {
-            case REJECTED:
-                return SessionMessages.compileError(errors(sn), entry, pieceStart, piece);
+            case REJECTED: {
+                Result r = SessionMessages.compileError(errors(sn), entry, pieceStart, piece);
+                for (String name : failedVariables) {
+                    if (r.text().equals("cannot find symbol: variable " + name) || r.text().startsWith("cannot find symbol: variable " + name + "\n")) {
+                        return new Result(Kind.ERROR, name + " has no value: its entry failed", r.detail());
+                    }
+                }
+                return r;
+            }
             case VALID:
             case RECOVERABLE_DEFINED:
             case RECOVERABLE_NOT_DEFINED:
@@ -497,8 +528,9 @@ public final class Session implements AutoCloseable {
                 return Result.of(Kind.ERROR, v.name() + " cannot be used until " + unresolved + " is defined");
             }
             String value = shown(e.value(), v.typeName());
-            if (v.subKind() == Snippet.SubKind.TEMP_VAR_EXPRESSION_SUBKIND) return Result.of(Kind.VALUE, value);
-            return Result.of(Kind.DECLARATION, v.name() + " = " + value);
+            Object object = e.status() == Snippet.Status.VALID ? engine.lastValue(v.name()) : null;
+            if (v.subKind() == Snippet.SubKind.TEMP_VAR_EXPRESSION_SUBKIND) return new Result(Kind.VALUE, value, List.of(), object);
+            return new Result(Kind.DECLARATION, v.name() + " = " + value, List.of(), object);
         }
         if (sn instanceof ExpressionSnippet) {
             ExpressionSnippet x = (ExpressionSnippet) sn;
@@ -522,6 +554,21 @@ public final class Session implements AutoCloseable {
                     + (((ImportSnippet) sn).isStatic() ? " (static)" : ""));
         }
         return null; // a statement shows nothing
+    }
+
+    /**
+     * For a null pointer met by an entry that uses a variable whose own entry failed (so it holds
+     * no value): says so by name instead of "NullPointerException". Null otherwise.
+     */
+    private String noValue(JShellException ex, String piece) {
+        if (!(ex instanceof jdk.jshell.EvalException)
+                || !"java.lang.NullPointerException".equals(((jdk.jshell.EvalException) ex).getExceptionClassName())) return null;
+        for (String name : failedVariables) {
+            if (java.util.regex.Pattern.compile("(?<![\\w$.])" + java.util.regex.Pattern.quote(name) + "(?![\\w$])").matcher(piece).find()) {
+                return name + " has no value: its entry failed";
+            }
+        }
+        return null;
     }
 
     private static String usableOnce(String unresolved) {

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -11,11 +11,25 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
+import org.ampturn.worksheet.Block;
+import org.ampturn.worksheet.Completeness;
+import org.ampturn.worksheet.FakeEvaluator;
+import org.ampturn.worksheet.Replay;
+import org.ampturn.worksheet.Worksheet;
+import org.ampturn.worksheet.WorksheetFiles;
+import org.ampturn.worksheet.WorksheetFormat;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
 /** The report: self-contained, notes as prose, entries with results, charts inline, cautions, deferral. */
 class HtmlReportTest {
+
+    /** Runs and workspaces number and place charts for their worksheet: leave the chart layer as other tests expect it. */
+    @org.junit.jupiter.api.AfterEach
+    void resetCharts() {
+        org.ampturn.chart.Figures.useNumbering(null);
+        org.ampturn.chart.Figures.useDirectory(java.nio.file.Path.of(""));
+    }
     @TempDir
     Path dir;
 
@@ -53,8 +67,8 @@ class HtmlReportTest {
         assertTrue(html.contains("<p class=\"note\">The latch coil runs from 12 V. Its switch opens at 20 ms.</p>\n<p class=\"note\">A second paragraph.</p>"), html);
         assertTrue(html.contains("<pre class=\"src\"><code>var L = mH(180);</code></pre>\n<pre class=\"out\">L = 180.0 mH</pre>"));
         assertTrue(html.contains("<pre class=\"out\">= 1.588 J</pre>"));
-        // charts inline: SVG as markup (prologue and scripts removed), PNG as a data URI
-        assertTrue(html.contains("<figure class=\"chart\"><svg xmlns=\"http://www.w3.org/2000/svg\""));
+        // charts inline as data images: SVG too, so a browser runs none of its scripts
+        assertTrue(html.contains("<figure class=\"chart\"><img alt=\"gate.figures/01-current.svg\" src=\"data:image/svg+xml;base64,"), html);
         assertTrue(html.contains("src=\"data:image/png;base64,iVBORw0KGgo"), "PNG signature in base64");
         assertTrue(html.contains("Figure gate.figures/missing.svg was not found next to the worksheet."));
         assertFalse(html.contains("<script"), "no script");
@@ -120,5 +134,74 @@ class HtmlReportTest {
         Path out = Path.of("target/report-sample.html").toAbsolutePath();
         HtmlReport.write(WorksheetFiles.read(f, Completeness.BRACKETS), f, null, out);
         assertTrue(Files.size(out) > 2000);
+    }
+
+    @Test
+    void aHostileSvgNeverRunsAndOnlyTheFiguresFolderIsRead() throws Exception {
+        Path f = sheet();
+        Files.writeString(dir.resolve("gate.figures/03-evil.svg"), "<svg xmlns=\"http://www.w3.org/2000/svg\" onload=\"alert(1)\">"
+                + "<foreignObject><body xmlns=\"http://www.w3.org/1999/xhtml\"><script>alert(2)</script></body></foreignObject></svg>");
+        Files.writeString(dir.resolve("secret.svg"), "<svg xmlns=\"http://www.w3.org/2000/svg\"><text>private drawing</text></svg>");
+        Path outside = Files.createTempFile("ampturn-outside-", ".svg");
+        Files.writeString(outside, "<svg xmlns=\"http://www.w3.org/2000/svg\"><text>another folder</text></svg>");
+        Files.createSymbolicLink(dir.resolve("gate.figures/04-link.svg"), dir.resolve("secret.svg"));
+        try {
+            String text = Files.readString(f) + "mm(1)\n//= 1.000 mm\n//= figure: gate.figures/03-evil.svg\n//= figure: gate.figures/../secret.svg\n"
+                    + "//= figure: " + outside + "\n//= figure: gate.figures/04-link.svg\n";
+            Files.writeString(f, text);
+            String html = HtmlReport.render(WorksheetFiles.read(f, Completeness.BRACKETS), f, null);
+            assertFalse(html.contains("onload") || html.contains("foreignObject") || html.contains("<svg") || html.contains("alert("),
+                    "SVG markup never reaches the page");
+            assertTrue(html.contains("<img alt=\"gate.figures/03-evil.svg\" src=\"data:image/svg+xml;base64,"), "embedded as an image only");
+            assertTrue(html.contains("Figure secret.svg is outside the worksheet's figures folder, so it is not embedded."), html);
+            assertTrue(html.contains("Figure " + outside + " is outside the worksheet's figures folder"), html);
+            assertTrue(html.contains("Figure gate.figures/04-link.svg is outside the worksheet's figures folder"), "a link out is followed and refused");
+            for (var m : Pattern.compile("base64,([A-Za-z0-9+/=]+)").matcher(html).results().toList()) {
+                String decoded = new String(java.util.Base64.getDecoder().decode(m.group(1)), java.nio.charset.StandardCharsets.ISO_8859_1);
+                assertFalse(decoded.contains("private drawing") || decoded.contains("another folder"), "no outside file was read into the report");
+            }
+        } finally {
+            Files.deleteIfExists(outside);
+        }
+    }
+
+    @Test
+    void theReportCarriesWhatADesignFileNeedsAtTheTop() throws Exception {
+        Path f = dir.resolve("choke.atw");
+        Files.writeString(f, FakeEvaluator.SHEET.replace("// title: t\n", "// title: Choke energy\n// author: R. Ortiz\n// checker: M. Lind\n"
+                + "// revision: C\n// date: 2026-11-30\n"));
+        Worksheet w = WorksheetFiles.read(f, Completeness.BRACKETS);
+        String recorded = HtmlReport.render(w, f, null);
+        for (String s : List.of("<dt>author</dt><dd>R. Ortiz</dd>", "<dt>checker</dt><dd>M. Lind</dd>", "<dt>revision</dt><dd>C</dd>",
+                "<dt>date</dt><dd>2026-11-30</dd>", "<dt>SHA-256</dt><dd><code>" + org.ampturn.worksheet.TrustStore.hash(Files.readAllBytes(f)),
+                "<dt>made with</dt><dd>Ampturn " + org.ampturn.Ampturn.version(), "not verified: the results are as recorded",
+                "<h3>Inputs</h3>\n<ul>\n<li><code>L = 4.700 mH</code></li>\n<li><code>I = 2.000 A</code></li>",
+                "<h3>Results</h3>\n<ul>\n<li><code>L.times(I.pow(2)).div(2)  =  9.400 mJ</code></li>")) {
+            assertTrue(recorded.contains(s), s + " in:\n" + recorded);
+        }
+        assertTrue(recorded.indexOf("id=\"summary\"") < recorded.indexOf("<main>"), "the summary comes before the entries");
+        List<Replay.Step> steps = Replay.run(w, f, FakeEvaluator.truth(), p -> null, s -> {});
+        assertTrue(HtmlReport.render(w, f, steps, List.of()).contains("<dd class=\"ok\">verified: computed afresh on"));
+        List<Replay.Step> wrong = Replay.run(w, f, FakeEvaluator.truth().answer("L.times(I.pow(2)).div(2)", "  = 9.900 mJ"), p -> null, s -> {});
+        String differs = HtmlReport.render(w, f, wrong, org.ampturn.worksheet.Verifier.compare(f, wrong));
+        assertTrue(differs.contains("<dd class=\"notok\">NOT verified: computed afresh on"), differs);
+        assertTrue(HtmlReport.render(Worksheet.titled("none"), null, null).contains("<dt>author</dt><dd>(not given in the header)</dd>"));
+    }
+
+    @Test
+    void cautionsComeFromTheResultsThatRaisedThem() throws Exception {
+        Path f = dir.resolve("typed.atw");
+        // a text that reads like 300 V, and a quantity of 300 V; 60 V is the common-practice touch limit
+        Files.writeString(f, "// ampturn worksheet 1\n\n\"300 V\"\n//= 300 V\nV(300).times(0.2)\n//= 60.00 V\n");
+        try (org.ampturn.worksheet.ShellEvaluator shell = org.ampturn.worksheet.ShellEvaluator.start()) {
+            Worksheet w = WorksheetFiles.read(f, shell.completeness());
+            List<Replay.Step> steps = Replay.run(w, f, shell, p -> null, s -> {});
+            assertTrue(steps.get(1).result().outcome().values().get(0) instanceof org.ampturn.units.Quantity, "the object itself is kept");
+            String html = HtmlReport.render(w, f, steps, List.of());
+            assertFalse(html.contains("<h3>Voltage above 60 V</h3>"),
+                    "a string is not a voltage, and 300 V × 0.2 = 60 V is not above 60 V, whatever the text: " + html);
+            String recorded = HtmlReport.render(w, f, null);
+            assertTrue(recorded.contains("<h3>Voltage above 60 V</h3>"), "from records alone the text is all there is");
+        }
     }
 }

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.report;
 
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
+import org.ampturn.worksheet.ResultMatch;
 
 /**
  * The safety cautions that apply to what a worksheet computed, found by reading the quantities in
@@ -31,14 +32,33 @@ public final class Cautions {
     /** One caution: a heading, why it applies (common practice named), and where it was seen. */
     public record Caution(String heading, String text, List<String> where) {}
 
-    /** What a worksheet's entry said, for scanning: its line, source and result lines. */
-    public record Seen(int line, String source, List<String> results) {}
+    /**
+     * What a worksheet's entry gave, for scanning: its line, source and result lines, and the
+     * objects behind its results when it ran just now ({@code values}; empty for results known
+     * only as recorded text). Cautions come from the objects when there are any: a quantity is
+     * checked by its dimension and SI value, a drive's transient brings its own cautions.
+     */
+    public record Seen(int line, String source, List<String> results, List<Object> values) {
+        public Seen {
+            results = List.copyOf(results);
+            values = List.copyOf(values);
+        }
+
+        /** An entry known only by its recorded text. */
+        public Seen(int line, String source, List<String> results) {
+            this(line, source, results, List.of());
+        }
+    }
 
     /** The cautions that apply, in a fixed order; empty when none does. */
     public static List<Caution> scan(List<Seen> entries) {
         Map<String, List<String>> hits = new LinkedHashMap<>();
-        for (String k : List.of("volt", "mains", "energy", "hot", "classA")) hits.put(k, new ArrayList<>());
+        for (String k : List.of("volt", "mains", "energy", "hot", "classA", "drive")) hits.put(k, new ArrayList<>());
         for (Seen s : entries) {
+            if (!s.values().isEmpty()) {
+                for (Object v : s.values()) typed(hits, s.line(), v);
+                continue;
+            }
             List<String> texts = new ArrayList<>(s.results());
             texts.add(s.source());
             for (String t : texts) {
@@ -50,22 +70,16 @@ public final class Cautions {
                     } catch (RuntimeException e) {
                         continue;
                     }
-                    String at = "line " + s.line() + ": " + p.number() + " " + p.unit();
-                    double v = Math.abs(q.si());
-                    if (q.is(Dimension.VOLTAGE)) {
-                        if (v > 60) add(hits, "volt", at);
-                        if (v >= 100 && v <= 277) add(hits, "mains", at);
-                    } else if (q.is(Dimension.ENERGY) && v > 1) {
-                        add(hits, "energy", at);
-                    } else if (q.isAbsoluteTemperature()) {
-                        double c = q.si() - 273.15;
-                        if (c > 60) add(hits, "hot", at);
-                        if (c > 105) add(hits, "classA", at);
-                    }
+                    quantity(hits, "line " + s.line() + ": " + p.number() + " " + p.unit(), q);
                 }
             }
         }
         List<Caution> out = new ArrayList<>();
+        if (!hits.get("drive").isEmpty()) {
+            out.add(new Caution("Cautions of the drive simulation",
+                    "The simulated drive raised these cautions itself (common-practice thresholds: switch voltage above 60 V, "
+                    + "stored energy above 1 J, avalanche of the switch).", hits.get("drive")));
+        }
         if (!hits.get("volt").isEmpty()) {
             out.add(new Caution("Voltage above 60 V",
                     "A switch that opens an inductive circuit sees the coil's flyback voltage, which can far exceed the supply. "
@@ -96,6 +110,29 @@ public final class Cautions {
                     hits.get("classA")));
         }
         return out;
+    }
+
+    /** The cautions a result object raises: a quantity by its value, a drive transient by its own cautions. */
+    private static void typed(Map<String, List<String>> hits, int line, Object v) {
+        if (v instanceof Quantity) {
+            quantity(hits, "line " + line + ": " + v, (Quantity) v);
+        } else if (v instanceof org.ampturn.drive.Transient) {
+            for (String c : ((org.ampturn.drive.Transient) v).cautions()) add(hits, "drive", "line " + line + ": " + c);
+        }
+    }
+
+    private static void quantity(Map<String, List<String>> hits, String at, Quantity q) {
+        double v = Math.abs(q.si());
+        if (q.is(Dimension.VOLTAGE)) {
+            if (v > 60) add(hits, "volt", at);
+            if (v >= 100 && v <= 277) add(hits, "mains", at);
+        } else if (q.is(Dimension.ENERGY) && v > 1) {
+            add(hits, "energy", at);
+        } else if (q.isAbsoluteTemperature()) {
+            double c = q.si() - 273.15;
+            if (c > 60) add(hits, "hot", at);
+            if (c > 105) add(hits, "classA", at);
+        }
     }
 
     private static void add(Map<String, List<String>> hits, String key, String at) {

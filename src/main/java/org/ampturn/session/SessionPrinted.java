@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import java.io.ByteArrayOutputStream;
 import java.io.PrintStream;

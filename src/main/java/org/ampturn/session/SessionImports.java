@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import java.io.IOException;
 import java.net.URISyntaxException;
@@ -33,7 +33,7 @@ final class SessionImports {
     static final String FACADE = "import static org.ampturn.Ampturn.*;";
 
     /** Packages a worksheet does not import: the machinery that runs it. */
-    private static final List<String> HIDDEN = List.of("worksheet", "console");
+    private static final List<String> HIDDEN = List.of("session", "worksheet", "report", "console");
 
     /**
      * Simple name of each top-level library class to the last segment of its package ("Solenoid" to

@@ -1,4 +1,4 @@
-package org.ampturn.worksheet;
+package org.ampturn.session;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
@@ -6,7 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
 import java.util.concurrent.TimeUnit;
-import org.ampturn.worksheet.Outcome.Kind;
+import org.ampturn.session.Outcome.Kind;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
@@ -189,22 +189,7 @@ class SessionTest {
     }
 
     @Test
-    void aChainOnSeveralLinesIsOneEntry() {
-        List<Session.Entry> e = session.entries("var d = mm(10)\n    .times(2)\n    .plus(mm(1));\nd\n");
-        assertEquals(List.of(new Session.Entry(1, "var d = mm(10)\n    .times(2)\n    .plus(mm(1));"), new Session.Entry(4, "d")), e);
-        assertEquals(List.of("  d = 21.00 mm"), session.eval(e.get(0).source()).lines());
-    }
-
-    @Test
-    void entriesAreSplitLineByLineAsTyped() {
-        String text = "// ampturn worksheet 1\n// title: demo\n\nvar d = mm(10)\n//= d = 10.00 mm\nd.times(2)\n\n"
-                + "double half(double v) {\n  return v / 2;\n}\nint k = 1; for (int i = 0; i < 2; i++) {\n  k++;\n}\n";
-        List<Session.Entry> e = session.entries(text);
-        assertEquals(4, e.size(), e.toString());
-        assertEquals(new Session.Entry(4, "var d = mm(10)"), e.get(0));
-        assertEquals(new Session.Entry(6, "d.times(2)"), e.get(1));
-        assertEquals(new Session.Entry(8, "double half(double v) {\n  return v / 2;\n}"), e.get(2));
-        assertEquals(11, e.get(3).line());
+    void anUnfinishedEntryNeedsMoreLines() {
         assertTrue(session.needsMore("void f() {"));
         assertTrue(session.needsMore("mm(1).plus("));
         assertFalse(session.needsMore("mm(1)"));
