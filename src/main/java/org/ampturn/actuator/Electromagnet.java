@@ -37,7 +37,7 @@ public final class Electromagnet {
 
     /** An electromagnet of {@code turns} on {@code ironPath}, closing through {@code gaps} gaps of {@code poleArea} each. */
     public static Electromagnet of(int turns, MagneticCircuit ironPath, Quantity poleArea, int gaps) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         if (ironPath == null) throw new IllegalArgumentException("iron path is missing (null)");
         double a = Require.positive("pole area", poleArea, Dimension.AREA);
         Require.positive("gaps", gaps);
@@ -50,29 +50,29 @@ public final class Electromagnet {
 
     /** The whole magnetic circuit with the armature at gap x. */
     public MagneticCircuit circuitAt(Quantity gap) {
-        return circuitAt(Require.positive("gap", gap, Dimension.LENGTH));
+        return circuitAt(Require.length("gap", gap));
     }
 
     /** Small-signal inductance at gap x. */
     public Quantity inductance(Quantity gap) {
-        return Quantity.of(turns * (double) turns / reluctanceAt(Require.positive("gap", gap, Dimension.LENGTH)), Dimension.INDUCTANCE);
+        return Quantity.of(turns * (double) turns / reluctanceAt(Require.length("gap", gap)), Dimension.INDUCTANCE);
     }
 
     /** Gap flux density at gap x and current i. */
     public Quantity gapFluxDensity(Quantity gap, Quantity current) {
-        double x = Require.positive("gap", gap, Dimension.LENGTH);
+        double x = Require.length("gap", gap);
         double i = Require.si("current", current, Dimension.CURRENT);
         return Quantity.of(fluxAt(x, i) / area, Dimension.FLUX_DENSITY);
     }
 
     /** Holding force from the gap flux density, n·B²A/(2μ0). */
     public Quantity force(Quantity gap, Quantity current) {
-        return Quantity.of(forceAt(Require.positive("gap", gap, Dimension.LENGTH), Require.si("current", current, Dimension.CURRENT)), Dimension.FORCE);
+        return Quantity.of(forceAt(Require.length("gap", gap), Require.si("current", current, Dimension.CURRENT)), Dimension.FORCE);
     }
 
     /** Holding force from the co-energy's derivative with gap at constant current. */
     public Quantity forceByCoenergy(Quantity gap, Quantity current) {
-        return Quantity.of(forceByCoenergyAt(Require.positive("gap", gap, Dimension.LENGTH), Require.si("current", current, Dimension.CURRENT)),
+        return Quantity.of(forceByCoenergyAt(Require.length("gap", gap), Require.si("current", current, Dimension.CURRENT)),
                 Dimension.FORCE);
     }
 

@@ -72,9 +72,9 @@ public final class Plunger implements Armature {
      * no spring, no load, no damping, coil resistance 10 Ω at 20 °C. Change them with the {@code with…} methods.
      */
     public static Plunger of(int turns, Quantity poleArea, Quantity stroke) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         double a = Require.positive("pole area", poleArea, Dimension.AREA);
-        double s = Require.positive("stroke", stroke, Dimension.LENGTH);
+        double s = Require.length("stroke", stroke);
         return new Plunger(turns, a, s, 0.05e-3, 0.1e-3, a, 0, null, 0.010, 0, 0, 0, 0, 10, T20);
     }
 
@@ -86,20 +86,20 @@ public final class Plunger implements Armature {
 
     /** Gap left when closed (a non-magnetic stop or plating), in series with the working gap. */
     public Plunger withResidualGap(Quantity gap) {
-        double g = Require.nonNegative("residual gap", gap, Dimension.LENGTH);
+        double g = Require.lengthOrZero("residual gap", gap);
         return copy(g, parasitic, parasiticArea, ironLength, iron, mass, stiffness, preload, load, damping, r20, kelvin);
     }
 
     /** Fixed parasitic gap (the radial sliding gap) of the given length and area. */
     public Plunger withParasiticGap(Quantity gap, Quantity gapArea) {
-        double g = Require.nonNegative("parasitic gap", gap, Dimension.LENGTH);
+        double g = Require.lengthOrZero("parasitic gap", gap);
         double a = Require.positive("parasitic gap area", gapArea, Dimension.AREA);
         return copy(residual, g, a, ironLength, iron, mass, stiffness, preload, load, damping, r20, kelvin);
     }
 
     /** Iron path of the given mean length and material, with the pole's cross-section. */
     public Plunger withIron(Quantity pathLength, MagneticMaterial material) {
-        double l = Require.positive("iron path length", pathLength, Dimension.LENGTH);
+        double l = Require.length("iron path length", pathLength);
         if (material == null) throw new IllegalArgumentException("iron material is missing (null)");
         return copy(residual, parasitic, parasiticArea, l, material, mass, stiffness, preload, load, damping, r20, kelvin);
     }
@@ -220,7 +220,7 @@ public final class Plunger implements Armature {
     /** Magnetic force at a current and position (N): solves the magnetic circuit for λ. */
     public Quantity force(Quantity current, Quantity position) {
         double i = Require.si("current", current, Dimension.CURRENT);
-        double x = Require.between("position (m)", Require.si("position", position, Dimension.LENGTH), 0, stroke);
+        double x = Require.between("position (m)", Require.distance("position", position), 0, stroke);
         return Quantity.of(forceAt(fluxLinkageAt(i, x), x), Dimension.FORCE);
     }
 

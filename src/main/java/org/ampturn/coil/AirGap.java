@@ -30,14 +30,14 @@ public final class AirGap implements MagneticCircuit {
 
     /** A gap of {@code length} across pole faces of {@code area}, without fringing. */
     public static AirGap of(Quantity length, Quantity area) {
-        double g = Require.positive("gap length", length, Dimension.LENGTH);
+        double g = Require.length("gap length", length);
         double a = Require.positive("gap area", area, Dimension.AREA);
         return new AirGap(g, a, 1, Double.NaN);
     }
 
     /** The same gap with McLyman's fringing factor for a winding window of height {@code windowHeight}. */
     public AirGap withFringing(Quantity windowHeight) {
-        double gw = Require.positive("window height", windowHeight, Dimension.LENGTH);
+        double gw = Require.length("window height", windowHeight);
         if (!(2 * gw > length)) {
             throw new IllegalArgumentException("window height (" + windowHeight + ") must exceed half the gap " + length()
                     + " for McLyman's fringing factor; valid range: > " + Quantity.of(length / 2, Dimension.LENGTH));
@@ -47,6 +47,9 @@ public final class AirGap implements MagneticCircuit {
 
     /** McLyman's fringing factor F = 1 + (lg/√Ac)·ln(2G/lg); lengths in m, area in m². */
     public static double mcLymanFactor(double gap, double area, double windowHeight) {
+        Require.between("gap length", gap, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
+        Require.between("area", area, Dimension.AREA, Require.MIN_LENGTH * Require.MIN_LENGTH, Require.MAX_LENGTH * Require.MAX_LENGTH);
+        Require.between("window height", windowHeight, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
         return 1 + gap / Math.sqrt(area) * Math.log(2 * windowHeight / gap);
     }
 

@@ -26,7 +26,7 @@ public final class Core implements MagneticCircuit {
 
     /** A core piece of magnetic path length {@code pathLength}, cross-section {@code area}, of {@code material}. */
     public static Core of(String name, Quantity pathLength, Quantity area, MagneticMaterial material) {
-        double l = Require.positive("path length", pathLength, Dimension.LENGTH);
+        double l = Require.length("path length", pathLength);
         double a = Require.positive("area", area, Dimension.AREA);
         if (material == null) throw new IllegalArgumentException("material is missing (null); give a MagneticMaterial");
         return new Core(name == null || name.isBlank() ? material.name() : name, l, a, material);
@@ -57,7 +57,7 @@ public final class Core implements MagneticCircuit {
     }
 
     private double checkGap(Quantity gapLength) {
-        double g = Require.positive("gap length", gapLength, Dimension.LENGTH);
+        double g = Require.length("gap length", gapLength);
         if (!(g < length)) {
             throw new IllegalArgumentException("gap length (" + gapLength + ") must be shorter than the core's path length " + pathLength()
                     + "; valid range: 0 < gap < " + pathLength());

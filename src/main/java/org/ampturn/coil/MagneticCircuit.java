@@ -84,7 +84,7 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
     /** Small-signal inductance N²/R of {@code turns} turns linking the whole circuit. */
     default Quantity inductance(int turns) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         return Quantity.of((double) turns * turns / reluctanceSI(), Dimension.INDUCTANCE);
     }
 
@@ -110,7 +110,7 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
     /** Flux density in each part at {@code turns} × {@code current}, as a small table. */
     default FluxReport fluxDensities(int turns, Quantity current) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         double i = Require.si("current", current, Dimension.CURRENT);
         return FluxReport.of(this, turns, i);
     }
@@ -122,7 +122,7 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
     /** Which part saturates first, and at what current, for {@code turns} turns. */
     default Saturation saturation(int turns) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         return Saturation.of(this, turns);
     }
 

@@ -71,11 +71,14 @@ public final class Multilayer implements AirCoil {
      * (wires touching) until {@link #withWire(Quantity)} says otherwise.
      */
     public static Multilayer of(int turnsPerLayer, int layers, Quantity innerDiameter, Quantity outerDiameter, Quantity length) {
-        Require.positive("turns per layer", turnsPerLayer);
-        Require.positive("layers", layers);
-        double id = Require.positive("inner diameter", innerDiameter, Dimension.LENGTH);
-        double od = Require.positive("outer diameter", outerDiameter, Dimension.LENGTH);
-        double b = Require.positive("length", length, Dimension.LENGTH);
+        Require.turns("turns per layer", turnsPerLayer);
+        Require.turns("layers", layers);
+        if ((long) turnsPerLayer * layers > Require.MAX_TURNS) {
+            throw Require.fail("turns per layer × layers (" + turnsPerLayer + " × " + layers + ") must be at most " + Require.MAX_TURNS);
+        }
+        double id = Require.length("inner diameter", innerDiameter);
+        double od = Require.length("outer diameter", outerDiameter);
+        double b = Require.length("length", length);
         if (!(od > id)) {
             throw new IllegalArgumentException("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter + ")");
         }
@@ -88,8 +91,8 @@ public final class Multilayer implements AirCoil {
      * (mean radius 3c/2), wound as n × n turns; {@code turns} must be a perfect square n².
      */
     public static Multilayer brooks(int turns, Quantity side) {
-        Require.positive("turns", turns);
-        double c = Require.positive("side of the winding section", side, Dimension.LENGTH);
+        Require.turns("turns", turns);
+        double c = Require.length("side of the winding section", side);
         int n = (int) Math.round(Math.sqrt(turns));
         if (n * n != turns) {
             throw new IllegalArgumentException("turns (" + turns + ") must be a perfect square for an n × n Brooks winding, e.g. "
@@ -101,7 +104,7 @@ public final class Multilayer implements AirCoil {
     /** The same coil with round wire of this diameter (at most the smaller pitch). */
     public Multilayer withWire(Quantity wireDiameter) {
         if (winding != null) throw new IllegalStateException("this coil takes its wire from its winding; change the winding's wire instead");
-        double w = Require.positive("wire diameter", wireDiameter, Dimension.LENGTH);
+        double w = Require.length("wire diameter", wireDiameter);
         double pitch = Math.min(length / perLayer, (outer - inner) / 2 / layers);
         if (w > pitch * (1 + 1e-9)) {
             throw new IllegalArgumentException("wire diameter (" + wireDiameter + ") must be at most the smaller pitch "
@@ -186,12 +189,15 @@ public final class Multilayer implements AirCoil {
 
     /** Wheeler 1928 multilayer (H): L[μH] = 0.8 a²N²/(6a + 9b + 10c), inches; arguments in m. */
     public static double wheeler1928At(double turns, double length, double meanRadius, double build) {
+        Solenoid.checkKernel(turns, length, meanRadius);
+        Require.between("build", build, Dimension.LENGTH, 0, Require.MAX_LENGTH);
         double a = meanRadius;
         return 0.8e-6 * a * a * turns * turns / (Solenoid.INCH * (6 * a + 9 * length + 10 * build));
     }
 
     /** Brooks (H): 1.6994e-6·a·N², a the mean radius in m. */
     public static double brooksAt(double turns, double meanRadius) {
+        Solenoid.checkKernel(turns, meanRadius, meanRadius);
         return 1.6994e-6 * meanRadius * turns * turns;
     }
 

@@ -30,8 +30,8 @@ public final class RodCore {
     }
 
     public static RodCore of(Quantity length, Quantity diameter, MagneticMaterial material) {
-        double l = Require.positive("rod length", length, Dimension.LENGTH);
-        double d = Require.positive("rod diameter", diameter, Dimension.LENGTH);
+        double l = Require.length("rod length", length);
+        double d = Require.length("rod diameter", diameter);
         if (material == null) throw new IllegalArgumentException("material is missing (null)");
         return new RodCore(l, d, material);
     }
@@ -69,7 +69,7 @@ public final class RodCore {
 
     /** Demagnetising factor of an ellipsoid of revolution of axis ratio m = length/diameter (Osborn 1945). */
     public static double demagnetisingFactorAt(double m) {
-        Require.positive("aspect ratio", m);
+        Require.between("aspect ratio", m, 1e-9, 1e9);
         if (Math.abs(m - 1) < 1e-6) return 1.0 / 3 - 4.0 / 15 * (m - 1); // series about the sphere
         if (m > 1) {
             double s = Math.sqrt(m * m - 1);

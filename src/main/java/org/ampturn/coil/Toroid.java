@@ -40,10 +40,10 @@ public final class Toroid {
 
     /** Rectangular section on a core of {@code material}. */
     public static Toroid rectangular(int turns, Quantity innerDiameter, Quantity outerDiameter, Quantity height, MagneticMaterial material) {
-        Require.positive("turns", turns);
-        double id = Require.positive("inner diameter", innerDiameter, Dimension.LENGTH);
-        double od = Require.positive("outer diameter", outerDiameter, Dimension.LENGTH);
-        double hh = Require.positive("height", height, Dimension.LENGTH);
+        Require.turns("turns", turns);
+        double id = Require.length("inner diameter", innerDiameter);
+        double od = Require.length("outer diameter", outerDiameter);
+        double hh = Require.length("height", height);
         if (!(id < od)) {
             throw new IllegalArgumentException("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter
                     + "); valid range: 0 < inner < " + outerDiameter);
@@ -60,9 +60,9 @@ public final class Toroid {
 
     /** Circular section on a core of {@code material}. */
     public static Toroid circular(int turns, Quantity meanDiameter, Quantity sectionDiameter, MagneticMaterial material) {
-        Require.positive("turns", turns);
-        double d = Require.positive("mean diameter", meanDiameter, Dimension.LENGTH);
-        double s = Require.positive("section diameter", sectionDiameter, Dimension.LENGTH);
+        Require.turns("turns", turns);
+        double d = Require.length("mean diameter", meanDiameter);
+        double s = Require.length("section diameter", sectionDiameter);
         if (!(s < d)) {
             throw new IllegalArgumentException("section diameter (" + sectionDiameter + ") must be less than the mean diameter (" + meanDiameter
                     + "); valid range: 0 < section < " + meanDiameter);

@@ -50,7 +50,7 @@ public final class WoundCoil implements Coil {
 
     /** {@code turns} turns of copper of {@code resistance20} (at 20 °C) on {@code circuit}. */
     public static WoundCoil of(int turns, Quantity resistance20, MagneticCircuit circuit) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         double r = Require.positive("resistance at 20 °C", resistance20, Dimension.RESISTANCE);
         if (circuit == null) throw new IllegalArgumentException("magnetic circuit is missing (null)");
         return new WoundCoil(turns, r, null, circuit, org.ampturn.material.Conductor.T20);

@@ -40,7 +40,10 @@ public final class Quantity implements Comparable<Quantity> {
     /** A quantity from a value in a unit: {@code Quantity.of(4.7, "mH")}. */
     public static Quantity of(double value, String unit) {
         Unit u = Unit.parse(unit);
-        return new Quantity(u.toSi(value), u.dimension(), u.isOffset());
+        if (!Double.isFinite(value)) throw Require.fail("a value in " + unit + " must be a finite number, got " + Require.show(value));
+        double si = u.toSi(value);
+        if (!Double.isFinite(si)) throw Require.fail(Require.show(value) + " " + unit + " is beyond the range of a double in SI units");
+        return new Quantity(si, u.dimension(), u.isOffset());
     }
 
     /** A pure number. */
@@ -64,31 +67,66 @@ public final class Quantity implements Comparable<Quantity> {
     /**
      * Reads what engineers type: {@code 4.7 mH}, {@code 4.7mH}, {@code 1.2 kohm}, {@code 1.2 kΩ},
      * {@code 25 mm}, {@code 0.35 T}, {@code 40 degC}, {@code 100 kHz}, {@code 2.5 A/mm^2}.
+     * Only finite values that a {@code double} holds are accepted: NaN, infinities, numbers that
+     * overflow ({@code 1e999}) and non-zero numbers that underflow to zero ({@code 1e-400}) are
+     * refused with the position of the number.
      */
     public static Quantity parse(String text) {
         if (text == null) throw new IllegalArgumentException("cannot read a quantity from null");
         Matcher m = NUMBER.matcher(text);
         if (!m.find()) {
             int at = firstNonSpace(text);
-            throw new IllegalArgumentException("cannot read \"" + text + "\" as a quantity: a number is expected at position "
+            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: a number is expected at position "
                     + (at + 1) + "; write for example 4.7 mH, 25 mm, 1.2 kΩ, 40 degC");
         }
         String num = m.group(1);
-        double v;
+        int at = m.start(1) + 1;
         String bare = num.replaceFirst("^[+-]", "");
-        double sign = num.startsWith("-") ? -1 : 1;
-        if (bare.equals("NaN")) v = Double.NaN;
-        else if (bare.equals("Infinity") || bare.equals("inf") || bare.equals("∞")) v = sign * Double.POSITIVE_INFINITY;
-        else v = Double.parseDouble(num);
+        if (bare.equals("NaN") || bare.equals("Infinity") || bare.equals("inf") || bare.equals("∞")) {
+            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: " + bare
+                    + " at position " + at + " is not a finite number");
+        }
+        double v = Double.parseDouble(num);
+        if (Double.isInfinite(v)) {
+            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: the number at position " + at
+                    + " is too large (a double holds up to about 1.8e308)");
+        }
+        if (!(Math.abs(v) >= Double.MIN_NORMAL) && hasNonZeroDigit(num)) {
+            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: the number at position " + at
+                    + " is too small to hold (below about 2.2e-308) but is not zero");
+        }
         String rest = text.substring(m.end());
         Unit u;
         try {
             u = Unit.parse(rest.strip());
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("cannot read \"" + text + "\" as a quantity: "
-                    + e.getMessage().replaceFirst("^cannot read unit \"[^\"]*\": ", "in the unit \"" + rest.strip() + "\", "), e);
+        } catch (UnitParser.Failure e) {
+            // the unit text is the rest stripped: its position 0 is the first non-space after the number
+            int unitAt = m.end() + firstNonSpace(rest);
+            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: " + e.reason + " at position "
+                    + (unitAt + e.position + 1) + "; write for example 4.7 mH, 2.5 A/mm^2, 40 degC", e);
         }
-        return new Quantity(u.toSi(v), u.dimension(), u.isOffset());
+        double si = u.toSi(v);
+        if (!Double.isFinite(si) || (si == 0) != (v == 0) || (si != 0 && Math.abs(si) < Double.MIN_NORMAL)) {
+            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: " + num + " " + rest.strip()
+                    + " is beyond the range of a double in SI units");
+        }
+        return new Quantity(si, u.dimension(), u.isOffset());
+    }
+
+    private static boolean hasNonZeroDigit(String num) {
+        int e = num.toLowerCase(Locale.ROOT).indexOf('e');
+        String mant = e < 0 ? num : num.substring(0, e);
+        for (int i = 0; i < mant.length(); i++) {
+            char c = mant.charAt(i);
+            if (c >= '1' && c <= '9') return true;
+        }
+        return false;
+    }
+
+    /** Text for a message, in quotes, cut to 40 characters. */
+    static String quote(String text) {
+        String t = text.length() <= 40 ? text : text.substring(0, 39) + "…";
+        return "\"" + t.replace('\n', ' ') + "\"";
     }
 
     private static int firstNonSpace(String s) {
@@ -152,36 +190,59 @@ public final class Quantity implements Comparable<Quantity> {
             throw new IllegalArgumentException("cannot add two temperatures (" + this + " and " + o
                     + "); subtract them to get a difference, or add a difference in K");
         }
-        return new Quantity(si + o.si, dimension, absolute || o.absolute);
+        return checked(new Quantity(si + o.si, dimension, absolute || o.absolute), o, "+", o);
     }
 
     public Quantity minus(Quantity o) {
         requireSame(o, "subtract", "from");
-        return new Quantity(si - o.si, dimension, absolute && !o.absolute);
+        return checked(new Quantity(si - o.si, dimension, absolute && !o.absolute), o, "−", o);
     }
 
     public Quantity times(Quantity o) {
-        return new Quantity(si * o.si, dimension.times(o.dimension), false);
+        requireOperand(o, "multiply", "by");
+        return checked(new Quantity(si * o.si, dimension.times(o.dimension), false), o, "×", o);
     }
 
     public Quantity times(double k) {
-        return new Quantity(si * k, dimension, false);
+        Require.finite("factor", k);
+        return checked(new Quantity(si * k, dimension, false), k, "×", Require.show(k));
     }
 
     public Quantity div(Quantity o) {
-        return new Quantity(si / o.si, dimension.div(o.dimension), false);
+        requireOperand(o, "divide", "by");
+        if (o.si == 0) throw Require.fail("cannot divide " + this + " by zero (" + o + ")");
+        return checked(new Quantity(si / o.si, dimension.div(o.dimension), false), o, "÷", o);
     }
 
     public Quantity div(double k) {
-        return new Quantity(si / k, dimension, false);
+        Require.finite("divisor", k);
+        if (k == 0) throw Require.fail("cannot divide " + this + " by zero");
+        return checked(new Quantity(si / k, dimension, false), k, "÷", Require.show(k));
     }
 
     public Quantity pow(int n) {
-        return new Quantity(Math.pow(si, n), dimension.pow(n), false);
+        if (si == 0 && n < 0) throw Require.fail("cannot raise zero (" + this + ") to the power " + n);
+        return checked(new Quantity(Math.pow(si, n), dimension.pow(n), false), n, "^", n);
     }
 
     public Quantity sqrt() {
-        return new Quantity(Math.sqrt(si), dimension.root(2), false);
+        if (si < 0) throw Require.fail("cannot take the square root of a negative quantity, " + this);
+        return checked(new Quantity(Math.sqrt(si), dimension.root(2), false), 0.0, "√", "");
+    }
+
+    private void requireOperand(Quantity o, String verb, String prep) {
+        if (o == null) throw Require.fail("cannot " + verb + " " + this + " " + prep + " nothing (null)");
+    }
+
+    /** The result, unless finite operands gave an infinite or NaN value (an overflow). */
+    private Quantity checked(Quantity r, Object other, String op, Object otherText) {
+        if (Double.isFinite(r.si) || !Double.isFinite(si) || !isFinite(other)) return r;
+        throw Require.fail("the result of " + this + " " + op + " " + otherText + " overflows: beyond about 1.8e308 in SI units");
+    }
+
+    private static boolean isFinite(Object o) {
+        if (o instanceof Quantity) return Double.isFinite(((Quantity) o).si);
+        return !(o instanceof Double) || Double.isFinite((Double) o);
     }
 
     public Quantity negate() {
@@ -256,6 +317,12 @@ public final class Quantity implements Comparable<Quantity> {
                 chosen = u;
                 break;
             }
+        }
+        double shown = round(a / chosen.factor(), digits);
+        if (shown < 1e-3 || shown >= 1e6) {
+            // beyond the display units: a power of ten in the base unit, never a zero for a value that is not zero
+            Unit base = baseOf(units);
+            return plain(si / base.factor(), digits) + " " + base.symbol();
         }
         return fixed(si / chosen.factor(), digits) + " " + chosen.symbol();
     }

@@ -25,6 +25,7 @@ public final class Unit {
 
     /** Reads a unit expression; fails with a message that names the text and the position. */
     public static Unit parse(String text) {
+        if (text == null) throw Require.fail("a unit is missing (null); give one such as \"mH\" or \"\" for a pure number");
         Unit u = CACHE.get(text);
         if (u == null) {
             u = new UnitParser(text).parse();

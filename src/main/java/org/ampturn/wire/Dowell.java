@@ -31,7 +31,7 @@ public final class Dowell {
      * (overall diameter for close-wound turns), sinusoidal current of {@code frequency}, at 20 °C.
      */
     public static double factor(Wire wire, Quantity pitch, int layers, Quantity frequency) {
-        double s = Require.positive("turn pitch", pitch, Dimension.LENGTH);
+        double s = Require.length("turn pitch", pitch);
         double f = Require.positive("frequency", frequency, Dimension.FREQUENCY);
         if (s < wire.bareDiameterM()) {
             throw new IllegalArgumentException("turn pitch must be at least the bare diameter " + wire.bareDiameter() + ", got " + pitch);

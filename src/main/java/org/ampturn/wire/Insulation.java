@@ -58,7 +58,7 @@ public final class Insulation {
 
     /** An insulation of a fixed increase in diameter (twice the film thickness), from a datasheet. */
     public static Insulation ofIncrease(Quantity increaseInDiameter) {
-        double inc = Require.nonNegative("increase in diameter", increaseInDiameter, Dimension.LENGTH);
+        double inc = Require.lengthOrZero("increase in diameter", increaseInDiameter);
         return new Insulation("+" + Quantity.of(inc, Dimension.LENGTH) + " film", null, inc);
     }
 
@@ -66,7 +66,7 @@ public final class Insulation {
 
     /** Increase in diameter for a bare diameter. */
     public Quantity increase(Quantity bareDiameter) {
-        return Quantity.of(increaseAt(Require.positive("bare diameter", bareDiameter, Dimension.LENGTH)), Dimension.LENGTH);
+        return Quantity.of(increaseAt(Require.length("bare diameter", bareDiameter)), Dimension.LENGTH);
     }
 
     /** Kernel: increase in diameter (m) for a bare diameter (m). */

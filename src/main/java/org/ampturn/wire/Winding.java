@@ -74,7 +74,7 @@ public final class Winding {
         Objects.requireNonNull(wire, "wire");
         Objects.requireNonNull(bobbin, "bobbin");
         Objects.requireNonNull(packing, "packing");
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         return new Winding(wire, turns, bobbin, packing);
     }
 

@@ -76,7 +76,7 @@ public final class Wire {
 
     /** The (fractional) AWG gauge of a bare diameter, the inverse of {@link #awgDiameterAt}. */
     public static double awgGaugeOf(Quantity bareDiameter) {
-        double d = Require.positive("bare diameter", bareDiameter, Dimension.LENGTH);
+        double d = Require.length("bare diameter", bareDiameter);
         return 36 - 39 * Math.log(d / D36) / Math.log(92);
     }
 
@@ -88,7 +88,7 @@ public final class Wire {
 
     /** A metric wire by its nominal bare diameter, e.g. {@code Wire.metric(mm(0.50))}. */
     public static Wire metric(Quantity bareDiameter) {
-        double d = Require.positive("bare diameter", bareDiameter, Dimension.LENGTH);
+        double d = Require.length("bare diameter", bareDiameter);
         if (d > 0.02) throw new IllegalArgumentException("bare diameter must be at most 20 mm for a round magnet wire, got " + bareDiameter);
         return new Wire(metricName(d), d, Conductor.COPPER, Insulation.HEAVY, Double.NaN);
     }
@@ -114,7 +114,7 @@ public final class Wire {
 
     /** The same wire with an overall diameter from a datasheet (must exceed the bare diameter). */
     public Wire withOverallDiameter(Quantity overall) {
-        double o = Require.positive("overall diameter", overall, Dimension.LENGTH);
+        double o = Require.length("overall diameter", overall);
         if (!(o >= bare)) {
             throw new IllegalArgumentException("overall diameter must be at least the bare diameter " + bareDiameter() + ", got " + overall);
         }
