@@ -136,8 +136,7 @@ public final class Plunger implements Armature {
 
     @Override
     public Plunger atTemperature(Quantity temperature) {
-        double k = Require.si("temperature", temperature, Dimension.TEMPERATURE);
-        if (!(k > 0)) throw new IllegalArgumentException("temperature must be above absolute zero, got " + temperature);
+        double k = org.ampturn.material.Conductor.kelvin("temperature", temperature);
         return copy(residual, parasitic, parasiticArea, ironLength, iron, mass, stiffness, preload, load, damping, r20, k);
     }
 

@@ -32,8 +32,7 @@ final class LumpedCoil implements Coil {
 
     @Override
     public Coil atTemperature(Quantity t) {
-        double k = org.ampturn.units.Require.si("temperature", t, Dimension.TEMPERATURE);
-        if (k <= 0) throw new IllegalArgumentException("temperature must be above absolute zero, got " + t);
+        double k = Conductor.kelvin("temperature", t);
         return new LumpedCoil(l, r20, k);
     }
 

@@ -173,9 +173,7 @@ public final class WoundCoil implements Coil {
     }
 
     private static double kelvin(Quantity t) {
-        double k = Require.si("temperature", t, Dimension.TEMPERATURE);
-        if (!(k > 0)) throw new IllegalArgumentException("temperature must be above absolute zero, got " + t);
-        return k;
+        return org.ampturn.material.Conductor.kelvin("temperature", t);
     }
 
     @Override

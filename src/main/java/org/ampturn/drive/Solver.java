@@ -27,6 +27,9 @@ final class Solver {
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
             O_F = 8, O_DVC = 9, O_ACC = 10, O_N = 11;
 
+    /** Most switching segments (each PWM edge, comparator edge or event starts one) a run may take. */
+    static final long MAX_SEGMENTS = 20_000_000L;
+
     /** A current beyond this (A) on an accepted step is taken as a diverging solution. */
     static final double DIVERGED_AMPS = 1e7;
 
@@ -105,6 +108,8 @@ final class Solver {
         double rTot = rs + ron + rc;
         this.finalCurrent = rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
         validate();
+        // the recorder's arrays and the transient's copies of them
+        org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0)));
         this.rec = new Recorder(n, moves, snub);
     }
 
@@ -593,11 +598,16 @@ final class Solver {
         notes.add(closedForm ? "solved in closed form (linear coil, piecewise-linear circuit)"
                 : "solved with " + ((OdeStepper) stepper).describe());
         int stuck = 0;
+        long segments = 0;
         double lastT = -1;
         int[] fired = new int[1];
         while (t < tEnd) {
             if (Thread.currentThread().isInterrupted()) {
                 throw new CancellationException("transient stopped at t = " + sec(t) + ": the thread was interrupted");
+            }
+            if (++segments > MAX_SEGMENTS) {
+                throw new TransientException("the run needs over " + MAX_SEGMENTS + " switching segments (at t = " + sec(t) + " of " + sec(tEnd)
+                        + "); widen the hysteresis band, lower the PWM frequency or shorten the run");
             }
             double t1 = nextScheduled();
             List<Ev> evs = events();

@@ -103,11 +103,22 @@ public final class Conductor {
     /** Kernel: density (kg/m³). */
     public double densityKgPerM3() { return density; }
 
-    /** A temperature in kelvin from an absolute temperature, checked. */
+    /** Lowest temperature (K) at which the linear law is used: −100 °C. */
+    public static final double LAW_MIN_K = 173.15;
+    /** Highest temperature (K) at which the linear law is used: 400 °C. */
+    public static final double LAW_MAX_K = 673.15;
+
+    /**
+     * A temperature in kelvin at which the linear law is used, checked: from −100 °C to 400 °C. Beyond
+     * these the law is off by more than a few percent (from memory; near −234.5 °C it gives copper no
+     * resistance at all), so a temperature outside them is refused rather than answered wrongly.
+     */
+    public static double kelvin(String name, Quantity t) {
+        return Require.absoluteTemperature(name, t, LAW_MIN_K, LAW_MAX_K, "the linear resistance law");
+    }
+
     static double kelvin(Quantity t) {
-        double k = Require.si("temperature", t, Dimension.TEMPERATURE);
-        if (!(k > 0)) throw new IllegalArgumentException("temperature must be above absolute zero (−273.15 °C), got " + t);
-        return k;
+        return kelvin("temperature", t);
     }
 
     @Override

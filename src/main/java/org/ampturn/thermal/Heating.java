@@ -59,8 +59,7 @@ public final class Heating {
     }
 
     public Heating withAmbient(Quantity temperature) {
-        double t = Require.si("ambient temperature", temperature, Dimension.TEMPERATURE);
-        Require.between("ambient temperature (K)", t, 173.15, 573.15);
+        double t = Require.absoluteTemperature("ambient temperature", temperature, 173.15, 573.15, "the cooling rules");
         return new Heating(r20, conductor, area, t, cooling, extraWatts, allowance, insulation);
     }
 

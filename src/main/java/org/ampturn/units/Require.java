@@ -61,6 +61,20 @@ public final class Require {
         return v;
     }
 
+    /** The SI value of {@code q}, of dimension {@code d}, greater than zero and at most {@code max} (SI). */
+    public static double positive(String name, Quantity q, Dimension d, double max) {
+        double v = positive(name, q, d);
+        if (!(v <= max)) throw fail(name + " must be greater than zero and at most " + show(max, d) + ", got " + q);
+        return v;
+    }
+
+    /** The SI value of {@code q}, of dimension {@code d}, zero or more and at most {@code max} (SI). */
+    public static double nonNegative(String name, Quantity q, Dimension d, double max) {
+        double v = nonNegative(name, q, d);
+        if (!(v <= max)) throw fail(name + " must be from zero to " + show(max, d) + ", got " + q);
+        return v;
+    }
+
     /** A length (m) greater than zero, from {@link #MIN_LENGTH} to {@link #MAX_LENGTH}: a size, a gap, a diameter. */
     public static double length(String name, Quantity q) {
         return inRange(name, q, Dimension.LENGTH, MIN_LENGTH, MAX_LENGTH);
@@ -171,6 +185,28 @@ public final class Require {
         if (Thread.currentThread().isInterrupted()) {
             throw new java.util.concurrent.CancellationException(what + " stopped: the thread was interrupted");
         }
+    }
+
+    /**
+     * Fails before a computation starts when {@code count} items of about {@code bytesEach} bytes would
+     * not fit in the memory the JVM has left (with a margin); the message names the count, so
+     * {@code sweep(..., Integer.MAX_VALUE, ...)} is refused by name instead of ending in an
+     * OutOfMemoryError. {@code what} names the items ("sweep points").
+     */
+    public static void fitsInMemory(String what, long count, double bytesEach) {
+        Runtime rt = Runtime.getRuntime();
+        long free = rt.maxMemory() - (rt.totalMemory() - rt.freeMemory());
+        double need = count * bytesEach;
+        if (need > 0.7 * free) {
+            throw fail(count + " " + what + " need about " + bytes(need) + " of memory, more than the " + bytes(free)
+                    + " free; use fewer, or give the JVM more (-Xmx)");
+        }
+    }
+
+    private static String bytes(double b) {
+        if (b >= 1e9) return Quantity.fixed(b / 1e9, 3) + " GB";
+        if (b >= 1e6) return Quantity.fixed(b / 1e6, 3) + " MB";
+        return Quantity.fixed(b / 1e3, 3) + " kB";
     }
 
     // ---- messages ---------------------------------------------------------------------------

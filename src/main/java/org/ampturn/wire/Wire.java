@@ -184,9 +184,7 @@ public final class Wire {
     }
 
     static double kelvin(Quantity t) {
-        double k = Require.si("temperature", t, Dimension.TEMPERATURE);
-        if (!(k > 0)) throw new IllegalArgumentException("temperature must be above absolute zero (−273.15 °C), got " + t);
-        return k;
+        return Conductor.kelvin("temperature", t);
     }
 
     @Override

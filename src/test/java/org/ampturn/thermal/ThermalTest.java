@@ -129,7 +129,7 @@ class ThermalTest {
         assertTrue(e.getMessage().contains("resistance at 20 °C"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Heating.of(q("5 ohm"), Conductor.COPPER, q("-5 cm^2")));
         assertTrue(e.getMessage().contains("surface area"), e.getMessage());
-        e = assertThrows(IllegalArgumentException.class, () -> Heating.of(q("5 ohm"), Conductor.COPPER, q("5 cm^2")).atVoltage(q("NaN V")));
+        e = assertThrows(IllegalArgumentException.class, () -> Heating.of(q("5 ohm"), Conductor.COPPER, q("5 cm^2")).atVoltage(org.ampturn.units.Quantity.of(Double.NaN, org.ampturn.units.Dimension.VOLTAGE)));
         assertTrue(e.getMessage().contains("voltage"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Cooling.surfaceCoefficient(q("0 W/(m^2*K)")));
         assertTrue(e.getMessage().contains("heat transfer coefficient"), e.getMessage());
