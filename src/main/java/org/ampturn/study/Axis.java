@@ -5,6 +5,7 @@ import java.util.Collections;
 import java.util.List;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
 
 /**
  * One swept parameter: a name and the values it takes, in order. Values are numbers (whole numbers
@@ -58,6 +59,7 @@ public final class Axis<T> {
             copy.add(v);
         }
         checkSameDimension(name, copy);
+        checkSize("points of the sweep of " + name, copy.size(), BYTES_PER_POINT);
         return new Axis<>(name, Collections.unmodifiableList(copy));
     }
 
@@ -89,12 +91,33 @@ public final class Axis<T> {
         if (name == null || name.isBlank()) throw new IllegalArgumentException("a swept parameter needs a name, got \"" + name + "\"");
     }
 
+    /** Most points a sweep or a Monte Carlo run takes. */
+    public static final int MAX_POINTS = 100_000_000;
+    /** Memory a point of a general study takes with its parameters and results (bytes, measured roughly). */
+    static final int BYTES_PER_POINT = 400;
+    /** Memory a point of the fast double path takes (bytes): parameter, result, error slot. */
+    static final int BYTES_PER_DOUBLE_POINT = 32;
+
     static void checkCount(String name, int count, double from, double to) {
+        checkCount(name, count, from, to, BYTES_PER_POINT);
+    }
+
+    /** The count of points is from 1 to {@link #MAX_POINTS} and its tables fit in the memory left. */
+    static void checkCount(String name, int count, double from, double to, int bytesEach) {
         if (count < 1) throw new IllegalArgumentException("count of " + name + " (" + count + ") must be at least 1");
+        checkSize("points of the sweep of " + name, count, bytesEach);
         if (count == 1 && from != to) {
             throw new IllegalArgumentException("count 1 cannot span " + name + " from " + from + " to " + to
                     + "; give a count of 2 or more, or the same value at both ends");
         }
+    }
+
+    /** {@code count} items of a study are at most {@link #MAX_POINTS} and fit in the memory left. */
+    static void checkSize(String what, long count, int bytesEach) {
+        if (count > MAX_POINTS) {
+            throw Require.fail(count + " " + what + " are more than the " + MAX_POINTS + " a study takes; use fewer");
+        }
+        Require.fitsInMemory(what, count, bytesEach);
     }
 
     /** The k-th of {@code count} steps; exact at both ends. */

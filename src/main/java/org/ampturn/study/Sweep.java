@@ -76,6 +76,7 @@ public final class Sweep {
         if (a.name().equals(b.name())) throw new IllegalArgumentException("the two swept parameters have the same name, " + a.name());
         long n = (long) a.size() * b.size();
         if (n > 50_000_000L) throw new IllegalArgumentException("a grid of " + a.size() + " × " + b.size() + " points is too large (over 50 million)");
+        Axis.checkSize("points of the grid of " + a.name() + " × " + b.name(), n, Axis.BYTES_PER_POINT);
         Object[][] params = new Object[(int) n][];
         int k = 0;
         for (A x : a.values()) for (B y : b.values()) params[k++] = new Object[] {x, y};
@@ -102,6 +103,7 @@ public final class Sweep {
         Objects.requireNonNull(f, "function");
         if (xs == null || xs.length == 0) throw new IllegalArgumentException("the list of values for " + name + " is empty");
         if (name.equals(output)) throw new IllegalArgumentException("the parameter and the output have the same name, " + name);
+        Axis.checkSize("points of the sweep of " + name, xs.length, Axis.BYTES_PER_DOUBLE_POINT);
         double[] x = xs.clone();
         return Runner.guarded(() -> doubles(name, xDimension, x, output, outputDimension, f));
     }
@@ -147,7 +149,7 @@ public final class Sweep {
     public static double[] steps(String name, double from, double to, int count, boolean log) {
         Axis.checkName(name);
         Axis.checkEnds(name, from, to, log, String.valueOf(from), String.valueOf(to));
-        Axis.checkCount(name, count, from, to);
+        Axis.checkCount(name, count, from, to, Axis.BYTES_PER_DOUBLE_POINT);
         double[] xs = new double[count];
         for (int k = 0; k < count; k++) xs[k] = Axis.step(from, to, k, count, log);
         return xs;

@@ -149,6 +149,7 @@ public final class Tolerance {
     public MonteCarlo monteCarlo(int runs, long seed) {
         requireParameters();
         if (runs < 2) throw new IllegalArgumentException("runs (" + runs + ") must be at least 2");
+        Axis.checkSize("Monte Carlo runs", runs, Axis.BYTES_PER_POINT + 8 * varied.size());
         return Runner.guarded(() -> runMonteCarlo(runs, seed));
     }
 
