@@ -38,7 +38,7 @@ public final class Electromagnet {
     /** An electromagnet of {@code turns} on {@code ironPath}, closing through {@code gaps} gaps of {@code poleArea} each. */
     public static Electromagnet of(int turns, MagneticCircuit ironPath, Quantity poleArea, int gaps) {
         Require.turns("turns", turns);
-        if (ironPath == null) throw new IllegalArgumentException("iron path is missing (null)");
+        if (ironPath == null) throw Require.fail("iron path is missing (null)");
         double a = Require.positive("pole area", poleArea, Dimension.AREA);
         Require.positive("gaps", gaps);
         return new Electromagnet(turns, ironPath, a, gaps);
@@ -80,8 +80,10 @@ public final class Electromagnet {
 
     /** n·B²A/(2μ0) in N at gap x (m) and current i (A). */
     public double forceAt(double gap, double amps) {
+        Require.finite("gap", gap);
+        Require.finite("current (A)", amps);
         double b = fluxAt(gap, amps) / area;
-        return gaps * Force.maxwellAt(b, area);
+        return Require.result("force", gaps * Force.maxwellAt(b, area));
     }
 
     /**
@@ -91,13 +93,15 @@ public final class Electromagnet {
      * 8-point Gauss-Legendre on 48 panels in i.
      */
     public double forceByCoenergyAt(double gap, double amps) {
+        Require.finite("gap", gap);
+        Require.finite("current (A)", amps);
         if (iron.isLinear()) {
             double h = 1e-3 * gap;
             double d = (-coenergyAt(gap + 2 * h, amps) + 8 * coenergyAt(gap + h, amps) - 8 * coenergyAt(gap - h, amps)
                     + coenergyAt(gap - 2 * h, amps)) / (12 * h);
-            return -d;
+            return Require.result("force by coenergy", -d);
         }
-        if (amps == 0) return 0;
+        if (amps == 0) return Require.result("force by coenergy", 0);
         double h = 1e-3 * gap;
         MagneticCircuit p2 = circuitAt(gap + 2 * h), p1 = circuitAt(gap + h), m1 = circuitAt(gap - h), m2 = circuitAt(gap - 2 * h);
         // composite 8-point Gauss-Legendre on 48 equal panels: a B-H table's kinks cost little accuracy
@@ -110,7 +114,7 @@ public final class Electromagnet {
             }
         }
         d *= 0.5 * w * turns / (12 * h);
-        return -d;
+        return Require.result("force by coenergy", -d);
     }
 
     /**

@@ -100,7 +100,7 @@ public final class Plunger implements Armature {
     /** Iron path of the given mean length and material, with the pole's cross-section. */
     public Plunger withIron(Quantity pathLength, MagneticMaterial material) {
         double l = Require.length("iron path length", pathLength);
-        if (material == null) throw new IllegalArgumentException("iron material is missing (null)");
+        if (material == null) throw Require.fail("iron material is missing (null)");
         return copy(residual, parasitic, parasiticArea, l, material, mass, stiffness, preload, load, damping, r20, kelvin);
     }
 
@@ -153,8 +153,10 @@ public final class Plunger implements Armature {
 
     @Override
     public double currentAt(double weberTurns, double metres) {
+        Require.finite("flux linkage (Wb)", weberTurns);
+        Require.finite("metres", metres);
         double phi = weberTurns / turns;
-        return (phi * gapReluctance(metres) + ironLength * ironField(phi / area)) / turns;
+        return Require.result("current", (phi * gapReluctance(metres) + ironLength * ironField(phi / area)) / turns);
     }
 
     private static final double[] GX = {0, -0.5384693101056831, 0.5384693101056831, -0.9061798459386640, 0.9061798459386640};
@@ -162,6 +164,8 @@ public final class Plunger implements Armature {
 
     @Override
     public double fieldEnergyAt(double weberTurns, double metres) {
+        Require.finite("flux linkage (Wb)", weberTurns);
+        Require.finite("metres", metres);
         double phi = weberTurns / turns;
         double w = 0.5 * phi * phi * gapReluctance(metres);
         if (iron != null) {
@@ -180,19 +184,23 @@ public final class Plunger implements Armature {
             }
             w += area * ironLength * ironEnergyDensity;
         }
-        return w;
+        return Require.result("field energy", w);
     }
 
     @Override
     public double forceAt(double weberTurns, double metres) {
-        if (stroke + residual - metres <= 0) return 0;
+        Require.finite("flux linkage (Wb)", weberTurns);
+        Require.finite("metres", metres);
+        if (stroke + residual - metres <= 0) return Require.result("force", 0);
         double b = weberTurns / turns / area;
-        return b * b * area / (2 * MU0);
+        return Require.result("force", b * b * area / (2 * MU0));
     }
 
     @Override
     public double restoringForceAt(double metres, double metresPerSecond) {
-        return preload + stiffness * metres + load + damping * metresPerSecond;
+        Require.finite("metres", metres);
+        Require.finite("metres per second", metresPerSecond);
+        return Require.result("restoring force", preload + stiffness * metres + load + damping * metresPerSecond);
     }
 
     @Override public double massKg() { return mass; }
@@ -205,9 +213,10 @@ public final class Plunger implements Armature {
 
     @Override
     public double inductanceAt(double metres) {
+        Require.finite("metres", metres);
         double rel = gapReluctance(metres);
         if (iron != null) rel += ironLength / (MU0 * iron.relativePermeability() * area);
-        return (double) turns * turns / rel;
+        return Require.result("inductance", (double) turns * turns / rel);
     }
 
     /** Small-signal inductance open (x = 0). */

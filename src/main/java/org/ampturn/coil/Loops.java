@@ -22,14 +22,17 @@ public final class Loops {
         double b = Require.length("radius 2", radius2);
         double z = Require.distance("axial distance", axialDistance);
         if (a == b && z == 0) {
-            throw new IllegalArgumentException("radius1 = radius2 and axial distance 0: the loops coincide and M is infinite; use selfInductance for one loop");
+            throw Require.fail("radius1 = radius2 and axial distance 0: the loops coincide and M is infinite; use selfInductance for one loop");
         }
         return Quantity.of(mutualAt(a, b, z), Dimension.INDUCTANCE);
     }
 
     /** Kernel: Maxwell's mutual inductance (H) of coaxial filaments, radii and distance in m. */
     public static double mutualAt(double radius1, double radius2, double axialDistance) {
-        return Elliptic.maxwell(radius1, radius2, axialDistance);
+        Require.finite("radius1", radius1);
+        Require.finite("radius2", radius2);
+        Require.finite("axial distance", axialDistance);
+        return Require.result("mutual", Elliptic.maxwell(radius1, radius2, axialDistance));
     }
 
     /**
@@ -39,14 +42,14 @@ public final class Loops {
     public static Quantity selfInductance(Quantity loopRadius, Quantity wireRadius) {
         double a = Require.length("loop radius", loopRadius);
         double r = Require.length("wire radius", wireRadius);
-        if (!(r < a)) throw new IllegalArgumentException("wire radius (" + wireRadius + ") must be less than the loop radius " + loopRadius);
+        if (!(r < a)) throw Require.fail("wire radius (" + wireRadius + ") must be less than the loop radius " + loopRadius);
         return Quantity.of(Filaments.loopSelf(a, r), Dimension.INDUCTANCE);
     }
 
     /** Mutual inductance of two coaxial air coils whose centres are {@code axialDistance} apart. */
     public static Quantity mutualInductance(AirCoil a, AirCoil b, Quantity axialDistance) {
         double z = Require.distance("axial distance", axialDistance);
-        if (a == null || b == null) throw new IllegalArgumentException("both coils are needed, got " + a + " and " + b);
+        if (a == null || b == null) throw Require.fail("both coils are needed, got " + a + " and " + b);
         return Quantity.of(Filaments.of(a).mutual(Filaments.of(b), z), Dimension.INDUCTANCE);
     }
 

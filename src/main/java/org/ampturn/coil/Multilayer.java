@@ -54,9 +54,9 @@ public final class Multilayer implements AirCoil {
      * self-inductance, and for Wheeler's formula the winding's mean diameter, length and build.
      */
     public static Multilayer of(Winding winding) {
-        if (winding == null) throw new IllegalArgumentException("winding is missing (null)");
+        if (winding == null) throw Require.fail("winding is missing (null)");
         if (!winding.bobbin().isRound()) {
-            throw new IllegalArgumentException("the winding's bobbin is rectangular (" + winding.bobbin()
+            throw Require.fail("the winding's bobbin is rectangular (" + winding.bobbin()
                     + "); an air coil of coaxial circles needs a round bobbin");
         }
         double id = winding.bobbin().innerDiameter().si();
@@ -80,7 +80,7 @@ public final class Multilayer implements AirCoil {
         double od = Require.length("outer diameter", outerDiameter);
         double b = Require.length("length", length);
         if (!(od > id)) {
-            throw new IllegalArgumentException("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter + ")");
+            throw Require.fail("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter + ")");
         }
         double pitch = Math.min(b / turnsPerLayer, (od - id) / 2 / layers);
         return new Multilayer(turnsPerLayer, layers, id, od, b, pitch);
@@ -95,7 +95,7 @@ public final class Multilayer implements AirCoil {
         double c = Require.length("side of the winding section", side);
         int n = (int) Math.round(Math.sqrt(turns));
         if (n * n != turns) {
-            throw new IllegalArgumentException("turns (" + turns + ") must be a perfect square for an n × n Brooks winding, e.g. "
+            throw Require.fail("turns (" + turns + ") must be a perfect square for an n × n Brooks winding, e.g. "
                     + (n * n) + " or " + ((n + 1) * (n + 1)));
         }
         return new Multilayer(n, n, 2 * c, 4 * c, c, c / n);
@@ -107,7 +107,7 @@ public final class Multilayer implements AirCoil {
         double w = Require.length("wire diameter", wireDiameter);
         double pitch = Math.min(length / perLayer, (outer - inner) / 2 / layers);
         if (w > pitch * (1 + 1e-9)) {
-            throw new IllegalArgumentException("wire diameter (" + wireDiameter + ") must be at most the smaller pitch "
+            throw Require.fail("wire diameter (" + wireDiameter + ") must be at most the smaller pitch "
                     + Quantity.of(pitch, Dimension.LENGTH) + ", or the turns overlap");
         }
         return new Multilayer(perLayer, layers, inner, outer, length, w);
@@ -189,16 +189,22 @@ public final class Multilayer implements AirCoil {
 
     /** Wheeler 1928 multilayer (H): L[μH] = 0.8 a²N²/(6a + 9b + 10c), inches; arguments in m. */
     public static double wheeler1928At(double turns, double length, double meanRadius, double build) {
+        Require.finite("turns", turns);
+        Require.finite("length", length);
+        Require.finite("mean radius", meanRadius);
+        Require.finite("build", build);
         Solenoid.checkKernel(turns, length, meanRadius);
         Require.between("build", build, Dimension.LENGTH, 0, Require.MAX_LENGTH);
         double a = meanRadius;
-        return 0.8e-6 * a * a * turns * turns / (Solenoid.INCH * (6 * a + 9 * length + 10 * build));
+        return Require.result("wheeler1928at", 0.8e-6 * a * a * turns * turns / (Solenoid.INCH * (6 * a + 9 * length + 10 * build)));
     }
 
     /** Brooks (H): 1.6994e-6·a·N², a the mean radius in m. */
     public static double brooksAt(double turns, double meanRadius) {
+        Require.finite("turns", turns);
+        Require.finite("mean radius", meanRadius);
         Solenoid.checkKernel(turns, meanRadius, meanRadius);
-        return 1.6994e-6 * meanRadius * turns * turns;
+        return Require.result("brooks", 1.6994e-6 * meanRadius * turns * turns);
     }
 
     @Override

@@ -45,10 +45,10 @@ public final class Toroid {
         double od = Require.length("outer diameter", outerDiameter);
         double hh = Require.length("height", height);
         if (!(id < od)) {
-            throw new IllegalArgumentException("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter
+            throw Require.fail("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter
                     + "); valid range: 0 < inner < " + outerDiameter);
         }
-        if (material == null) throw new IllegalArgumentException("material is missing (null)");
+        if (material == null) throw Require.fail("material is missing (null)");
         return new Toroid(turns, false, id / 2, od / 2, hh, material);
     }
 
@@ -64,10 +64,10 @@ public final class Toroid {
         double d = Require.length("mean diameter", meanDiameter);
         double s = Require.length("section diameter", sectionDiameter);
         if (!(s < d)) {
-            throw new IllegalArgumentException("section diameter (" + sectionDiameter + ") must be less than the mean diameter (" + meanDiameter
+            throw Require.fail("section diameter (" + sectionDiameter + ") must be less than the mean diameter (" + meanDiameter
                     + "); valid range: 0 < section < " + meanDiameter);
         }
-        if (material == null) throw new IllegalArgumentException("material is missing (null)");
+        if (material == null) throw Require.fail("material is missing (null)");
         return new Toroid(turns, true, d / 2, s / 2, 0, material);
     }
 
@@ -96,6 +96,7 @@ public final class Toroid {
 
     /** Flux linkage (Wb) at current i (A), by quadrature over the section. */
     public double fluxLinkageAt(double amps) {
+        Require.finite("current (A)", amps);
         double sum = 0;
         if (circular) {
             // r = R + a·sin θ over θ in (-π/2, π/2): the width 2a·cos θ and dr = a·cos θ dθ make the integrand smooth
@@ -104,14 +105,14 @@ public final class Toroid {
                 double r = r1 + r2 * Math.sin(th);
                 sum += GL_W[k] * 2 * r2 * r2 * c * c * material.fluxDensityAt(turns * amps / (2 * Math.PI * r));
             }
-            return turns * 0.5 * Math.PI * sum;
+            return Require.result("flux linkage", turns * 0.5 * Math.PI * sum);
         }
         double half = 0.5 * (r2 - r1), mid = 0.5 * (r1 + r2);
         for (int k = 0; k < GL_X.length; k++) {
             double r = mid + half * GL_X[k];
             sum += GL_W[k] * h * material.fluxDensityAt(turns * amps / (2 * Math.PI * r));
         }
-        return turns * half * sum;
+        return Require.result("flux linkage", turns * half * sum);
     }
 
     /** The flux density at the inner edge of the core, the highest in the section. */

@@ -56,7 +56,7 @@ public final class Circuit {
 
     /** The clamp that carries the current whenever the switch is open. */
     public Circuit clamp(Clamp c) {
-        if (c == null) throw new IllegalArgumentException("clamp is missing (null); use Clamp.none(V(..)) for none");
+        if (c == null) throw Require.fail("clamp is missing (null); use Clamp.none(V(..)) for none");
         return new Circuit(drive, coil, armature, c, offAt, samples, relTol, numeric);
     }
 
@@ -64,7 +64,7 @@ public final class Circuit {
     public Circuit at(Quantity temperature) {
         Require.absoluteTemperature("coil temperature", temperature);
         if (!temperature.isAbsoluteTemperature()) {
-            throw new IllegalArgumentException("coil temperature must be an absolute temperature such as degC(80), got " + temperature);
+            throw Require.fail("coil temperature must be an absolute temperature such as degC(80), got " + temperature);
         }
         return coil != null
                 ? new Circuit(drive, coil.atTemperature(temperature), null, clamp, offAt, samples, relTol, numeric)

@@ -89,7 +89,7 @@ public final class Drive {
         double v = Require.inRange("supply voltage", positive(supply), Dimension.VOLTAGE, 1e-6, MAX_VOLTS);
         double ip = Require.inRange("pull-in current", pullIn, Dimension.CURRENT, 1e-9, MAX_AMPS);
         double ih = Require.inRange("hold current", hold, Dimension.CURRENT, 1e-9, MAX_AMPS);
-        if (!(ih < ip)) throw new IllegalArgumentException("hold current (" + hold + ") must be below the pull-in current (" + pullIn + ")");
+        if (!(ih < ip)) throw Require.fail("hold current (" + hold + ") must be below the pull-in current (" + pullIn + ")");
         return new Drive(Scheme.PEAK_AND_HOLD, v, 0, 0, 0, 1, ip, ih, 0.2 * ih, Regulation.HYSTERETIC, Double.NaN);
     }
 
@@ -114,7 +114,7 @@ public final class Drive {
                     + " (1/10000 of the hold current): narrower, the switching would never end");
         }
         if (!(b < 2 * holdAmps)) {
-            throw new IllegalArgumentException("hysteresis band (" + band + ") must be below twice the hold current ("
+            throw Require.fail("hysteresis band (" + band + ") must be below twice the hold current ("
                     + Quantity.of(2 * holdAmps, Dimension.CURRENT) + ")");
         }
         return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, b, Regulation.HYSTERETIC, peakSeconds);
@@ -155,13 +155,13 @@ public final class Drive {
 
     /** This drive connected to a coil; the switch closes at t = 0. */
     public Circuit into(Coil coil) {
-        if (coil == null) throw new IllegalArgumentException("coil is missing (null)");
+        if (coil == null) throw Require.fail("coil is missing (null)");
         return Circuit.of(this, coil);
     }
 
     /** This drive connected to a moving-armature actuator; the switch closes at t = 0. */
     public Circuit into(Armature actuator) {
-        if (actuator == null) throw new IllegalArgumentException("actuator is missing (null)");
+        if (actuator == null) throw Require.fail("actuator is missing (null)");
         return Circuit.of(this, actuator);
     }
 

@@ -54,7 +54,7 @@ public final class Conductor {
      * @param density mass density (kg/m³)
      */
     public static Conductor of(String name, Quantity resistivity20, Quantity alpha20, Quantity density) {
-        Objects.requireNonNull(name, "name");
+        Require.present("name", name);
         double r = Require.positive("resistivity at 20 °C", resistivity20, Dimension.RESISTIVITY);
         double a = Require.nonNegative("temperature coefficient at 20 °C", alpha20, Dimension.PER_KELVIN);
         double d = Require.positive("density", density, Dimension.DENSITY);
@@ -78,12 +78,16 @@ public final class Conductor {
 
     /** Kernel: resistivity (Ω·m) at a temperature (K). */
     public double resistivityAt(double kelvin) {
-        return rho20 * (1 + alpha20 * (kelvin - T20));
+        Require.finite("temperature (K)", kelvin);
+        Require.between("temperature", kelvin, Dimension.TEMPERATURE, 1e-3, Require.MAX_KELVIN);
+        return Require.result("resistivity", rho20 * (1 + alpha20 * (kelvin - T20)));
     }
 
     /** Kernel: R(T)/R(20 °C) = 1 + α20·(T − 20 °C) for a temperature in kelvin. */
     public double resistanceRatioAt(double kelvin) {
-        return 1 + alpha20 * (kelvin - T20);
+        Require.finite("temperature (K)", kelvin);
+        Require.between("temperature", kelvin, Dimension.TEMPERATURE, 1e-3, Require.MAX_KELVIN);
+        return Require.result("resistance ratio", 1 + alpha20 * (kelvin - T20));
     }
 
     /**
@@ -91,7 +95,9 @@ public final class Conductor {
      * the "resistance method" of temperature measurement (IEC 60034-1 uses the same linear law).
      */
     public double temperatureAtResistanceRatio(double ratio) {
-        return T20 + (ratio - 1) / alpha20;
+        Require.finite("ratio", ratio);
+        Require.between("resistance ratio", ratio, 0, 1e6);
+        return Require.result("temperature at resistance ratio", T20 + (ratio - 1) / alpha20);
     }
 
     /** Kernel: resistivity at 20 °C (Ω·m). */

@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
@@ -99,7 +100,7 @@ final class Runner {
     }
 
     static Progress install(Progress p) {
-        Objects.requireNonNull(p, "progress listener");
+        Require.present("progress listener", p);
         Progress old = installed;
         installed = p;
         return old;
@@ -111,7 +112,7 @@ final class Runner {
 
     static int checkThreads(int threads) {
         if (threads < 1 || threads > 1024) {
-            throw new IllegalArgumentException("threads must be between 1 and 1024, got " + threads);
+            throw Require.fail("threads must be between 1 and 1024, got " + threads);
         }
         return threads;
     }

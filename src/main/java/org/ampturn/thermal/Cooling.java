@@ -49,7 +49,11 @@ public interface Cooling {
     static Cooling surfaceCoefficient(Quantity h) {
         double v = Require.positive("heat transfer coefficient", h, Dimension.HEAT_TRANSFER_COEFFICIENT);
         return new Cooling() {
-            @Override public double riseAt(double watts, double squareMetres) { return watts / (v * squareMetres); }
+            @Override public double riseAt(double watts, double squareMetres) {
+                Require.finite("power (W)", watts);
+                Require.finite("area (m²)", squareMetres);
+                return Require.result("rise", Require.nonNegative("power (W)", watts) / (v * Require.positive("surface area (m²)", squareMetres)));
+            }
             @Override public String describe() { return "surface coefficient h = " + h; }
             @Override public String toString() { return describe(); }
         };

@@ -1,5 +1,7 @@
 package org.ampturn.thermal;
 
+import org.ampturn.units.Require;
+
 /** ΔT = c · (P/A)^n with P/A in W/m² (the rules of {@link Cooling} converted to SI). */
 final class PowerLawCooling implements Cooling {
     // 450 ψ^0.826, ψ in W/cm² = 1e-4 · (W/m²)
@@ -21,7 +23,11 @@ final class PowerLawCooling implements Cooling {
 
     @Override
     public double riseAt(double watts, double squareMetres) {
-        return c * Math.pow(watts / squareMetres, n);
+        Require.finite("power (W)", watts);
+        Require.finite("area (m²)", squareMetres);
+        Require.nonNegative("power (W)", watts);
+        Require.positive("surface area (m²)", squareMetres);
+        return Require.result("rise", c * Math.pow(watts / squareMetres, n));
     }
 
     @Override public String describe() { return text; }

@@ -70,6 +70,7 @@ public final class Dimension {
     public static final Dimension HEAT_CAPACITY = of(2, 1, -2, 0, -1);
 
     public int exponent(int baseIndex) {
+        Require.between("base unit index (0 m, 1 kg, 2 s, 3 A, 4 K)", baseIndex, 0, 4);
         return exp[baseIndex];
     }
 

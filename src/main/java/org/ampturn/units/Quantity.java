@@ -26,13 +26,17 @@ public final class Quantity implements Comparable<Quantity> {
     private final boolean absolute;
 
     private Quantity(double si, Dimension dimension, boolean absolute) {
-        if (dimension == null) throw new IllegalArgumentException("a quantity needs a dimension");
+        if (dimension == null) throw Require.fail("a quantity needs a dimension");
         this.si = si;
         this.dimension = dimension;
         this.absolute = absolute && dimension.equals(Dimension.TEMPERATURE);
     }
 
-    /** A quantity from its SI value. */
+    /**
+     * A quantity from its SI value. This is the kernels' wrapper and checks nothing: NaN stands for a
+     * figure that does not apply (a drop-out time of a coil without an armature). What a user types
+     * ({@link #of(double, String)}, {@link #parse}) and the arithmetic never give NaN or an infinity.
+     */
     public static Quantity of(double si, Dimension dimension) {
         return new Quantity(si, dimension, false);
     }
@@ -56,8 +60,11 @@ public final class Quantity implements Comparable<Quantity> {
         return new Quantity(kelvin, Dimension.TEMPERATURE, true);
     }
 
-    /** An absolute temperature from degrees Celsius. */
+    /** An absolute temperature from degrees Celsius; at or above absolute zero and finite. */
     public static Quantity celsius(double degC) {
+        if (!(degC >= -Units.ZERO_CELSIUS) || Double.isInfinite(degC)) {
+            throw Require.fail("a temperature in °C must be a finite number from -273.15 up, got " + Require.show(degC));
+        }
         return new Quantity(degC + Units.ZERO_CELSIUS, Dimension.TEMPERATURE, true);
     }
 
@@ -72,27 +79,27 @@ public final class Quantity implements Comparable<Quantity> {
      * refused with the position of the number.
      */
     public static Quantity parse(String text) {
-        if (text == null) throw new IllegalArgumentException("cannot read a quantity from null");
+        if (text == null) throw Require.fail("cannot read a quantity from null");
         Matcher m = NUMBER.matcher(text);
         if (!m.find()) {
             int at = firstNonSpace(text);
-            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: a number is expected at position "
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: a number is expected at position "
                     + (at + 1) + "; write for example 4.7 mH, 25 mm, 1.2 kΩ, 40 degC");
         }
         String num = m.group(1);
         int at = m.start(1) + 1;
         String bare = num.replaceFirst("^[+-]", "");
         if (bare.equals("NaN") || bare.equals("Infinity") || bare.equals("inf") || bare.equals("∞")) {
-            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: " + bare
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: " + bare
                     + " at position " + at + " is not a finite number");
         }
         double v = Double.parseDouble(num);
         if (Double.isInfinite(v)) {
-            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: the number at position " + at
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: the number at position " + at
                     + " is too large (a double holds up to about 1.8e308)");
         }
         if (!(Math.abs(v) >= Double.MIN_NORMAL) && hasNonZeroDigit(num)) {
-            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: the number at position " + at
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: the number at position " + at
                     + " is too small to hold (below about 2.2e-308) but is not zero");
         }
         String rest = text.substring(m.end());
@@ -102,12 +109,12 @@ public final class Quantity implements Comparable<Quantity> {
         } catch (UnitParser.Failure e) {
             // the unit text is the rest stripped: its position 0 is the first non-space after the number
             int unitAt = m.end() + firstNonSpace(rest);
-            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: " + e.reason + " at position "
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: " + e.reason + " at position "
                     + (unitAt + e.position + 1) + "; write for example 4.7 mH, 2.5 A/mm^2, 40 degC", e);
         }
         double si = u.toSi(v);
-        if (!Double.isFinite(si) || (si == 0) != (v == 0) || (si != 0 && Math.abs(si) < Double.MIN_NORMAL)) {
-            throw new IllegalArgumentException("cannot read " + quote(text) + " as a quantity: " + num + " " + rest.strip()
+        if (!Double.isFinite(si) || v != 0 && !(Math.abs(si) >= Double.MIN_NORMAL)) {
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: " + num + " " + rest.strip()
                     + " is beyond the range of a double in SI units");
         }
         return new Quantity(si, u.dimension(), u.isOffset());
@@ -125,8 +132,14 @@ public final class Quantity implements Comparable<Quantity> {
 
     /** Text for a message, in quotes, cut to 40 characters. */
     static String quote(String text) {
+        if (text == null) return "null";
         String t = text.length() <= 40 ? text : text.substring(0, 39) + "…";
-        return "\"" + t.replace('\n', ' ') + "\"";
+        StringBuilder sb = new StringBuilder("\"");
+        for (int i = 0; i < t.length(); i++) {
+            char c = t.charAt(i);
+            sb.append(Character.isISOControl(c) ? '⏎' : c);
+        }
+        return sb.append('"').toString();
     }
 
     private static int firstNonSpace(String s) {
@@ -143,7 +156,7 @@ public final class Quantity implements Comparable<Quantity> {
     /** Sets the significant digits used by {@link #toString()} (1 to 15). */
     public static void setDisplayDigits(int digits) {
         if (digits < 1 || digits > 15) {
-            throw new IllegalArgumentException("digits must be between 1 and 15, got " + digits);
+            throw Require.fail("digits must be between 1 and 15, got " + digits);
         }
         displayDigits = digits;
     }
@@ -166,7 +179,7 @@ public final class Quantity implements Comparable<Quantity> {
     public double in(String unit) {
         Unit u = Unit.parse(unit);
         if (!u.dimension().equals(dimension)) {
-            throw new IllegalArgumentException("cannot express " + this + " (" + dimension.name() + ") in " + unit
+            throw Require.fail("cannot express " + this + " (" + dimension.name() + ") in " + unit
                     + " (" + u.dimension().name() + ")");
         }
         return u.fromSi(si);
@@ -174,8 +187,9 @@ public final class Quantity implements Comparable<Quantity> {
 
     /** Fails unless this quantity has the given dimension; returns the SI value. */
     public double si(Dimension expected) {
+        Require.present("expected dimension", expected);
         if (!dimension.equals(expected)) {
-            throw new IllegalArgumentException("expected a " + expected.name() + ", got " + this + " (" + dimension.name() + ")");
+            throw Require.fail("expected a " + expected.name() + ", got " + this + " (" + dimension.name() + ")");
         }
         return si;
     }
@@ -187,7 +201,7 @@ public final class Quantity implements Comparable<Quantity> {
     public Quantity plus(Quantity o) {
         requireSame(o, "add", "to");
         if (absolute && o.absolute) {
-            throw new IllegalArgumentException("cannot add two temperatures (" + this + " and " + o
+            throw Require.fail("cannot add two temperatures (" + this + " and " + o
                     + "); subtract them to get a difference, or add a difference in K");
         }
         return checked(new Quantity(si + o.si, dimension, absolute || o.absolute), o, "+", o);
@@ -236,13 +250,11 @@ public final class Quantity implements Comparable<Quantity> {
 
     /** The result, unless finite operands gave an infinite or NaN value (an overflow). */
     private Quantity checked(Quantity r, Object other, String op, Object otherText) {
-        if (Double.isFinite(r.si) || !Double.isFinite(si) || !isFinite(other)) return r;
+        if (Double.isFinite(r.si)) return r;
+        if (!Double.isFinite(si) || other instanceof Quantity && !Double.isFinite(((Quantity) other).si)) {
+            throw Require.fail("cannot compute " + this + " " + op + " " + otherText + ": an operand is not a finite number");
+        }
         throw Require.fail("the result of " + this + " " + op + " " + otherText + " overflows: beyond about 1.8e308 in SI units");
-    }
-
-    private static boolean isFinite(Object o) {
-        if (o instanceof Quantity) return Double.isFinite(((Quantity) o).si);
-        return !(o instanceof Double) || Double.isFinite((Double) o);
     }
 
     public Quantity negate() {
@@ -265,7 +277,7 @@ public final class Quantity implements Comparable<Quantity> {
 
     /** True when both have the same dimension and differ by at most {@code relTol} of the larger magnitude. */
     public boolean isCloseTo(Quantity o, double relTol) {
-        if (!dimension.equals(o.dimension)) return false;
+        if (o == null || !dimension.equals(o.dimension)) return false;
         if (si == o.si) return true;
         return Math.abs(si - o.si) <= relTol * Math.max(Math.abs(si), Math.abs(o.si));
     }
@@ -277,9 +289,9 @@ public final class Quantity implements Comparable<Quantity> {
     }
 
     private void requireSame(Quantity o, String verb, String prep) {
-        if (o == null) throw new IllegalArgumentException("cannot " + verb + " nothing (null) " + prep + " " + this);
+        if (o == null) throw Require.fail("cannot " + verb + " nothing (null) " + prep + " " + this);
         if (!dimension.equals(o.dimension)) {
-            throw new IllegalArgumentException("cannot " + verb + " " + o + " " + prep + " " + this
+            throw Require.fail("cannot " + verb + " " + o + " " + prep + " " + this
                     + " (" + o.dimension.name() + " and " + dimension.name() + ")");
         }
     }
@@ -292,7 +304,7 @@ public final class Quantity implements Comparable<Quantity> {
 
     /** Engineering notation with the given number of significant digits. */
     public String format(int digits) {
-        if (digits < 1 || digits > 17) throw new IllegalArgumentException("digits must be between 1 and 17, got " + digits);
+        if (digits < 1 || digits > 17) throw Require.fail("digits must be between 1 and 17, got " + digits);
         if (absolute) {
             return plain(si - Units.ZERO_CELSIUS, digits) + " °C";
         }

@@ -20,7 +20,7 @@ public final class Require {
     /** Longest length any model accepts (m): 10 km. */
     public static final double MAX_LENGTH = 1e4;
     /** Highest absolute temperature any model accepts (K). */
-    public static final double MAX_KELVIN = 5000;
+    public static final double MAX_KELVIN = 10_000;
     /** Most turns any coil model accepts. */
     public static final int MAX_TURNS = 10_000_000;
     /** Longest message headline before any detail (characters), as the console shows it. */
@@ -30,6 +30,7 @@ public final class Require {
 
     /** The SI value of {@code q}; fails unless it has dimension {@code d} and is finite. */
     public static double si(String name, Quantity q, Dimension d) {
+        if (d == null) throw fail("the kind of quantity expected for " + name + " is missing (null)");
         if (q == null) throw fail(name + " is missing (null); give a " + d.name());
         if (!q.dimension().equals(d)) {
             throw fail(name + " must be a " + d.name() + ", got " + q + " (" + q.dimension().name() + ")");
@@ -174,6 +175,17 @@ public final class Require {
         return value;
     }
 
+    /**
+     * A kernel's result, unless it is NaN or infinite: then the arguments were outside the range in
+     * which the model gives a number, and the failure says so rather than passing NaN on.
+     */
+    public static double result(String what, double v) {
+        if (!Double.isFinite(v)) {
+            throw fail(what + " has no finite value here (" + show(v) + "): an argument is outside the model's range");
+        }
+        return v;
+    }
+
     // ---- long computations ------------------------------------------------------------------
 
     /**
@@ -211,6 +223,36 @@ public final class Require {
 
     // ---- messages ---------------------------------------------------------------------------
 
+    /** Longest name of a parameter, output or column (characters). */
+    public static final int MAX_NAME = 60;
+
+    /** A name for a parameter, an output or a column: not blank, at most {@link #MAX_NAME} characters, on one line. */
+    public static String name(String role, String name) {
+        if (name == null || name.isBlank()) throw fail(role + " needs a name, got " + (name == null ? "null" : quote(name)));
+        if (name.length() > MAX_NAME || name.chars().anyMatch(Character::isISOControl)) {
+            throw fail(role + " must be named in at most " + MAX_NAME + " characters on one line, got " + quote(name));
+        }
+        return name;
+    }
+
+    /** Text a user gave, for a message: in quotes, on one line, cut to 40 characters. */
+    public static String quote(String text) {
+        return Quantity.quote(text);
+    }
+
+    /** Names for a message: the first eight, then how many in all. */
+    public static String names(java.util.Collection<?> names) {
+        if (names == null) return "[]";
+        if (names.size() <= 8) return names.toString();
+        StringBuilder sb = new StringBuilder("[");
+        int k = 0;
+        for (Object n : names) {
+            if (k++ == 8) break;
+            sb.append(n).append(", ");
+        }
+        return sb.append("… (").append(names.size()).append(" in all)]").toString();
+    }
+
     /** A value for a message: engineering notation with its unit, never a zero for a value that is not zero. */
     public static String show(double si, Dimension d) {
         return Quantity.of(si, d).toString();
@@ -228,6 +270,11 @@ public final class Require {
      */
     public static IllegalArgumentException fail(String message) {
         return new IllegalArgumentException(oneLine(message));
+    }
+
+    /** As {@link #fail(String)}, with the failure that led to it. */
+    public static IllegalArgumentException fail(String message, Throwable cause) {
+        return new IllegalArgumentException(oneLine(message), cause);
     }
 
     /** {@code message} on one line, each part cut to {@link #HEADLINE} characters. */

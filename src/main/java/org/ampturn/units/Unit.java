@@ -53,11 +53,13 @@ public final class Unit {
     }
 
     public double toSi(double value) {
-        return value * factor + offset;
+        Require.finite("value", value);
+        return Require.result("to si", value * factor + offset);
     }
 
     public double fromSi(double si) {
-        return (si - offset) / factor;
+        Require.finite("SI value", si);
+        return Require.result("from si", (si - offset) / factor);
     }
 
     @Override

@@ -105,7 +105,7 @@ final class UnitParser {
             Unit u = Units.simple(sym);
             if (u == null) {
                 pos = start;
-                throw error("unknown unit \"" + sym + "\"");
+                throw error("unknown unit " + Quantity.quote(sym));
             }
             f[0] *= u.factor();
             d = u.dimension();

@@ -97,8 +97,9 @@ public final class Bobbin {
 
     /** Kernel: length (m) of one turn whose centre is at height r (m) above the tube. */
     public double turnLengthAt(double heightAboveTube) {
-        if (isRound()) return Math.PI * (innerDiameter + 2 * heightAboveTube);
-        return 2 * (sideA + sideB) + 2 * Math.PI * heightAboveTube;
+        Require.finite("height above tube", heightAboveTube);
+        if (isRound()) return Require.result("turn length", Math.PI * (innerDiameter + 2 * heightAboveTube));
+        return Require.result("turn length", 2 * (sideA + sideB) + 2 * Math.PI * heightAboveTube);
     }
 
     /** Kernel: the perimeter of the outside of a winding of build b (m) (for its cooling surface). */
