@@ -47,9 +47,6 @@ public final class AirGap implements MagneticCircuit {
 
     /** McLyman's fringing factor F = 1 + (lg/√Ac)·ln(2G/lg); lengths in m, area in m². */
     public static double mcLymanFactor(double gap, double area, double windowHeight) {
-        Require.finite("gap", gap);
-        Require.finite("area", area);
-        Require.finite("window height", windowHeight);
         Require.between("gap length", gap, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
         Require.between("area", area, Dimension.AREA, Require.MIN_LENGTH * Require.MIN_LENGTH, Require.MAX_LENGTH * Require.MAX_LENGTH);
         Require.between("window height", windowHeight, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);

@@ -29,10 +29,7 @@ public final class Loops {
 
     /** Kernel: Maxwell's mutual inductance (H) of coaxial filaments, radii and distance in m. */
     public static double mutualAt(double radius1, double radius2, double axialDistance) {
-        Require.finite("radius1", radius1);
-        Require.finite("radius2", radius2);
-        Require.finite("axial distance", axialDistance);
-        return Require.result("mutual", Elliptic.maxwell(radius1, radius2, axialDistance));
+        return Require.result("mutual inductance", Elliptic.maxwell(radius1, radius2, axialDistance));
     }
 
     /**

@@ -189,10 +189,6 @@ public final class Multilayer implements AirCoil {
 
     /** Wheeler 1928 multilayer (H): L[μH] = 0.8 a²N²/(6a + 9b + 10c), inches; arguments in m. */
     public static double wheeler1928At(double turns, double length, double meanRadius, double build) {
-        Require.finite("turns", turns);
-        Require.finite("length", length);
-        Require.finite("mean radius", meanRadius);
-        Require.finite("build", build);
         Solenoid.checkKernel(turns, length, meanRadius);
         Require.between("build", build, Dimension.LENGTH, 0, Require.MAX_LENGTH);
         double a = meanRadius;
@@ -201,8 +197,6 @@ public final class Multilayer implements AirCoil {
 
     /** Brooks (H): 1.6994e-6·a·N², a the mean radius in m. */
     public static double brooksAt(double turns, double meanRadius) {
-        Require.finite("turns", turns);
-        Require.finite("mean radius", meanRadius);
         Solenoid.checkKernel(turns, meanRadius, meanRadius);
         return Require.result("brooks", 1.6994e-6 * meanRadius * turns * turns);
     }

@@ -69,7 +69,6 @@ public final class RodCore {
 
     /** Demagnetising factor of an ellipsoid of revolution of axis ratio m = length/diameter (Osborn 1945). */
     public static double demagnetisingFactorAt(double m) {
-        Require.finite("m", m);
         Require.between("aspect ratio", m, 1e-9, 1e9);
         if (Math.abs(m - 1) < 1e-6) return Require.result("demagnetising factor", 1.0 / 3 - 4.0 / 15 * (m - 1)); // series about the sphere
         if (m > 1) {

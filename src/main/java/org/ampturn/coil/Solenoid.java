@@ -152,7 +152,6 @@ public final class Solenoid implements AirCoil {
 
     /** Nagaoka's coefficient for a ratio of diameter to length D/l &gt; 0. */
     public static double nagaokaAt(double diameterOverLength) {
-        Require.finite("diameter over length", diameterOverLength);
         double x = Require.between("diameter/length", diameterOverLength, 1e-12, 1e12);
         double h = Math.sqrt(1 + x * x);
         return Require.result("nagaoka", Elliptic.nagaoka(x / h, 1 / h));
@@ -160,9 +159,6 @@ public final class Solenoid implements AirCoil {
 
     /** Current-sheet inductance (H) of N turns over length l (m) at mean diameter D (m). */
     public static double inductanceAt(double turns, double length, double diameter) {
-        Require.finite("turns", turns);
-        Require.finite("length", length);
-        Require.finite("diameter", diameter);
         checkKernel(turns, length, diameter);
         double inv = 1 / Math.sqrt(diameter * diameter + length * length);
         double kn = Elliptic.nagaoka(diameter * inv, length * inv);
@@ -171,9 +167,6 @@ public final class Solenoid implements AirCoil {
 
     /** Wheeler 1928 (H): L[μH] = a²N²/(9a + 10l), inches. */
     public static double wheeler1928At(double turns, double length, double diameter) {
-        Require.finite("turns", turns);
-        Require.finite("length", length);
-        Require.finite("diameter", diameter);
         checkKernel(turns, length, diameter);
         double a = diameter / 2;
         return Require.result("wheeler1928at", 1e-6 * a * a * turns * turns / (INCH * (9 * a + 10 * length)));
@@ -181,9 +174,6 @@ public final class Solenoid implements AirCoil {
 
     /** Wheeler 1982 (H). */
     public static double wheeler1982At(double turns, double length, double diameter) {
-        Require.finite("turns", turns);
-        Require.finite("length", length);
-        Require.finite("diameter", diameter);
         checkKernel(turns, length, diameter);
         double a = diameter / 2, l = length;
         // ln(1 + πa/l) + 1/(2.3 + 1.6 l/a + 0.44 (l/a)²), the second term as a²/(2.3a² + 1.6al + 0.44l²):
@@ -195,9 +185,6 @@ public final class Solenoid implements AirCoil {
 
     /** Rosa's correction μ0·a·N·(A + B) in H. */
     public static double roundWireCorrectionAt(int turns, double length, double diameter, double wire) {
-        Require.finite("length", length);
-        Require.finite("diameter", diameter);
-        Require.finite("wire", wire);
         checkKernel(turns, length, diameter);
         Require.between("wire diameter", wire, Dimension.LENGTH, Require.MIN_LENGTH, diameter);
         double p = length / turns;

@@ -78,14 +78,12 @@ public final class Conductor {
 
     /** Kernel: resistivity (Ω·m) at a temperature (K). */
     public double resistivityAt(double kelvin) {
-        Require.finite("temperature (K)", kelvin);
         Require.between("temperature", kelvin, Dimension.TEMPERATURE, 1e-3, Require.MAX_KELVIN);
         return Require.result("resistivity", rho20 * (1 + alpha20 * (kelvin - T20)));
     }
 
     /** Kernel: R(T)/R(20 °C) = 1 + α20·(T − 20 °C) for a temperature in kelvin. */
     public double resistanceRatioAt(double kelvin) {
-        Require.finite("temperature (K)", kelvin);
         Require.between("temperature", kelvin, Dimension.TEMPERATURE, 1e-3, Require.MAX_KELVIN);
         return Require.result("resistance ratio", 1 + alpha20 * (kelvin - T20));
     }
@@ -95,7 +93,6 @@ public final class Conductor {
      * the "resistance method" of temperature measurement (IEC 60034-1 uses the same linear law).
      */
     public double temperatureAtResistanceRatio(double ratio) {
-        Require.finite("ratio", ratio);
         Require.between("resistance ratio", ratio, 0, 1e6);
         return Require.result("temperature at resistance ratio", T20 + (ratio - 1) / alpha20);
     }

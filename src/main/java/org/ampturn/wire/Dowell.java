@@ -42,9 +42,6 @@ public final class Dowell {
 
     /** Kernel: normalised layer thickness Δ of round wire of diameter d at pitch s, skin depth δ (all m). */
     public static double deltaOfRoundWire(double diameter, double pitch, double skinDepth) {
-        Require.finite("diameter", diameter);
-        Require.finite("pitch", pitch);
-        Require.finite("skin depth", skinDepth);
         Require.between("wire diameter", diameter, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
         Require.between("turn pitch", pitch, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
         Require.between("skin depth", skinDepth, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);

@@ -71,7 +71,6 @@ public final class Wire {
 
     /** Kernel: ASTM B258 bare diameter (m) of gauge n. */
     public static double awgDiameterAt(double gauge) {
-        Require.finite("gauge", gauge);
         Require.between("AWG gauge", gauge, -3, 56);
         return Require.result("awg diameter", D36 * Math.pow(92, (36 - gauge) / 39));
     }

@@ -52,7 +52,7 @@ import org.ampturn.units.Unit;
 public final class LibraryFuzz {
     /** Counts of each outcome and the first examples of each fault. */
     public static final class Report {
-        public long calls, normal, refused, hangs, nonFinite, raw, unclear, roundTrip;
+        public long calls, normal, refused, hangs, nonFinite, raw, unclear, roundTrip, slow;
         public final Map<String, List<String>> examples = new LinkedHashMap<>();
 
         void example(String kind, String text) {
@@ -68,9 +68,9 @@ public final class LibraryFuzz {
         @Override
         public String toString() {
             StringBuilder sb = new StringBuilder();
-            sb.append(String.format("%d calls: %d returned a value, %d refused with the library's message; "
+            sb.append(String.format("%d calls: %d returned a value, %d refused with the library's message, %d took over 1 s; "
                     + "hangs %d, unexplained NaN/∞ %d, raw exceptions %d, unclear messages %d, round-trip failures %d%n",
-                    calls, normal, refused, hangs, nonFinite, raw, unclear, roundTrip));
+                    calls, normal, refused, slow, hangs, nonFinite, raw, unclear, roundTrip));
             for (Map.Entry<String, List<String>> e : examples.entrySet()) {
                 sb.append("  ").append(e.getKey()).append(":\n");
                 for (String x : e.getValue()) sb.append("    ").append(x).append('\n');
@@ -103,14 +103,17 @@ public final class LibraryFuzz {
                 methods.add(m);
             }
         }
-        methods.sort((a, b) -> (a.getDeclaringClass().getName() + a).compareTo(b.getDeclaringClass().getName() + b));
-        for (Method m : Ampturn.class.getMethods()) {
+        List<Method> facade = new ArrayList<>(List.of(Ampturn.class.getMethods()));
+        facade.sort((a, b) -> a.toString().compareTo(b.toString()));
+        for (Method m : facade) {
             if (!Modifier.isStatic(m.getModifiers()) || !supported(m)) continue;
             String pkg = m.getReturnType().getPackageName();
             boolean domain = m.getReturnType().isPrimitive() || m.getReturnType() == Quantity.class
                     || Stream.of(PACKAGES).anyMatch(p -> pkg.equals("org.ampturn." + p));
             if (domain && !m.getName().startsWith("plot") && !m.getName().startsWith("save")) methods.add(m);
         }
+        // the JVM lists methods in no fixed order: sort them, so that a seed gives the same cases
+        methods.sort((a, b) -> (a.getDeclaringClass().getName() + a).compareTo(b.getDeclaringClass().getName() + b));
         seedPool();
     }
 
@@ -378,8 +381,14 @@ public final class LibraryFuzz {
             }
         });
         Object result;
+        long t0 = System.nanoTime();
         try {
             result = f.get(timeoutMillis, TimeUnit.MILLISECONDS);
+            long ms = (System.nanoTime() - t0) / 1_000_000;
+            if (ms > 1000) {
+                report.slow++;
+                report.example("slow (over 1 s, not a fault)", what + ": " + ms + " ms");
+            }
         } catch (TimeoutException e) {
             f.cancel(true);
             worker.shutdownNow();
