@@ -122,12 +122,22 @@ public final class Electromagnet {
      * quadrature (relative accuracy 1e-11).
      */
     public double coenergyAt(double gap, double amps) {
-        if (iron.isLinear()) return 0.5 * turns * (double) turns / reluctanceAt(gap) * amps * amps;
+        Require.between("gap", gap, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
+        Require.finite("current (A)", amps);
+        if (iron.isLinear()) return Require.result("coenergy", 0.5 * turns * (double) turns / reluctanceAt(gap) * amps * amps);
         if (amps == 0) return 0;
         var quad = new org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator(16, 1e-11, 1e-300);
         MagneticCircuit whole = circuitAt(gap);
-        return quad.integrate(Integer.MAX_VALUE, i -> turns * whole.fluxAt(turns * i), 0, amps);
+        try {
+            return Require.result("coenergy", quad.integrate(MAX_EVALUATIONS, i -> turns * whole.fluxAt(turns * i), 0, amps));
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException e) {
+            throw Require.fail("the coenergy at " + Quantity.of(amps, Dimension.CURRENT) + " did not converge in " + MAX_EVALUATIONS
+                    + " evaluations: " + e.getMessage(), e);
+        }
     }
+
+    /** Most evaluations of the B-H curve one coenergy integral may take. */
+    static final int MAX_EVALUATIONS = 1_000_000;
 
     private double reluctanceAt(double gap) {
         return iron.reluctanceSI() + gaps * gap / (MagneticCircuit.MU0 * area);

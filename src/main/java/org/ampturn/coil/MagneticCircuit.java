@@ -95,12 +95,12 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
     /** IEC 60205 effective magnetic path length l<sub>e</sub> = C1²/C2. */
     default Quantity effectiveLength() {
-        return Quantity.of(c1() * c1() / c2(), Dimension.LENGTH);
+        return Quantity.of(Require.result("effective length C1²/C2", c1() * c1() / c2()), Dimension.LENGTH);
     }
 
     /** IEC 60205 effective area A<sub>e</sub> = C1/C2. */
     default Quantity effectiveArea() {
-        return Quantity.of(c1() / c2(), Dimension.AREA);
+        return Quantity.of(Require.result("effective area C1/C2", c1() / c2()), Dimension.AREA);
     }
 
     /** Effective (relative) permeability μ<sub>e</sub> = C1/(μ0·R): what a uniform core of l<sub>e</sub>, A<sub>e</sub> would need. */

@@ -87,7 +87,9 @@ public final class WoundCoil implements Coil {
 
     /** L/R at the coil's temperature (small-signal L). */
     public Quantity timeConstant() {
-        return Quantity.of(inductance().si() / resistanceAt(kelvin), Dimension.TIME);
+        double r = resistanceAt(kelvin);
+        if (!(r > 0)) throw new IllegalStateException("the time constant L/R is infinite: the coil has no resistance");
+        return Quantity.of(Require.result("time constant L/R", inductance().si() / r), Dimension.TIME);
     }
 
     /** N·i. */
@@ -163,7 +165,13 @@ public final class WoundCoil implements Coil {
         if (isLinear()) return Require.result("stored energy", 0.5 * inductance().si() * amps * amps);
         if (amps == 0) return Require.result("stored energy", 0);
         var quad = new org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator(16, 1e-11, 1e-300);
-        double coenergy = quad.integrate(Integer.MAX_VALUE, this::fluxLinkageAt, 0, amps);
+        double coenergy;
+        try {
+            coenergy = quad.integrate(1_000_000, this::fluxLinkageAt, 0, amps);
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException e) {
+            throw Require.fail("the stored energy at " + Quantity.of(amps, Dimension.CURRENT)
+                    + " did not converge in 1000000 evaluations: " + e.getMessage(), e);
+        }
         return Require.result("stored energy", fluxLinkageAt(amps) * amps - coenergy);
     }
 

@@ -99,6 +99,8 @@ public final class Solve {
         } catch (TooManyEvaluationsException e) {
             throw new SolveException("no answer within " + MAX_EVALUATIONS + " evaluations between x = " + showX.apply(lo) + " and "
                     + showX.apply(hi) + "; is f continuous there?", e);
+        } catch (org.apache.commons.math3.exception.MathIllegalArgumentException e) {
+            throw Require.fail("the range from x = " + showX.apply(lo) + " to " + showX.apply(hi) + " is too narrow to search", e);
         }
     }
 

@@ -78,7 +78,7 @@ public final class Varied {
 
     /** The same band, spread normally with the band at ±{@code sigmas}·σ (e.g. 2 for a 95 % band). */
     public Varied normal(double sigmas) {
-        if (!(sigmas > 0) || Double.isInfinite(sigmas)) throw Require.fail("sigmas for " + name + " must be a finite number above zero, got " + sigmas);
+        Require.between("band in standard deviations (sigmas)", sigmas, 0.1, 10);
         return new Varied(name, nominal, plainNumber, half, Shape.NORMAL, sigmas, band);
     }
 

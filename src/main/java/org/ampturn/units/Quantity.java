@@ -244,6 +244,10 @@ public final class Quantity implements Comparable<Quantity> {
         return checked(new Quantity(Math.sqrt(si), dimension.root(2), false), 0.0, "√", "");
     }
 
+    private void requireComparable(Quantity o) {
+        if (Double.isNaN(si) || Double.isNaN(o.si)) throw Require.fail("cannot compare " + this + " with " + o + ": NaN has no order");
+    }
+
     private void requireOperand(Quantity o, String verb, String prep) {
         if (o == null) throw Require.fail("cannot " + verb + " " + this + " " + prep + " nothing (null)");
     }
@@ -267,11 +271,13 @@ public final class Quantity implements Comparable<Quantity> {
 
     public Quantity min(Quantity o) {
         requireSame(o, "compare", "with");
+        requireComparable(o);
         return si <= o.si ? this : o;
     }
 
     public Quantity max(Quantity o) {
         requireSame(o, "compare", "with");
+        requireComparable(o);
         return si >= o.si ? this : o;
     }
 
