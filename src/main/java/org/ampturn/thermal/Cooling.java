@@ -15,6 +15,14 @@ public interface Cooling {
     /** One line naming the rule and its source. */
     String describe();
 
+    /**
+     * Null where the rule holds at this loss and surface, else a note that it is used outside the
+     * range it was drawn from (an empirical rule extrapolated).
+     */
+    default String rangeNote(double watts, double squareMetres) {
+        return null;
+    }
+
     /** The rise on the Quantity surface. */
     default Quantity rise(Quantity power, Quantity area) {
         double p = Require.nonNegative("power", power, Dimension.POWER);

@@ -107,6 +107,16 @@ class ThermalTest {
     }
 
     @Test
+    void theHandbookRuleSaysWhenItIsUsedOutsideItsRange() {
+        // McLyman's rule is drawn from 0.005 to 0.15 W/cm² (Cooling.handbookRule's documentation, from memory)
+        HeatState inside = Heating.of(q("100 ohm"), Conductor.COPPER, q("50 cm^2")).atVoltage(q("12 V")); // about 1.4 W: 0.03 W/cm²
+        assertTrue(inside.warnings().stream().noneMatch(w -> w.contains("outside its range")), inside.warnings().toString());
+        HeatState tiny = Heating.of(q("1000 ohm"), Conductor.COPPER, q("500 cm^2")).atVoltage(q("1 V")); // 1 mW: 2e-6 W/cm²
+        assertTrue(tiny.warnings().stream().anyMatch(w -> w.contains("outside its range") && w.contains("0.005")), tiny.warnings().toString());
+        assertTrue(tiny.toString().contains("warning"), tiny.toString());
+    }
+
+    @Test
     void warningsNameTheClassAndTheBurnHazard() {
         Winding w = Winding.full(Wire.awg(30), Bobbin.of(q("25 mm"), q("12 mm"), q("8 mm")), Packing.LAYERED);
         HeatState cool = Heating.of(w).atVoltage(q("3 V"));
