@@ -103,4 +103,16 @@ class BadInputRegressionTest {
         contains(refused(() -> Clamp.diode(V(-1e-300))), "diode forward drop", "-1.000e-300 V");
         assertEquals("1.000e200 m", m(1e200).toString());
     }
+
+    @Test
+    void aStudyFunctionThatGivesInfinityMarksItsRowFailedInsteadOfStoringIt() {
+        var t = sweepDoubles("x", -1, 1, 3, x -> 1 / x);                 // 1/0 at x = 0
+        assertEquals("the function gave Infinity, not a finite number", t.error(1));
+        assertTrue(Double.isNaN(t.values("result")[1]));
+        assertEquals(1.0, t.values("result")[2]);
+        var g = sweep("x", -1, 1, 3, x -> V(1).div(x == 0 ? 1e-320 : x)); // a general sweep of quantities
+        assertTrue(g.error(1) != null && g.error(1).contains("overflows"), String.valueOf(g.error(1)));
+        var n = sweep("x", -1, 1, 3, x -> 1.0 / x);
+        assertEquals("output \"result\" is Infinity, not a finite number", n.error(1));
+    }
 }

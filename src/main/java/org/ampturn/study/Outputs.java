@@ -88,16 +88,29 @@ public final class Outputs {
      */
     static Map<String, Object> from(Object result, String defaultName) {
         if (result == null) throw new IllegalStateException("the function returned nothing (null)");
-        if (result instanceof Outputs) return ((Outputs) result).values;
-        if (result instanceof Map) {
-            LinkedHashMap<String, Object> m = new LinkedHashMap<>();
+        Map<String, Object> m;
+        if (result instanceof Outputs) {
+            m = ((Outputs) result).values;
+        } else if (result instanceof Map) {
+            m = new LinkedHashMap<>();
             for (Map.Entry<?, ?> e : ((Map<?, ?>) result).entrySet()) {
                 if (e.getValue() == null) throw new IllegalStateException("output " + e.getKey() + " is missing (null)");
                 m.put(String.valueOf(e.getKey()), e.getValue());
             }
-            return m;
+        } else {
+            m = Map.of(defaultName, result);
         }
-        return Map.of(defaultName, result);
+        // a NaN or an infinity is the row's error, not a value in the table
+        m.forEach((name, v) -> {
+            if (!isFinite(v)) throw new IllegalStateException("output " + Require.quote(name) + " is " + v + ", not a finite number");
+        });
+        return m;
+    }
+
+    private static boolean isFinite(Object v) {
+        if (v instanceof Quantity) return Double.isFinite(((Quantity) v).si());
+        if (v instanceof Double || v instanceof Float) return Double.isFinite(((Number) v).doubleValue());
+        return true;
     }
 
     @Override

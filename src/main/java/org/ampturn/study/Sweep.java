@@ -121,6 +121,10 @@ public final class Sweep {
                 for (; i < end; i++) {
                     try {
                         y[i] = f.applyAsDouble(x[i]);
+                        if (!Double.isFinite(y[i])) {
+                            errors[i] = "the function gave " + y[i] + ", not a finite number";
+                            y[i] = Double.NaN;
+                        }
                     } catch (RuntimeException e) {
                         y[i] = Double.NaN;
                         errors[i] = Runner.describe(e);
