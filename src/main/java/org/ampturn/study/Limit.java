@@ -111,6 +111,7 @@ public final class Limit {
     void check(Quantity value) {
         if (value == null) throw Require.fail("no value of " + output + " (null) to check against " + this);
         checkDimension(value.dimension());
+        if (!Double.isFinite(value.si())) throw Require.fail("the value of " + output + " to check against " + this + " must be finite, got " + value);
     }
 
     void checkDimension(Dimension d) {
