@@ -235,7 +235,13 @@ public final class Plunger implements Armature {
     /** λ at current i and position x: inverse of {@link #currentAt} by bisection (the current rises with λ). */
     double fluxLinkageAt(double amps, double x) {
         double lo = 0, hi = Math.max(inductanceAt(x) * Math.abs(amps), 1e-12);
-        while (currentAt(hi, x) < Math.abs(amps)) hi *= 2;
+        for (int k = 0; currentAt(hi, x) < Math.abs(amps); k++) {
+            if (k > 2000 || !Double.isFinite(hi)) {
+                throw Require.fail("no flux linkage gives a current of " + Quantity.of(amps, Dimension.CURRENT) + " at position "
+                        + Quantity.of(x, Dimension.LENGTH) + ": the current is outside the model's range");
+            }
+            hi *= 2;
+        }
         for (int k = 0; k < 200 && hi - lo > 1e-15 * hi; k++) {
             double mid = 0.5 * (lo + hi);
             if (currentAt(mid, x) < Math.abs(amps)) lo = mid;
