@@ -80,7 +80,7 @@ public final class Electromagnet {
 
     /** n·B²A/(2μ0) in N at gap x (m) and current i (A). */
     public double forceAt(double gap, double amps) {
-        Require.finite("gap", gap);
+        Require.finite("gap (m)", gap);
         Require.finite("current (A)", amps);
         double b = fluxAt(gap, amps) / area;
         return Require.result("force", gaps * Force.maxwellAt(b, area));
@@ -93,7 +93,7 @@ public final class Electromagnet {
      * 8-point Gauss-Legendre on 48 panels in i.
      */
     public double forceByCoenergyAt(double gap, double amps) {
-        Require.finite("gap", gap);
+        Require.finite("gap (m)", gap);
         Require.finite("current (A)", amps);
         if (iron.isLinear()) {
             double h = 1e-3 * gap;

@@ -154,7 +154,7 @@ public final class Plunger implements Armature {
     @Override
     public double currentAt(double weberTurns, double metres) {
         Require.finite("flux linkage (Wb)", weberTurns);
-        Require.finite("metres", metres);
+        Require.finite("position (m)", metres);
         double phi = weberTurns / turns;
         return Require.result("current", (phi * gapReluctance(metres) + ironLength * ironField(phi / area)) / turns);
     }
@@ -165,7 +165,7 @@ public final class Plunger implements Armature {
     @Override
     public double fieldEnergyAt(double weberTurns, double metres) {
         Require.finite("flux linkage (Wb)", weberTurns);
-        Require.finite("metres", metres);
+        Require.finite("position (m)", metres);
         double phi = weberTurns / turns;
         double w = 0.5 * phi * phi * gapReluctance(metres);
         if (iron != null) {
@@ -190,7 +190,7 @@ public final class Plunger implements Armature {
     @Override
     public double forceAt(double weberTurns, double metres) {
         Require.finite("flux linkage (Wb)", weberTurns);
-        Require.finite("metres", metres);
+        Require.finite("position (m)", metres);
         if (stroke + residual - metres <= 0) return Require.result("force", 0);
         double b = weberTurns / turns / area;
         return Require.result("force", b * b * area / (2 * MU0));
@@ -198,8 +198,8 @@ public final class Plunger implements Armature {
 
     @Override
     public double restoringForceAt(double metres, double metresPerSecond) {
-        Require.finite("metres", metres);
-        Require.finite("metres per second", metresPerSecond);
+        Require.finite("position (m)", metres);
+        Require.finite("speed (m/s)", metresPerSecond);
         return Require.result("restoring force", preload + stiffness * metres + load + damping * metresPerSecond);
     }
 
@@ -213,7 +213,7 @@ public final class Plunger implements Armature {
 
     @Override
     public double inductanceAt(double metres) {
-        Require.finite("metres", metres);
+        Require.finite("position (m)", metres);
         double rel = gapReluctance(metres);
         if (iron != null) rel += ironLength / (MU0 * iron.relativePermeability() * area);
         return Require.result("inductance", (double) turns * turns / rel);

@@ -121,14 +121,14 @@ public final class CoreLoss {
 
     /** Kernel: Steinmetz loss density (W/m³) at f (Hz) and peak B (T), sinusoidal. */
     public double densitySineAt(double f, double bPeak) {
-        Require.finite("f", f);
+        Require.finite("frequency (Hz)", f);
         Require.finite("b peak", bPeak);
         return Require.result("density sine", k * Math.pow(f, alpha) * Math.pow(Math.abs(bPeak), beta));
     }
 
     /** Kernel: iGSE loss density (W/m³) of a triangle: f (Hz), swing ΔB (T, peak to peak), duty D in (0, 1). */
     public double densityTriangularAt(double f, double deltaB, double duty) {
-        Require.finite("f", f);
+        Require.finite("frequency (Hz)", f);
         Require.finite("delta b", deltaB);
         Require.finite("duty", duty);
         if (!(duty > 0 && duty < 1)) throw Require.fail("duty must be between 0 and 1 (exclusive), got " + duty);

@@ -50,7 +50,7 @@ public final class Dowell {
 
     /** Kernel: ς1(Δ) = (sinh 2Δ + sin 2Δ)/(cosh 2Δ − cos 2Δ). */
     public static double varsigma1(double delta) {
-        Require.finite("delta", delta);
+        Require.finite("Dowell's Δ (conductor thickness over skin depth)", delta);
         double x = 2 * delta;
         if (x < 1e-3) return Require.result("varsigma1", 1 / delta * (1 + Math.pow(delta, 4) * 4 / 45)); // series: ς1 ≈ 1/Δ + 4Δ³/45
         if (x > 40) return Require.result("varsigma1", 1);
@@ -59,7 +59,7 @@ public final class Dowell {
 
     /** Kernel: ς2(Δ) = (sinh Δ − sin Δ)/(cosh Δ + cos Δ). */
     public static double varsigma2(double delta) {
-        Require.finite("delta", delta);
+        Require.finite("Dowell's Δ (conductor thickness over skin depth)", delta);
         if (delta < 1e-3) return Require.result("varsigma2", Math.pow(delta, 3) / 6); // series: ς2 ≈ Δ³/6
         if (delta > 40) return Require.result("varsigma2", 1);
         return Require.result("varsigma2", (Math.sinh(delta) - Math.sin(delta)) / (Math.cosh(delta) + Math.cos(delta)));
@@ -67,14 +67,14 @@ public final class Dowell {
 
     /** Kernel: F_R of layer m (1 = next to the MMF zero) at normalised thickness Δ. */
     public static double layerFactorAt(double delta, int layer) {
-        Require.finite("delta", delta);
+        Require.finite("Dowell's Δ (conductor thickness over skin depth)", delta);
         Require.positive("layer", layer);
         return Require.result("layer factor", delta * (varsigma1(delta) + 2.0 * layer * (layer - 1) * varsigma2(delta)));
     }
 
     /** Kernel: mean F_R of a winding portion of p layers at normalised thickness Δ. */
     public static double factorAt(double delta, int layers) {
-        Require.finite("delta", delta);
+        Require.finite("Dowell's Δ (conductor thickness over skin depth)", delta);
         Require.positive("layers", layers);
         Require.nonNegative("normalised layer thickness Δ", delta);
         if (delta == 0) return Require.result("factor", 1);
