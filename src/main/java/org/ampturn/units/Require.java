@@ -206,13 +206,21 @@ public final class Require {
      * OutOfMemoryError. {@code what} names the items ("sweep points").
      */
     public static void fitsInMemory(String what, long count, double bytesEach) {
-        Runtime rt = Runtime.getRuntime();
-        long free = rt.maxMemory() - (rt.totalMemory() - rt.freeMemory());
         double need = count * bytesEach;
+        long free = freeMemory();
+        if (need > 0.7 * free) {
+            System.gc(); // what looked used may be garbage: look again once before refusing
+            free = freeMemory();
+        }
         if (need > 0.7 * free) {
             throw fail(count + " " + what + " need about " + bytes(need) + " of memory, more than the " + bytes(free)
                     + " free; use fewer, or give the JVM more (-Xmx)");
         }
+    }
+
+    private static long freeMemory() {
+        Runtime rt = Runtime.getRuntime();
+        return rt.maxMemory() - (rt.totalMemory() - rt.freeMemory());
     }
 
     private static String bytes(double b) {

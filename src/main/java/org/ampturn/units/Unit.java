@@ -29,7 +29,7 @@ public final class Unit {
         Unit u = CACHE.get(text);
         if (u == null) {
             u = new UnitParser(text).parse();
-            if (CACHE.size() < 10_000) CACHE.put(text, u);
+            if (CACHE.size() < 10_000 && text.length() <= 64) CACHE.put(text, u); // long texts are rare: no cache of megabytes
         }
         return u;
     }
