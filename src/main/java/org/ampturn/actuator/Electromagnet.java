@@ -40,7 +40,7 @@ public final class Electromagnet {
         Require.turns("turns", turns);
         if (ironPath == null) throw Require.fail("iron path is missing (null)");
         double a = Require.positive("pole area", poleArea, Dimension.AREA);
-        Require.positive("gaps", gaps);
+        Require.between("gaps", gaps, 1, 16);
         return new Electromagnet(turns, ironPath, a, gaps);
     }
 

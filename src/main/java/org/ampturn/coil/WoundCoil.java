@@ -115,7 +115,7 @@ public final class WoundCoil implements Coil {
     /** Copper loss i²R at the coil's temperature. */
     public Quantity copperLoss(Quantity current) {
         double i = Require.si("current", current, Dimension.CURRENT);
-        return Quantity.of(i * i * resistanceAt(kelvin), Dimension.POWER);
+        return Quantity.of(Require.result("copper loss I²R", i * i * resistanceAt(kelvin)), Dimension.POWER);
     }
 
     /** The saturation check of the core for this coil's turns. */

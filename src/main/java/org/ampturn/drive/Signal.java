@@ -41,6 +41,7 @@ public final class Signal {
             if (!Double.isFinite(times[k]) || (k > 0 && times[k] < times[k - 1])) {
                 throw Require.fail("signal " + name + ": time " + k + " (" + times[k] + " s) is not finite and non-decreasing");
             }
+            if (!Double.isFinite(values[k])) throw Require.fail("signal " + name + ": value " + k + " (" + values[k] + ") is not finite");
         }
         return new Signal(name, dimension, times.clone(), values.clone());
     }
@@ -132,7 +133,7 @@ public final class Signal {
 
     /** Root mean square over the whole span (trapezoidal rule on the squared samples). */
     public Quantity rms() {
-        return q(Math.sqrt(meanBetween(times[0], times[times.length - 1], true)));
+        return q(Require.result("rms", Math.sqrt(meanBetween(times[0], times[times.length - 1], true))));
     }
 
     private double meanBetween(double a, double b, boolean squared) {

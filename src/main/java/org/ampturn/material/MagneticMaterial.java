@@ -40,6 +40,7 @@ public interface MagneticMaterial {
      */
     static MagneticMaterial linear(String name, double relativePermeability, Quantity saturation) {
         Require.positive("relative permeability", relativePermeability);
+        Require.between("relative permeability", relativePermeability, 1e-3, 1e8);
         double bsat = Require.positive("saturation flux density", saturation, Dimension.FLUX_DENSITY);
         return new LinearMaterial(name, relativePermeability, bsat);
     }
@@ -58,7 +59,7 @@ public interface MagneticMaterial {
     default double amplitudePermeabilityAt(double fieldAmpsPerMetre) {
         Require.finite("field strength (A/m)", fieldAmpsPerMetre);
         // below 1 µA/m B/(μ0 H) is the initial permeability (and the division would underflow)
-        if (Math.abs(fieldAmpsPerMetre) < 1e-6) return relativePermeability();
+        if (Math.abs(fieldAmpsPerMetre) < 1e-6) return Require.result("amplitude permeability", relativePermeability());
         return Require.result("amplitude permeability", fluxDensityAt(fieldAmpsPerMetre) / (MU0 * fieldAmpsPerMetre));
     }
 

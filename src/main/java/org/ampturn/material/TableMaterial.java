@@ -59,6 +59,8 @@ final class TableMaterial implements MagneticMaterial {
         this.b = bb;
         this.bsat = bsat;
         this.m = tangents(hh, bb);
+        // a first point at a vanishing H gives an initial slope no material has (and ∞ in a double)
+        Require.between("initial relative permeability of the B-H table", m[0] / MU0, 1e-3, 1e8);
     }
 
     private static double[] tangents(double[] x, double[] y) {

@@ -148,13 +148,13 @@ public final class Require {
 
     /** {@code v} within [lo, hi]; the message gives the range. */
     public static double between(String name, double v, double lo, double hi) {
-        if (!(v >= lo && v <= hi)) throw fail(name + " must be between " + show(lo) + " and " + show(hi) + ", got " + show(v));
+        if (!(v >= lo && v <= hi) || Double.isInfinite(v)) throw fail(name + " must be between " + show(lo) + " and " + show(hi) + ", got " + show(v));
         return v;
     }
 
     /** An SI value of dimension {@code d} (a kernel's argument) within [lo, hi]; the message shows units. */
     public static double between(String name, double v, Dimension d, double lo, double hi) {
-        if (!(v >= lo && v <= hi)) throw fail(name + " must be from " + show(lo, d) + " to " + show(hi, d) + ", got " + show(v, d));
+        if (!(v >= lo && v <= hi) || Double.isInfinite(v)) throw fail(name + " must be from " + show(lo, d) + " to " + show(hi, d) + ", got " + show(v, d));
         return v;
     }
 

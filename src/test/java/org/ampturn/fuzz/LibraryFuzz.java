@@ -410,7 +410,7 @@ public final class LibraryFuzz {
             return;
         }
         report.normal++;
-        if (keep) add(result);
+        if (keep && !isLargeStudy(result)) add(result);
     }
 
     /**
@@ -432,6 +432,18 @@ public final class LibraryFuzz {
         }
         return c.equals("Transient") && List.of("timeTo", "timeConstant", "timeTo63", "timeTo90", "timeTo99", "decayTime", "ripple", "cycleMean",
                 "pullInCurrentTime", "pullInTime", "dropOutTime").contains(m.getName());
+    }
+
+    /**
+     * A result of many rows or samples stays out of the pool: the library checks each large result
+     * against the memory left, but kept by the fuzz, a few of them would fill the heap for later calls.
+     */
+    private static boolean isLargeStudy(Object r) {
+        return r instanceof org.ampturn.drive.Transient && ((org.ampturn.drive.Transient) r).current().size() > 100_000
+                || r instanceof org.ampturn.drive.Signal && ((org.ampturn.drive.Signal) r).size() > 100_000
+                || r instanceof org.ampturn.study.Table && ((org.ampturn.study.Table) r).size() > 10_000
+                || r instanceof org.ampturn.study.MonteCarlo && ((org.ampturn.study.MonteCarlo) r).table().size() > 10_000
+                || r instanceof org.ampturn.study.Corners && ((org.ampturn.study.Corners) r).table().size() > 10_000;
     }
 
     private static boolean isNonFinite(Object r) {
