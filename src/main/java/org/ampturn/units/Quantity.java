@@ -245,7 +245,9 @@ public final class Quantity implements Comparable<Quantity> {
     }
 
     private void requireComparable(Quantity o) {
-        if (Double.isNaN(si) || Double.isNaN(o.si)) throw Require.fail("cannot compare " + this + " with " + o + ": NaN has no order");
+        if (!Double.isFinite(si) || !Double.isFinite(o.si)) {
+            throw Require.fail("cannot take the smaller or larger of " + this + " and " + o + ": an operand is not a finite number");
+        }
     }
 
     private void requireOperand(Quantity o, String verb, String prep) {
