@@ -37,10 +37,10 @@ public final class Electromagnet {
 
     /** An electromagnet of {@code turns} on {@code ironPath}, closing through {@code gaps} gaps of {@code poleArea} each. */
     public static Electromagnet of(int turns, MagneticCircuit ironPath, Quantity poleArea, int gaps) {
-        Require.positive("turns", turns);
-        if (ironPath == null) throw new IllegalArgumentException("iron path is missing (null)");
+        Require.turns("turns", turns);
+        if (ironPath == null) throw Require.fail("iron path is missing (null)");
         double a = Require.positive("pole area", poleArea, Dimension.AREA);
-        Require.positive("gaps", gaps);
+        Require.between("gaps", gaps, 1, 16);
         return new Electromagnet(turns, ironPath, a, gaps);
     }
 
@@ -50,29 +50,29 @@ public final class Electromagnet {
 
     /** The whole magnetic circuit with the armature at gap x. */
     public MagneticCircuit circuitAt(Quantity gap) {
-        return circuitAt(Require.positive("gap", gap, Dimension.LENGTH));
+        return circuitAt(Require.length("gap", gap));
     }
 
     /** Small-signal inductance at gap x. */
     public Quantity inductance(Quantity gap) {
-        return Quantity.of(turns * (double) turns / reluctanceAt(Require.positive("gap", gap, Dimension.LENGTH)), Dimension.INDUCTANCE);
+        return Quantity.of(turns * (double) turns / reluctanceAt(Require.length("gap", gap)), Dimension.INDUCTANCE);
     }
 
     /** Gap flux density at gap x and current i. */
     public Quantity gapFluxDensity(Quantity gap, Quantity current) {
-        double x = Require.positive("gap", gap, Dimension.LENGTH);
+        double x = Require.length("gap", gap);
         double i = Require.si("current", current, Dimension.CURRENT);
         return Quantity.of(fluxAt(x, i) / area, Dimension.FLUX_DENSITY);
     }
 
     /** Holding force from the gap flux density, n·B²A/(2μ0). */
     public Quantity force(Quantity gap, Quantity current) {
-        return Quantity.of(forceAt(Require.positive("gap", gap, Dimension.LENGTH), Require.si("current", current, Dimension.CURRENT)), Dimension.FORCE);
+        return Quantity.of(forceAt(Require.length("gap", gap), Require.si("current", current, Dimension.CURRENT)), Dimension.FORCE);
     }
 
     /** Holding force from the co-energy's derivative with gap at constant current. */
     public Quantity forceByCoenergy(Quantity gap, Quantity current) {
-        return Quantity.of(forceByCoenergyAt(Require.positive("gap", gap, Dimension.LENGTH), Require.si("current", current, Dimension.CURRENT)),
+        return Quantity.of(forceByCoenergyAt(Require.length("gap", gap), Require.si("current", current, Dimension.CURRENT)),
                 Dimension.FORCE);
     }
 
@@ -80,8 +80,10 @@ public final class Electromagnet {
 
     /** n·B²A/(2μ0) in N at gap x (m) and current i (A). */
     public double forceAt(double gap, double amps) {
+        Require.finite("gap (m)", gap);
+        Require.finite("current (A)", amps);
         double b = fluxAt(gap, amps) / area;
-        return gaps * Force.maxwellAt(b, area);
+        return Require.result("force", gaps * Force.maxwellAt(b, area));
     }
 
     /**
@@ -91,13 +93,15 @@ public final class Electromagnet {
      * 8-point Gauss-Legendre on 48 panels in i.
      */
     public double forceByCoenergyAt(double gap, double amps) {
+        Require.finite("gap (m)", gap);
+        Require.finite("current (A)", amps);
         if (iron.isLinear()) {
             double h = 1e-3 * gap;
             double d = (-coenergyAt(gap + 2 * h, amps) + 8 * coenergyAt(gap + h, amps) - 8 * coenergyAt(gap - h, amps)
                     + coenergyAt(gap - 2 * h, amps)) / (12 * h);
-            return -d;
+            return Require.result("force by coenergy", -d);
         }
-        if (amps == 0) return 0;
+        if (amps == 0) return Require.result("force by coenergy", 0);
         double h = 1e-3 * gap;
         MagneticCircuit p2 = circuitAt(gap + 2 * h), p1 = circuitAt(gap + h), m1 = circuitAt(gap - h), m2 = circuitAt(gap - 2 * h);
         // composite 8-point Gauss-Legendre on 48 equal panels: a B-H table's kinks cost little accuracy
@@ -110,7 +114,7 @@ public final class Electromagnet {
             }
         }
         d *= 0.5 * w * turns / (12 * h);
-        return -d;
+        return Require.result("force by coenergy", -d);
     }
 
     /**
@@ -118,12 +122,22 @@ public final class Electromagnet {
      * quadrature (relative accuracy 1e-11).
      */
     public double coenergyAt(double gap, double amps) {
-        if (iron.isLinear()) return 0.5 * turns * (double) turns / reluctanceAt(gap) * amps * amps;
+        Require.between("gap", gap, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
+        Require.finite("current (A)", amps);
+        if (iron.isLinear()) return Require.result("coenergy", 0.5 * turns * (double) turns / reluctanceAt(gap) * amps * amps);
         if (amps == 0) return 0;
         var quad = new org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator(16, 1e-11, 1e-300);
         MagneticCircuit whole = circuitAt(gap);
-        return quad.integrate(Integer.MAX_VALUE, i -> turns * whole.fluxAt(turns * i), 0, amps);
+        try {
+            return Require.result("coenergy", quad.integrate(MAX_EVALUATIONS, i -> turns * whole.fluxAt(turns * i), 0, amps));
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException e) {
+            throw Require.fail("the coenergy at " + Quantity.of(amps, Dimension.CURRENT) + " did not converge in " + MAX_EVALUATIONS
+                    + " evaluations: " + e.getMessage(), e);
+        }
     }
+
+    /** Most evaluations of the B-H curve one coenergy integral may take. */
+    static final int MAX_EVALUATIONS = 1_000_000;
 
     private double reluctanceAt(double gap) {
         return iron.reluctanceSI() + gaps * gap / (MagneticCircuit.MU0 * area);

@@ -36,6 +36,8 @@ public final class Force {
 
     /** Kernel: B²A/(2μ0) in N, B in T, A in m². */
     public static double maxwellAt(double tesla, double area) {
-        return tesla * tesla * area / (2 * MU0);
+        Require.finite("flux density (T)", tesla);
+        Require.finite("area (m²)", area);
+        return Require.result("maxwell", tesla * tesla * area / (2 * MU0));
     }
 }

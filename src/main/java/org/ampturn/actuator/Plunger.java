@@ -72,9 +72,9 @@ public final class Plunger implements Armature {
      * no spring, no load, no damping, coil resistance 10 Ω at 20 °C. Change them with the {@code with…} methods.
      */
     public static Plunger of(int turns, Quantity poleArea, Quantity stroke) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         double a = Require.positive("pole area", poleArea, Dimension.AREA);
-        double s = Require.positive("stroke", stroke, Dimension.LENGTH);
+        double s = Require.length("stroke", stroke);
         return new Plunger(turns, a, s, 0.05e-3, 0.1e-3, a, 0, null, 0.010, 0, 0, 0, 0, 10, T20);
     }
 
@@ -86,21 +86,21 @@ public final class Plunger implements Armature {
 
     /** Gap left when closed (a non-magnetic stop or plating), in series with the working gap. */
     public Plunger withResidualGap(Quantity gap) {
-        double g = Require.nonNegative("residual gap", gap, Dimension.LENGTH);
+        double g = Require.lengthOrZero("residual gap", gap);
         return copy(g, parasitic, parasiticArea, ironLength, iron, mass, stiffness, preload, load, damping, r20, kelvin);
     }
 
     /** Fixed parasitic gap (the radial sliding gap) of the given length and area. */
     public Plunger withParasiticGap(Quantity gap, Quantity gapArea) {
-        double g = Require.nonNegative("parasitic gap", gap, Dimension.LENGTH);
+        double g = Require.lengthOrZero("parasitic gap", gap);
         double a = Require.positive("parasitic gap area", gapArea, Dimension.AREA);
         return copy(residual, g, a, ironLength, iron, mass, stiffness, preload, load, damping, r20, kelvin);
     }
 
     /** Iron path of the given mean length and material, with the pole's cross-section. */
     public Plunger withIron(Quantity pathLength, MagneticMaterial material) {
-        double l = Require.positive("iron path length", pathLength, Dimension.LENGTH);
-        if (material == null) throw new IllegalArgumentException("iron material is missing (null)");
+        double l = Require.length("iron path length", pathLength);
+        if (material == null) throw Require.fail("iron material is missing (null)");
         return copy(residual, parasitic, parasiticArea, l, material, mass, stiffness, preload, load, damping, r20, kelvin);
     }
 
@@ -136,8 +136,7 @@ public final class Plunger implements Armature {
 
     @Override
     public Plunger atTemperature(Quantity temperature) {
-        double k = Require.si("temperature", temperature, Dimension.TEMPERATURE);
-        if (!(k > 0)) throw new IllegalArgumentException("temperature must be above absolute zero, got " + temperature);
+        double k = org.ampturn.material.Conductor.kelvin("temperature", temperature);
         return copy(residual, parasitic, parasiticArea, ironLength, iron, mass, stiffness, preload, load, damping, r20, k);
     }
 
@@ -154,8 +153,10 @@ public final class Plunger implements Armature {
 
     @Override
     public double currentAt(double weberTurns, double metres) {
+        Require.finite("flux linkage (Wb)", weberTurns);
+        Require.finite("position (m)", metres);
         double phi = weberTurns / turns;
-        return (phi * gapReluctance(metres) + ironLength * ironField(phi / area)) / turns;
+        return Require.result("current", (phi * gapReluctance(metres) + ironLength * ironField(phi / area)) / turns);
     }
 
     private static final double[] GX = {0, -0.5384693101056831, 0.5384693101056831, -0.9061798459386640, 0.9061798459386640};
@@ -163,6 +164,8 @@ public final class Plunger implements Armature {
 
     @Override
     public double fieldEnergyAt(double weberTurns, double metres) {
+        Require.finite("flux linkage (Wb)", weberTurns);
+        Require.finite("position (m)", metres);
         double phi = weberTurns / turns;
         double w = 0.5 * phi * phi * gapReluctance(metres);
         if (iron != null) {
@@ -181,19 +184,23 @@ public final class Plunger implements Armature {
             }
             w += area * ironLength * ironEnergyDensity;
         }
-        return w;
+        return Require.result("field energy", w);
     }
 
     @Override
     public double forceAt(double weberTurns, double metres) {
-        if (stroke + residual - metres <= 0) return 0;
+        Require.finite("flux linkage (Wb)", weberTurns);
+        Require.finite("position (m)", metres);
+        if (stroke + residual - metres <= 0) return Require.result("force", 0);
         double b = weberTurns / turns / area;
-        return b * b * area / (2 * MU0);
+        return Require.result("force", b * b * area / (2 * MU0));
     }
 
     @Override
     public double restoringForceAt(double metres, double metresPerSecond) {
-        return preload + stiffness * metres + load + damping * metresPerSecond;
+        Require.finite("position (m)", metres);
+        Require.finite("speed (m/s)", metresPerSecond);
+        return Require.result("restoring force", preload + stiffness * metres + load + damping * metresPerSecond);
     }
 
     @Override public double massKg() { return mass; }
@@ -206,9 +213,10 @@ public final class Plunger implements Armature {
 
     @Override
     public double inductanceAt(double metres) {
+        Require.finite("position (m)", metres);
         double rel = gapReluctance(metres);
         if (iron != null) rel += ironLength / (MU0 * iron.relativePermeability() * area);
-        return (double) turns * turns / rel;
+        return Require.result("inductance", (double) turns * turns / rel);
     }
 
     /** Small-signal inductance open (x = 0). */
@@ -220,14 +228,20 @@ public final class Plunger implements Armature {
     /** Magnetic force at a current and position (N): solves the magnetic circuit for λ. */
     public Quantity force(Quantity current, Quantity position) {
         double i = Require.si("current", current, Dimension.CURRENT);
-        double x = Require.between("position (m)", Require.si("position", position, Dimension.LENGTH), 0, stroke);
+        double x = Require.between("position (m)", Require.distance("position", position), 0, stroke);
         return Quantity.of(forceAt(fluxLinkageAt(i, x), x), Dimension.FORCE);
     }
 
     /** λ at current i and position x: inverse of {@link #currentAt} by bisection (the current rises with λ). */
     double fluxLinkageAt(double amps, double x) {
         double lo = 0, hi = Math.max(inductanceAt(x) * Math.abs(amps), 1e-12);
-        while (currentAt(hi, x) < Math.abs(amps)) hi *= 2;
+        for (int k = 0; currentAt(hi, x) < Math.abs(amps); k++) {
+            if (k > 2000 || !Double.isFinite(hi)) {
+                throw Require.fail("no flux linkage gives a current of " + Quantity.of(amps, Dimension.CURRENT) + " at position "
+                        + Quantity.of(x, Dimension.LENGTH) + ": the current is outside the model's range");
+            }
+            hi *= 2;
+        }
         for (int k = 0; k < 200 && hi - lo > 1e-15 * hi; k++) {
             double mid = 0.5 * (lo + hi);
             if (currentAt(mid, x) < Math.abs(amps)) lo = mid;

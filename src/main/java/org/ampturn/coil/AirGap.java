@@ -30,16 +30,16 @@ public final class AirGap implements MagneticCircuit {
 
     /** A gap of {@code length} across pole faces of {@code area}, without fringing. */
     public static AirGap of(Quantity length, Quantity area) {
-        double g = Require.positive("gap length", length, Dimension.LENGTH);
+        double g = Require.length("gap length", length);
         double a = Require.positive("gap area", area, Dimension.AREA);
         return new AirGap(g, a, 1, Double.NaN);
     }
 
     /** The same gap with McLyman's fringing factor for a winding window of height {@code windowHeight}. */
     public AirGap withFringing(Quantity windowHeight) {
-        double gw = Require.positive("window height", windowHeight, Dimension.LENGTH);
+        double gw = Require.length("window height", windowHeight);
         if (!(2 * gw > length)) {
-            throw new IllegalArgumentException("window height (" + windowHeight + ") must exceed half the gap " + length()
+            throw Require.fail("window height (" + windowHeight + ") must exceed half the gap " + length()
                     + " for McLyman's fringing factor; valid range: > " + Quantity.of(length / 2, Dimension.LENGTH));
         }
         return new AirGap(length, area, mcLymanFactor(length, area, gw), gw);
@@ -47,7 +47,10 @@ public final class AirGap implements MagneticCircuit {
 
     /** McLyman's fringing factor F = 1 + (lg/√Ac)·ln(2G/lg); lengths in m, area in m². */
     public static double mcLymanFactor(double gap, double area, double windowHeight) {
-        return 1 + gap / Math.sqrt(area) * Math.log(2 * windowHeight / gap);
+        Require.between("gap length", gap, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
+        Require.between("area", area, Dimension.AREA, Require.MIN_LENGTH * Require.MIN_LENGTH, Require.MAX_LENGTH * Require.MAX_LENGTH);
+        Require.between("window height", windowHeight, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
+        return Require.result("mc lyman factor", 1 + gap / Math.sqrt(area) * Math.log(2 * windowHeight / gap));
     }
 
     public Quantity length() { return Quantity.of(length, Dimension.LENGTH); }
@@ -60,8 +63,14 @@ public final class AirGap implements MagneticCircuit {
     @Override public boolean isLinear() { return true; }
     @Override public double c1() { return length / area; }
     @Override public double c2() { return length / (area * area); }
-    @Override public double fluxAt(double ampereTurns) { return ampereTurns / reluctanceSI(); }
-    @Override public double mmfAt(double weber) { return weber * reluctanceSI(); }
+    @Override public double fluxAt(double ampereTurns) {
+        Require.finite("mmf (A)", ampereTurns);
+        return Require.result("flux", ampereTurns / reluctanceSI());
+    }
+    @Override public double mmfAt(double weber) {
+        Require.finite("flux (Wb)", weber);
+        return Require.result("mmf", weber * reluctanceSI());
+    }
     @Override public List<MagneticCircuit> parts() { return List.of(this); }
 
     /** Flux density in the gap, Φ/(F·A): the flux spread over the area widened by fringing. */

@@ -1,5 +1,6 @@
 package org.ampturn.coil;
 
+import org.ampturn.units.Require;
 import java.util.ArrayList;
 import java.util.List;
 import org.ampturn.units.Dimension;
@@ -40,8 +41,9 @@ public final class Comparison {
 
     /** The row of the method whose name starts with {@code prefix} (case-insensitive). */
     public Row row(String prefix) {
+        Require.present("method name", prefix);
         for (Row r : rows) if (r.method().toLowerCase().startsWith(prefix.toLowerCase())) return r;
-        throw new IllegalArgumentException("no method named " + prefix + " in this comparison; methods: "
+        throw Require.fail("no method named " + Require.quote(prefix) + " in this comparison; methods: "
                 + rows.stream().map(Row::method).toList());
     }
 

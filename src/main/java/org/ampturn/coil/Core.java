@@ -26,9 +26,9 @@ public final class Core implements MagneticCircuit {
 
     /** A core piece of magnetic path length {@code pathLength}, cross-section {@code area}, of {@code material}. */
     public static Core of(String name, Quantity pathLength, Quantity area, MagneticMaterial material) {
-        double l = Require.positive("path length", pathLength, Dimension.LENGTH);
+        double l = Require.length("path length", pathLength);
         double a = Require.positive("area", area, Dimension.AREA);
-        if (material == null) throw new IllegalArgumentException("material is missing (null); give a MagneticMaterial");
+        if (material == null) throw Require.fail("material is missing (null); give a MagneticMaterial");
         return new Core(name == null || name.isBlank() ? material.name() : name, l, a, material);
     }
 
@@ -57,9 +57,9 @@ public final class Core implements MagneticCircuit {
     }
 
     private double checkGap(Quantity gapLength) {
-        double g = Require.positive("gap length", gapLength, Dimension.LENGTH);
+        double g = Require.length("gap length", gapLength);
         if (!(g < length)) {
-            throw new IllegalArgumentException("gap length (" + gapLength + ") must be shorter than the core's path length " + pathLength()
+            throw Require.fail("gap length (" + gapLength + ") must be shorter than the core's path length " + pathLength()
                     + "; valid range: 0 < gap < " + pathLength());
         }
         return g;
@@ -74,8 +74,14 @@ public final class Core implements MagneticCircuit {
     @Override public boolean isLinear() { return material.isLinear(); }
     @Override public double c1() { return length / area; }
     @Override public double c2() { return length / (area * area); }
-    @Override public double fluxAt(double ampereTurns) { return material.fluxDensityAt(ampereTurns / length) * area; }
-    @Override public double mmfAt(double weber) { return material.fieldAt(weber / area) * length; }
+    @Override public double fluxAt(double ampereTurns) {
+        Require.finite("mmf (A)", ampereTurns);
+        return Require.result("flux", material.fluxDensityAt(ampereTurns / length) * area);
+    }
+    @Override public double mmfAt(double weber) {
+        Require.finite("flux (Wb)", weber);
+        return Require.result("mmf", material.fieldAt(weber / area) * length);
+    }
     @Override public List<MagneticCircuit> parts() { return List.of(this); }
 
     @Override

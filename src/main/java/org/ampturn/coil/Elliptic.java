@@ -1,5 +1,8 @@
 package org.ampturn.coil;
 
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Require;
+
 /**
  * Complete elliptic integrals K(k) and E(k) by the arithmetic-geometric mean, and the two
  * combinations the coil formulas need, computed so that no difference of nearly equal terms occurs.
@@ -16,8 +19,10 @@ final class Elliptic {
 
     /** K(k) from the complementary modulus k′ = √(1 − k²), 0 &lt; k′ ≤ 1. */
     static double k(double kc) {
+        check("complementary modulus k′", kc);
         double a = 1, b = kc;
-        while (a - b > 1e-15 * a) {
+        for (int n = 0; a - b > 1e-15 * a; n++) {
+            if (n > MAX_ITERATIONS) throw notConverged("K(k)", kc);
             double an = 0.5 * (a + b);
             b = Math.sqrt(a * b);
             a = an;
@@ -51,7 +56,8 @@ final class Elliptic {
         b = Math.sqrt(kc);
         double tail = c * c;
         double w = 1;
-        while (true) {
+        for (int n = 0; ; n++) {
+            if (n > MAX_ITERATIONS) throw notConverged("E(k)", k);
             c = c * c / (2 * (a + b));
             double an = 0.5 * (a + b);
             b = Math.sqrt(a * b);
@@ -73,18 +79,24 @@ final class Elliptic {
      * ch. 14). One AGM gives K and the sum for K − E.
      */
     static double nagaoka(double k, double kc) {
+        if (!(k > 0 && k <= 1 && kc > 0 && kc <= 1)) {
+            throw Require.fail("Nagaoka's coefficient needs moduli k and k′ in (0, 1], got k = " + Require.show(k)
+                    + ", k′ = " + Require.show(kc) + " (a length or diameter out of range)");
+        }
         double k2 = k * k;
         double c = 0.5 * k2 / (1 + kc); // c1 = (1 - k')/2 without cancellation
         double a = 0.5 * (1 + kc);
         double b = Math.sqrt(kc);
         double tail = c * c; // sum over n >= 1 of 2^(n-1) c_n^2
         double w = 2;
+        int iterations = 0;
         // c_{n+1} = (a_n - b_n)/2: its rounding error is far below the terms that matter, and once
         // c <= 1e-9 a the next term is below 1e-18 of the sum and (a + b)/2 is the limit to 1e-18.
         while (true) {
             c = 0.5 * (a - b);
             tail += w * c * c;
             if (c <= 1e-9 * a) break;
+            if (++iterations > MAX_ITERATIONS) throw notConverged("Nagaoka's coefficient", k);
             double an = 0.5 * (a + b);
             b = Math.sqrt(a * b);
             a = an;
@@ -108,13 +120,18 @@ final class Elliptic {
      * coincident circle (r1 = r2, z = 0), where M diverges.
      */
     static double maxwell(double r1, double r2, double z) {
+        if (!(r1 > 0 && r2 > 0 && r1 <= Require.MAX_LENGTH && r2 <= Require.MAX_LENGTH && Math.abs(z) <= Require.MAX_LENGTH)) {
+            throw Require.fail("Maxwell's formula needs radii from 0 to " + Require.show(Require.MAX_LENGTH, Dimension.LENGTH)
+                    + " and a distance within it, got " + Require.show(r1) + " m, " + Require.show(r2) + " m, " + Require.show(z) + " m");
+        }
         double s = r1 + r2, d = r1 - r2, z2 = z * z;
         double a = Math.sqrt(s * s + z2);
         double b = Math.sqrt(d * d + z2);
         double c = 4 * r1 * r2 / (a + b); // d0 = a0 - b0 without cancellation
         double cs = c * c;
         double w = 1;
-        while (true) {
+        for (int n = 0; ; n++) {
+            if (n > MAX_ITERATIONS) throw notConverged("Maxwell's mutual inductance", r1);
             double an = 0.5 * (a + b);
             b = Math.sqrt(a * b);
             a = an;
@@ -128,4 +145,16 @@ final class Elliptic {
     }
 
     static final double MU0 = 4e-7 * Math.PI;
+
+    /** The AGM converges quadratically: 6 steps suffice for k ≤ 0.99999 and 60 for any k a double holds. */
+    static final int MAX_ITERATIONS = 60;
+
+    private static void check(String what, double v) {
+        if (!(v > 0 && v <= 1)) throw Require.fail(what + " must be in (0, 1], got " + Require.show(v));
+    }
+
+    private static IllegalArgumentException notConverged(String what, double at) {
+        return Require.fail(what + " did not converge in " + MAX_ITERATIONS + " steps at " + Require.show(at)
+                + ": an argument is out of range");
+    }
 }

@@ -1,5 +1,7 @@
 package org.ampturn.coil;
 
+import org.ampturn.units.Require;
+
 /**
  * A coil as a lattice of coaxial circular filaments: layers at given radii, layer i carrying
  * {@code counts[i]} turns at a common axial pitch from {@code starts[i]} on. Inductances are sums of
@@ -43,6 +45,13 @@ final class Filaments {
         return a;
     }
 
+    private static void checkWork(double evaluations) {
+        if (evaluations > MAX_EVALUATIONS) {
+            throw Require.fail("the filament sum needs about " + Require.show(evaluations) + " evaluations of Maxwell's formula, at most "
+                    + Require.show(MAX_EVALUATIONS) + "; use a closed form (Wheeler, Brooks) for a coil this large");
+        }
+    }
+
     static Filaments of(AirCoil c) {
         if (c instanceof Solenoid) return ((Solenoid) c).filaments();
         return ((Multilayer) c).filaments();
@@ -57,11 +66,19 @@ final class Filaments {
         return Elliptic.MU0 * a * (Math.log(8 * a / rho) - 1.75);
     }
 
+    /** Most evaluations of Maxwell's formula one sum may take (about 10 s). */
+    static final double MAX_EVALUATIONS = 2e8;
+
     /** Self-inductance of the whole lattice (H). */
     double selfInductance() {
         int nl = radii.length;
+        double work = 0;
+        for (int c : counts) work += (double) c;
+        work *= 0.5 * (nl + 1);
+        checkWork(work);
         double sum = 0;
         for (int i = 0; i < nl; i++) {
+            Require.notInterrupted("filament sum");
             double ri = radii[i];
             int t = counts[i];
             double s = t * loopSelf(ri, wireRadius);
@@ -86,9 +103,14 @@ final class Filaments {
     /** Mutual inductance (H) with another lattice displaced by {@code distance} (m) along the axis. */
     double mutual(Filaments o, double distance) {
         boolean samePitch = Math.abs(pitch - o.pitch) <= 1e-12 * Math.max(pitch, o.pitch);
+        double ta = 0, tb = 0;
+        for (int c : counts) ta += c;
+        for (int c : o.counts) tb += c;
+        checkWork(samePitch ? (ta / radii.length + tb / o.radii.length) * radii.length * o.radii.length : ta * tb);
         double sum = 0;
         for (int i = 0; i < radii.length; i++) {
             for (int j = 0; j < o.radii.length; j++) {
+                Require.notInterrupted("filament sum");
                 if (samePitch) {
                     sum += layerPair(radii[i], counts[i], starts[i], o.radii[j], o.counts[j], distance + o.starts[j], pitch, o);
                 } else {
@@ -126,8 +148,8 @@ final class Filaments {
     private void checkApart(double ra, double rb, double dz, Filaments o) {
         double gap = Math.hypot(ra - rb, dz);
         if (gap < (wireRadius + o.wireRadius) * (1 - 1e-9)) {
-            throw new IllegalArgumentException("the coils overlap: a turn of one lies " + gap * 1e3 + " mm from a turn of the other, closer than the wires allow ("
-                    + (wireRadius + o.wireRadius) * 1e3 + " mm); move them further apart along the axis or change a diameter");
+            throw Require.fail("the coils overlap: turns lie " + Require.show(gap, org.ampturn.units.Dimension.LENGTH) + " apart, closer than the wires allow ("
+                    + Require.show(wireRadius + o.wireRadius, org.ampturn.units.Dimension.LENGTH) + "); move them apart or change a diameter");
         }
     }
 }

@@ -1,5 +1,6 @@
 package org.ampturn.coil;
 
+import org.ampturn.units.Require;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -59,7 +60,7 @@ public final class FluxReport {
     /** The part named {@code name} (the first, if several share it). */
     public Part part(String name) {
         for (Part p : parts) if (p.name().equals(name)) return p;
-        throw new IllegalArgumentException("no part named " + name + "; parts: " + parts.stream().map(Part::name).toList());
+        throw Require.fail("no part named " + name + "; parts: " + parts.stream().map(Part::name).toList());
     }
 
     /** The highest |B| in any core piece (gaps excluded). */

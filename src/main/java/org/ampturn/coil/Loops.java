@@ -18,18 +18,18 @@ public final class Loops {
 
     /** Mutual inductance of two coaxial circular filaments of these radii whose planes are {@code axialDistance} apart. */
     public static Quantity mutualInductance(Quantity radius1, Quantity radius2, Quantity axialDistance) {
-        double a = Require.positive("radius1", radius1, Dimension.LENGTH);
-        double b = Require.positive("radius2", radius2, Dimension.LENGTH);
-        double z = Require.si("axial distance", axialDistance, Dimension.LENGTH);
+        double a = Require.length("radius 1", radius1);
+        double b = Require.length("radius 2", radius2);
+        double z = Require.distance("axial distance", axialDistance);
         if (a == b && z == 0) {
-            throw new IllegalArgumentException("radius1 = radius2 and axial distance 0: the loops coincide and M is infinite; use selfInductance for one loop");
+            throw Require.fail("radius1 = radius2 and axial distance 0: the loops coincide and M is infinite; use selfInductance for one loop");
         }
         return Quantity.of(mutualAt(a, b, z), Dimension.INDUCTANCE);
     }
 
     /** Kernel: Maxwell's mutual inductance (H) of coaxial filaments, radii and distance in m. */
     public static double mutualAt(double radius1, double radius2, double axialDistance) {
-        return Elliptic.maxwell(radius1, radius2, axialDistance);
+        return Require.result("mutual inductance", Elliptic.maxwell(radius1, radius2, axialDistance));
     }
 
     /**
@@ -37,16 +37,16 @@ public final class Loops {
      * L = μ0·a·(ln(8a/ρ) − 7/4) (Rosa and Grover 1912; Grover 1946, ch. 16), valid for ρ ≪ a.
      */
     public static Quantity selfInductance(Quantity loopRadius, Quantity wireRadius) {
-        double a = Require.positive("loop radius", loopRadius, Dimension.LENGTH);
-        double r = Require.positive("wire radius", wireRadius, Dimension.LENGTH);
-        if (!(r < a)) throw new IllegalArgumentException("wire radius (" + wireRadius + ") must be less than the loop radius " + loopRadius);
+        double a = Require.length("loop radius", loopRadius);
+        double r = Require.length("wire radius", wireRadius);
+        if (!(r < a)) throw Require.fail("wire radius (" + wireRadius + ") must be less than the loop radius " + loopRadius);
         return Quantity.of(Filaments.loopSelf(a, r), Dimension.INDUCTANCE);
     }
 
     /** Mutual inductance of two coaxial air coils whose centres are {@code axialDistance} apart. */
     public static Quantity mutualInductance(AirCoil a, AirCoil b, Quantity axialDistance) {
-        double z = Require.si("axial distance", axialDistance, Dimension.LENGTH);
-        if (a == null || b == null) throw new IllegalArgumentException("both coils are needed, got " + a + " and " + b);
+        double z = Require.distance("axial distance", axialDistance);
+        if (a == null || b == null) throw Require.fail("both coils are needed, got " + a + " and " + b);
         return Quantity.of(Filaments.of(a).mutual(Filaments.of(b), z), Dimension.INDUCTANCE);
     }
 

@@ -1,5 +1,6 @@
 package org.ampturn.coil;
 
+import org.ampturn.units.Require;
 import org.ampturn.material.Conductor;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
@@ -21,19 +22,28 @@ final class LumpedCoil implements Coil {
     @Override public Quantity inductance() { return Quantity.of(l, Dimension.INDUCTANCE); }
     @Override public Quantity resistance() { return Quantity.of(resistanceAt(kelvin), Dimension.RESISTANCE); }
     @Override public Quantity temperature() { return Quantity.temperatureKelvin(kelvin); }
-    @Override public double fluxLinkageAt(double amps) { return l * amps; }
-    @Override public double currentAt(double weberTurns) { return weberTurns / l; }
-    @Override public double incrementalInductanceAt(double amps) { return l; }
+    @Override public double fluxLinkageAt(double amps) {
+        Require.finite("current (A)", amps);
+        return Require.result("flux linkage", l * amps);
+    }
+    @Override public double currentAt(double weberTurns) {
+        Require.finite("flux linkage (Wb)", weberTurns);
+        return Require.result("current", weberTurns / l);
+    }
+    @Override public double incrementalInductanceAt(double amps) {
+        Require.finite("current (A)", amps);
+        return Require.result("incremental inductance", l);
+    }
 
     @Override
     public double resistanceAt(double k) {
-        return r20 * Conductor.COPPER.resistanceRatioAt(k);
+        Require.finite("temperature (K)", k);
+        return Require.result("resistance", r20 * Conductor.COPPER.resistanceRatioAt(k));
     }
 
     @Override
     public Coil atTemperature(Quantity t) {
-        double k = org.ampturn.units.Require.si("temperature", t, Dimension.TEMPERATURE);
-        if (k <= 0) throw new IllegalArgumentException("temperature must be above absolute zero, got " + t);
+        double k = Conductor.kelvin("temperature", t);
         return new LumpedCoil(l, r20, k);
     }
 

@@ -68,9 +68,9 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
     }
 
     private static MagneticCircuit[] check(MagneticCircuit[] parts) {
-        if (parts == null || parts.length == 0) throw new IllegalArgumentException("a circuit needs at least one part, got none");
+        if (parts == null || parts.length == 0) throw Require.fail("a circuit needs at least one part, got none");
         for (int i = 0; i < parts.length; i++) {
-            if (parts[i] == null) throw new IllegalArgumentException("part " + (i + 1) + " of the circuit is missing (null)");
+            if (parts[i] == null) throw Require.fail("part " + (i + 1) + " of the circuit is missing (null)");
         }
         return parts;
     }
@@ -84,7 +84,7 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
     /** Small-signal inductance N²/R of {@code turns} turns linking the whole circuit. */
     default Quantity inductance(int turns) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         return Quantity.of((double) turns * turns / reluctanceSI(), Dimension.INDUCTANCE);
     }
 
@@ -95,12 +95,12 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
     /** IEC 60205 effective magnetic path length l<sub>e</sub> = C1²/C2. */
     default Quantity effectiveLength() {
-        return Quantity.of(c1() * c1() / c2(), Dimension.LENGTH);
+        return Quantity.of(Require.result("effective length C1²/C2", c1() * c1() / c2()), Dimension.LENGTH);
     }
 
     /** IEC 60205 effective area A<sub>e</sub> = C1/C2. */
     default Quantity effectiveArea() {
-        return Quantity.of(c1() / c2(), Dimension.AREA);
+        return Quantity.of(Require.result("effective area C1/C2", c1() / c2()), Dimension.AREA);
     }
 
     /** Effective (relative) permeability μ<sub>e</sub> = C1/(μ0·R): what a uniform core of l<sub>e</sub>, A<sub>e</sub> would need. */
@@ -110,7 +110,7 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
     /** Flux density in each part at {@code turns} × {@code current}, as a small table. */
     default FluxReport fluxDensities(int turns, Quantity current) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         double i = Require.si("current", current, Dimension.CURRENT);
         return FluxReport.of(this, turns, i);
     }
@@ -122,7 +122,7 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
     /** Which part saturates first, and at what current, for {@code turns} turns. */
     default Saturation saturation(int turns) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         return Saturation.of(this, turns);
     }
 
@@ -152,16 +152,18 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
         @Override
         public double mmfAt(double weber) {
-            if (linear) return weber * r;
+            Require.finite("flux (Wb)", weber);
+            if (linear) return Require.result("mmf", weber * r);
             double f = 0;
             for (MagneticCircuit p : parts) f += p.mmfAt(weber);
-            return f;
+            return Require.result("mmf", f);
         }
 
         @Override
         public double fluxAt(double ampereTurns) {
-            if (linear) return ampereTurns / r;
-            return Monotone.solve(this::mmfAt, ampereTurns, ampereTurns / r);
+            Require.finite("mmf (A)", ampereTurns);
+            if (linear) return Require.result("flux", ampereTurns / r);
+            return Require.result("flux", Monotone.solve(this::mmfAt, ampereTurns, ampereTurns / r));
         }
 
         @Override public double c1() { return parts.stream().mapToDouble(MagneticCircuit::c1).sum(); }
@@ -209,16 +211,18 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
 
         @Override
         public double fluxAt(double ampereTurns) {
-            if (linear) return ampereTurns / r;
+            Require.finite("mmf (A)", ampereTurns);
+            if (linear) return Require.result("flux", ampereTurns / r);
             double f = 0;
             for (MagneticCircuit p : parts) f += p.fluxAt(ampereTurns);
-            return f;
+            return Require.result("flux", f);
         }
 
         @Override
         public double mmfAt(double weber) {
-            if (linear) return weber * r;
-            return Monotone.solve(this::fluxAt, weber, weber * r);
+            Require.finite("flux (Wb)", weber);
+            if (linear) return Require.result("mmf", weber * r);
+            return Require.result("mmf", Monotone.solve(this::fluxAt, weber, weber * r));
         }
 
         /** One part of area ΣA and the area-weighted mean length (see the interface's note). */

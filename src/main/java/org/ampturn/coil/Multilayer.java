@@ -54,9 +54,9 @@ public final class Multilayer implements AirCoil {
      * self-inductance, and for Wheeler's formula the winding's mean diameter, length and build.
      */
     public static Multilayer of(Winding winding) {
-        if (winding == null) throw new IllegalArgumentException("winding is missing (null)");
+        if (winding == null) throw Require.fail("winding is missing (null)");
         if (!winding.bobbin().isRound()) {
-            throw new IllegalArgumentException("the winding's bobbin is rectangular (" + winding.bobbin()
+            throw Require.fail("the winding's bobbin is rectangular (" + winding.bobbin()
                     + "); an air coil of coaxial circles needs a round bobbin");
         }
         double id = winding.bobbin().innerDiameter().si();
@@ -71,13 +71,16 @@ public final class Multilayer implements AirCoil {
      * (wires touching) until {@link #withWire(Quantity)} says otherwise.
      */
     public static Multilayer of(int turnsPerLayer, int layers, Quantity innerDiameter, Quantity outerDiameter, Quantity length) {
-        Require.positive("turns per layer", turnsPerLayer);
-        Require.positive("layers", layers);
-        double id = Require.positive("inner diameter", innerDiameter, Dimension.LENGTH);
-        double od = Require.positive("outer diameter", outerDiameter, Dimension.LENGTH);
-        double b = Require.positive("length", length, Dimension.LENGTH);
+        Require.turns("turns per layer", turnsPerLayer);
+        Require.turns("layers", layers);
+        if ((long) turnsPerLayer * layers > Require.MAX_TURNS) {
+            throw Require.fail("turns per layer × layers (" + turnsPerLayer + " × " + layers + ") must be at most " + Require.MAX_TURNS);
+        }
+        double id = Require.length("inner diameter", innerDiameter);
+        double od = Require.length("outer diameter", outerDiameter);
+        double b = Require.length("length", length);
         if (!(od > id)) {
-            throw new IllegalArgumentException("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter + ")");
+            throw Require.fail("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter + ")");
         }
         double pitch = Math.min(b / turnsPerLayer, (od - id) / 2 / layers);
         return new Multilayer(turnsPerLayer, layers, id, od, b, pitch);
@@ -88,11 +91,11 @@ public final class Multilayer implements AirCoil {
      * (mean radius 3c/2), wound as n × n turns; {@code turns} must be a perfect square n².
      */
     public static Multilayer brooks(int turns, Quantity side) {
-        Require.positive("turns", turns);
-        double c = Require.positive("side of the winding section", side, Dimension.LENGTH);
+        Require.turns("turns", turns);
+        double c = Require.length("side of the winding section", side);
         int n = (int) Math.round(Math.sqrt(turns));
         if (n * n != turns) {
-            throw new IllegalArgumentException("turns (" + turns + ") must be a perfect square for an n × n Brooks winding, e.g. "
+            throw Require.fail("turns (" + turns + ") must be a perfect square for an n × n Brooks winding, e.g. "
                     + (n * n) + " or " + ((n + 1) * (n + 1)));
         }
         return new Multilayer(n, n, 2 * c, 4 * c, c, c / n);
@@ -101,10 +104,10 @@ public final class Multilayer implements AirCoil {
     /** The same coil with round wire of this diameter (at most the smaller pitch). */
     public Multilayer withWire(Quantity wireDiameter) {
         if (winding != null) throw new IllegalStateException("this coil takes its wire from its winding; change the winding's wire instead");
-        double w = Require.positive("wire diameter", wireDiameter, Dimension.LENGTH);
+        double w = Require.length("wire diameter", wireDiameter);
         double pitch = Math.min(length / perLayer, (outer - inner) / 2 / layers);
         if (w > pitch * (1 + 1e-9)) {
-            throw new IllegalArgumentException("wire diameter (" + wireDiameter + ") must be at most the smaller pitch "
+            throw Require.fail("wire diameter (" + wireDiameter + ") must be at most the smaller pitch "
                     + Quantity.of(pitch, Dimension.LENGTH) + ", or the turns overlap");
         }
         return new Multilayer(perLayer, layers, inner, outer, length, w);
@@ -186,13 +189,16 @@ public final class Multilayer implements AirCoil {
 
     /** Wheeler 1928 multilayer (H): L[μH] = 0.8 a²N²/(6a + 9b + 10c), inches; arguments in m. */
     public static double wheeler1928At(double turns, double length, double meanRadius, double build) {
+        Solenoid.checkKernel(turns, length, meanRadius);
+        Require.between("build", build, Dimension.LENGTH, 0, Require.MAX_LENGTH);
         double a = meanRadius;
-        return 0.8e-6 * a * a * turns * turns / (Solenoid.INCH * (6 * a + 9 * length + 10 * build));
+        return Require.result("wheeler1928at", 0.8e-6 * a * a * turns * turns / (Solenoid.INCH * (6 * a + 9 * length + 10 * build)));
     }
 
     /** Brooks (H): 1.6994e-6·a·N², a the mean radius in m. */
     public static double brooksAt(double turns, double meanRadius) {
-        return 1.6994e-6 * meanRadius * turns * turns;
+        Solenoid.checkKernel(turns, meanRadius, meanRadius);
+        return Require.result("brooks", 1.6994e-6 * meanRadius * turns * turns);
     }
 
     @Override

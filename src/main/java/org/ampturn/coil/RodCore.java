@@ -30,9 +30,9 @@ public final class RodCore {
     }
 
     public static RodCore of(Quantity length, Quantity diameter, MagneticMaterial material) {
-        double l = Require.positive("rod length", length, Dimension.LENGTH);
-        double d = Require.positive("rod diameter", diameter, Dimension.LENGTH);
-        if (material == null) throw new IllegalArgumentException("material is missing (null)");
+        double l = Require.length("rod length", length);
+        double d = Require.length("rod diameter", diameter);
+        if (material == null) throw Require.fail("material is missing (null)");
         return new RodCore(l, d, material);
     }
 
@@ -58,10 +58,10 @@ public final class RodCore {
     public Quantity inductance(Solenoid coil) {
         double dc = coil.meanDiameter().si();
         if (!(diameter < dc)) {
-            throw new IllegalArgumentException("rod diameter (" + diameter() + ") must be less than the coil's mean diameter " + coil.meanDiameter());
+            throw Require.fail("rod diameter (" + diameter() + ") must be less than the coil's mean diameter " + coil.meanDiameter());
         }
         if (coil.length().si() > length * (1 + 1e-9)) {
-            throw new IllegalArgumentException("coil length (" + coil.length() + ") must not exceed the rod length " + length());
+            throw Require.fail("coil length (" + coil.length() + ") must not exceed the rod length " + length());
         }
         double ratio = diameter / dc;
         return coil.inductance().times(1 + (effectivePermeability() - 1) * ratio * ratio);
@@ -69,14 +69,14 @@ public final class RodCore {
 
     /** Demagnetising factor of an ellipsoid of revolution of axis ratio m = length/diameter (Osborn 1945). */
     public static double demagnetisingFactorAt(double m) {
-        Require.positive("aspect ratio", m);
-        if (Math.abs(m - 1) < 1e-6) return 1.0 / 3 - 4.0 / 15 * (m - 1); // series about the sphere
+        Require.between("aspect ratio", m, 1e-9, 1e9);
+        if (Math.abs(m - 1) < 1e-6) return Require.result("demagnetising factor", 1.0 / 3 - 4.0 / 15 * (m - 1)); // series about the sphere
         if (m > 1) {
             double s = Math.sqrt(m * m - 1);
-            return (m / s * Math.log(m + s) - 1) / (m * m - 1);
+            return Require.result("demagnetising factor", (m / s * Math.log(m + s) - 1) / (m * m - 1));
         }
         double s = Math.sqrt(1 - m * m);
-        return (1 - m / s * Math.acos(m)) / (1 - m * m);
+        return Require.result("demagnetising factor", (1 - m / s * Math.acos(m)) / (1 - m * m));
     }
 
     @Override

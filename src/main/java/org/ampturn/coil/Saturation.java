@@ -91,7 +91,7 @@ public final class Saturation {
      * and by how much the given current exceeds it.
      */
     public String at(Quantity current) {
-        double i = Math.abs(current.si(Dimension.CURRENT));
+        double i = Math.abs(org.ampturn.units.Require.si("current", current, Dimension.CURRENT));
         if (parts.isEmpty()) return "no core piece: nothing saturates";
         Part p = first();
         if (i < p.amps()) {

@@ -41,27 +41,27 @@ public final class Solenoid implements AirCoil {
      * (measured to the centre of the wire).
      */
     public static Solenoid singleLayer(int turns, Quantity length, Quantity meanDiameter) {
-        Require.positive("turns", turns);
-        double l = Require.positive("length", length, Dimension.LENGTH);
-        double d = Require.positive("mean diameter", meanDiameter, Dimension.LENGTH);
+        Require.turns("turns", turns);
+        double l = Require.length("length", length);
+        double d = Require.length("mean diameter", meanDiameter);
         return new Solenoid(turns, l, d, Double.NaN);
     }
 
     /** The same coil wound with round wire of this (bare) diameter; it must not exceed the pitch l/N. */
     public Solenoid withWire(Quantity wireDiameter) {
-        double w = Require.positive("wire diameter", wireDiameter, Dimension.LENGTH);
+        double w = Require.length("wire diameter", wireDiameter);
         double p = length / turns;
         if (w > p * (1 + 1e-12)) {
-            throw new IllegalArgumentException("wire diameter (" + wireDiameter + ") must be at most the pitch length/turns = "
+            throw Require.fail("wire diameter (" + wireDiameter + ") must be at most the pitch length/turns = "
                     + Quantity.of(p, Dimension.LENGTH) + ", or the turns overlap");
         }
-        if (w >= diameter) throw new IllegalArgumentException("wire diameter (" + wireDiameter + ") must be less than the mean diameter " + meanDiameter());
+        if (w >= diameter) throw Require.fail("wire diameter (" + wireDiameter + ") must be less than the mean diameter " + meanDiameter());
         return new Solenoid(turns, length, diameter, w);
     }
 
     /** The same coil with another number of turns. */
     public Solenoid withTurns(int n) {
-        Require.positive("turns", n);
+        Require.turns("turns", n);
         Solenoid s = new Solenoid(n, length, diameter, Double.NaN);
         return Double.isNaN(wire) ? s : s.withWire(Quantity.of(wire, Dimension.LENGTH));
     }
@@ -152,46 +152,52 @@ public final class Solenoid implements AirCoil {
 
     /** Nagaoka's coefficient for a ratio of diameter to length D/l &gt; 0. */
     public static double nagaokaAt(double diameterOverLength) {
-        double x = diameterOverLength;
+        double x = Require.between("diameter/length", diameterOverLength, 1e-12, 1e12);
         double h = Math.sqrt(1 + x * x);
-        return Elliptic.nagaoka(x / h, 1 / h);
+        return Require.result("nagaoka", Elliptic.nagaoka(x / h, 1 / h));
     }
 
     /** Current-sheet inductance (H) of N turns over length l (m) at mean diameter D (m). */
     public static double inductanceAt(double turns, double length, double diameter) {
+        checkKernel(turns, length, diameter);
         double inv = 1 / Math.sqrt(diameter * diameter + length * length);
         double kn = Elliptic.nagaoka(diameter * inv, length * inv);
-        return Elliptic.MU0 * turns * turns * Math.PI * diameter * diameter / (4 * length) * kn;
+        return Require.result("inductance", Elliptic.MU0 * turns * turns * Math.PI * diameter * diameter / (4 * length) * kn);
     }
 
     /** Wheeler 1928 (H): L[μH] = a²N²/(9a + 10l), inches. */
     public static double wheeler1928At(double turns, double length, double diameter) {
+        checkKernel(turns, length, diameter);
         double a = diameter / 2;
-        return 1e-6 * a * a * turns * turns / (INCH * (9 * a + 10 * length));
+        return Require.result("wheeler1928at", 1e-6 * a * a * turns * turns / (INCH * (9 * a + 10 * length)));
     }
 
     /** Wheeler 1982 (H). */
     public static double wheeler1982At(double turns, double length, double diameter) {
+        checkKernel(turns, length, diameter);
         double a = diameter / 2, l = length;
         // ln(1 + πa/l) + 1/(2.3 + 1.6 l/a + 0.44 (l/a)²), the second term as a²/(2.3a² + 1.6al + 0.44l²):
         // two independent divisions, which the processor overlaps
         double u = a / l;
         double t2 = a * a / (a * (2.3 * a + 1.6 * l) + 0.44 * l * l);
-        return Elliptic.MU0 * turns * turns * a * (LogKernel.log(1 + Math.PI * u) + t2);
+        return Require.result("wheeler1982at", Elliptic.MU0 * turns * turns * a * (LogKernel.log(1 + Math.PI * u) + t2));
     }
 
     /** Rosa's correction μ0·a·N·(A + B) in H. */
     public static double roundWireCorrectionAt(int turns, double length, double diameter, double wire) {
+        checkKernel(turns, length, diameter);
+        Require.between("wire diameter", wire, Dimension.LENGTH, Require.MIN_LENGTH, diameter);
         double p = length / turns;
         double a = 5.0 / 4 - Math.log(2 * p / wire);
-        return Elliptic.MU0 * diameter / 2 * turns * (a + rosaB(turns));
+        return Require.result("round wire correction", Elliptic.MU0 * diameter / 2 * turns * (a + rosaB(turns)));
     }
 
     /** Rosa's B(N): the mutual-inductance part of the round-wire correction. */
     public static double rosaB(int n) {
+        Require.turns("turns", n);
         double s = 0;
         for (int k = 1; k < n; k++) s += (double) (n - k) * rosaF(k);
-        return 2 * s / n;
+        return Require.result("rosa b", 2 * s / n);
     }
 
     private static double rosaF(int k) {
@@ -206,6 +212,13 @@ public final class Solenoid implements AirCoil {
     }
 
     static final double INCH = 0.0254;
+
+    /** The kernels' door: turns from 1 to the library's limit, lengths within the library's range (NaN fails). */
+    static void checkKernel(double turns, double length, double diameter) {
+        Require.between("turns", turns, 1, Require.MAX_TURNS);
+        Require.between("length", length, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
+        Require.between("diameter", diameter, Dimension.LENGTH, Require.MIN_LENGTH, Require.MAX_LENGTH);
+    }
 
     @Override
     public String toString() {

@@ -40,15 +40,15 @@ public final class Toroid {
 
     /** Rectangular section on a core of {@code material}. */
     public static Toroid rectangular(int turns, Quantity innerDiameter, Quantity outerDiameter, Quantity height, MagneticMaterial material) {
-        Require.positive("turns", turns);
-        double id = Require.positive("inner diameter", innerDiameter, Dimension.LENGTH);
-        double od = Require.positive("outer diameter", outerDiameter, Dimension.LENGTH);
-        double hh = Require.positive("height", height, Dimension.LENGTH);
+        Require.turns("turns", turns);
+        double id = Require.length("inner diameter", innerDiameter);
+        double od = Require.length("outer diameter", outerDiameter);
+        double hh = Require.length("height", height);
         if (!(id < od)) {
-            throw new IllegalArgumentException("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter
+            throw Require.fail("inner diameter (" + innerDiameter + ") must be less than the outer diameter (" + outerDiameter
                     + "); valid range: 0 < inner < " + outerDiameter);
         }
-        if (material == null) throw new IllegalArgumentException("material is missing (null)");
+        if (material == null) throw Require.fail("material is missing (null)");
         return new Toroid(turns, false, id / 2, od / 2, hh, material);
     }
 
@@ -60,14 +60,14 @@ public final class Toroid {
 
     /** Circular section on a core of {@code material}. */
     public static Toroid circular(int turns, Quantity meanDiameter, Quantity sectionDiameter, MagneticMaterial material) {
-        Require.positive("turns", turns);
-        double d = Require.positive("mean diameter", meanDiameter, Dimension.LENGTH);
-        double s = Require.positive("section diameter", sectionDiameter, Dimension.LENGTH);
+        Require.turns("turns", turns);
+        double d = Require.length("mean diameter", meanDiameter);
+        double s = Require.length("section diameter", sectionDiameter);
         if (!(s < d)) {
-            throw new IllegalArgumentException("section diameter (" + sectionDiameter + ") must be less than the mean diameter (" + meanDiameter
+            throw Require.fail("section diameter (" + sectionDiameter + ") must be less than the mean diameter (" + meanDiameter
                     + "); valid range: 0 < section < " + meanDiameter);
         }
-        if (material == null) throw new IllegalArgumentException("material is missing (null)");
+        if (material == null) throw Require.fail("material is missing (null)");
         return new Toroid(turns, true, d / 2, s / 2, 0, material);
     }
 
@@ -96,6 +96,7 @@ public final class Toroid {
 
     /** Flux linkage (Wb) at current i (A), by quadrature over the section. */
     public double fluxLinkageAt(double amps) {
+        Require.finite("current (A)", amps);
         double sum = 0;
         if (circular) {
             // r = R + a·sin θ over θ in (-π/2, π/2): the width 2a·cos θ and dr = a·cos θ dθ make the integrand smooth
@@ -104,14 +105,14 @@ public final class Toroid {
                 double r = r1 + r2 * Math.sin(th);
                 sum += GL_W[k] * 2 * r2 * r2 * c * c * material.fluxDensityAt(turns * amps / (2 * Math.PI * r));
             }
-            return turns * 0.5 * Math.PI * sum;
+            return Require.result("flux linkage", turns * 0.5 * Math.PI * sum);
         }
         double half = 0.5 * (r2 - r1), mid = 0.5 * (r1 + r2);
         for (int k = 0; k < GL_X.length; k++) {
             double r = mid + half * GL_X[k];
             sum += GL_W[k] * h * material.fluxDensityAt(turns * amps / (2 * Math.PI * r));
         }
-        return turns * half * sum;
+        return Require.result("flux linkage", turns * half * sum);
     }
 
     /** The flux density at the inner edge of the core, the highest in the section. */

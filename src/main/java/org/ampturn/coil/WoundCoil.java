@@ -38,8 +38,8 @@ public final class WoundCoil implements Coil {
      * for copper).
      */
     public static WoundCoil of(Winding winding, MagneticCircuit circuit) {
-        if (winding == null) throw new IllegalArgumentException("winding is missing (null)");
-        if (circuit == null) throw new IllegalArgumentException("magnetic circuit is missing (null)");
+        if (winding == null) throw Require.fail("winding is missing (null)");
+        if (circuit == null) throw Require.fail("magnetic circuit is missing (null)");
         return new WoundCoil(winding.turns(), winding.resistanceAt(org.ampturn.material.Conductor.T20), winding, circuit, org.ampturn.material.Conductor.T20);
     }
 
@@ -50,9 +50,9 @@ public final class WoundCoil implements Coil {
 
     /** {@code turns} turns of copper of {@code resistance20} (at 20 °C) on {@code circuit}. */
     public static WoundCoil of(int turns, Quantity resistance20, MagneticCircuit circuit) {
-        Require.positive("turns", turns);
+        Require.turns("turns", turns);
         double r = Require.positive("resistance at 20 °C", resistance20, Dimension.RESISTANCE);
-        if (circuit == null) throw new IllegalArgumentException("magnetic circuit is missing (null)");
+        if (circuit == null) throw Require.fail("magnetic circuit is missing (null)");
         return new WoundCoil(turns, r, null, circuit, org.ampturn.material.Conductor.T20);
     }
 
@@ -87,7 +87,9 @@ public final class WoundCoil implements Coil {
 
     /** L/R at the coil's temperature (small-signal L). */
     public Quantity timeConstant() {
-        return Quantity.of(inductance().si() / resistanceAt(kelvin), Dimension.TIME);
+        double r = resistanceAt(kelvin);
+        if (!(r > 0)) throw new IllegalStateException("the time constant L/R is infinite: the coil has no resistance");
+        return Quantity.of(Require.result("time constant L/R", inductance().si() / r), Dimension.TIME);
     }
 
     /** N·i. */
@@ -113,7 +115,7 @@ public final class WoundCoil implements Coil {
     /** Copper loss i²R at the coil's temperature. */
     public Quantity copperLoss(Quantity current) {
         double i = Require.si("current", current, Dimension.CURRENT);
-        return Quantity.of(i * i * resistanceAt(kelvin), Dimension.POWER);
+        return Quantity.of(Require.result("copper loss I²R", i * i * resistanceAt(kelvin)), Dimension.POWER);
     }
 
     /** The saturation check of the core for this coil's turns. */
@@ -130,36 +132,47 @@ public final class WoundCoil implements Coil {
 
     @Override
     public double fluxLinkageAt(double amps) {
-        return turns * circuit.fluxAt(turns * amps);
+        Require.finite("current (A)", amps);
+        return Require.result("flux linkage", turns * circuit.fluxAt(turns * amps));
     }
 
     @Override
     public double currentAt(double weberTurns) {
-        return circuit.mmfAt(weberTurns / turns) / turns;
+        Require.finite("flux linkage (Wb)", weberTurns);
+        return Require.result("current", circuit.mmfAt(weberTurns / turns) / turns);
     }
 
     @Override
     public double incrementalInductanceAt(double amps) {
-        if (isLinear()) return turns * (double) turns / circuit.reluctanceSI();
+        Require.finite("current (A)", amps);
+        if (isLinear()) return Require.result("incremental inductance", turns * (double) turns / circuit.reluctanceSI());
         // step: relative to the current, floored at the current that drives 0.1 T through the effective area
         double floor = 0.1 * circuit.effectiveArea().si() * circuit.reluctanceSI() / turns;
         double h = 1e-5 * Math.max(Math.abs(amps), floor);
-        return (fluxLinkageAt(amps + h) - fluxLinkageAt(amps - h)) / (2 * h);
+        return Require.result("incremental inductance", (fluxLinkageAt(amps + h) - fluxLinkageAt(amps - h)) / (2 * h));
     }
 
     @Override
     public double resistanceAt(double k) {
-        if (winding != null) return winding.resistanceAt(k);
-        return r20 * org.ampturn.material.Conductor.COPPER.resistanceRatioAt(k);
+        Require.finite("temperature (K)", k);
+        if (winding != null) return Require.result("resistance", winding.resistanceAt(k));
+        return Require.result("resistance", r20 * org.ampturn.material.Conductor.COPPER.resistanceRatioAt(k));
     }
 
     /** Stored energy (J) at current i (A): λi − ∫0^i λ di', the integral by Commons Math's iterative Gauss-Legendre quadrature (relative accuracy 1e-11). */
     public double storedEnergyAt(double amps) {
-        if (isLinear()) return 0.5 * inductance().si() * amps * amps;
-        if (amps == 0) return 0;
+        Require.finite("current (A)", amps);
+        if (isLinear()) return Require.result("stored energy", 0.5 * inductance().si() * amps * amps);
+        if (amps == 0) return Require.result("stored energy", 0);
         var quad = new org.apache.commons.math3.analysis.integration.IterativeLegendreGaussIntegrator(16, 1e-11, 1e-300);
-        double coenergy = quad.integrate(Integer.MAX_VALUE, this::fluxLinkageAt, 0, amps);
-        return fluxLinkageAt(amps) * amps - coenergy;
+        double coenergy;
+        try {
+            coenergy = quad.integrate(1_000_000, this::fluxLinkageAt, 0, amps);
+        } catch (org.apache.commons.math3.exception.MathIllegalStateException e) {
+            throw Require.fail("the stored energy at " + Quantity.of(amps, Dimension.CURRENT)
+                    + " did not converge in 1000000 evaluations: " + e.getMessage(), e);
+        }
+        return Require.result("stored energy", fluxLinkageAt(amps) * amps - coenergy);
     }
 
     @Override
@@ -173,9 +186,7 @@ public final class WoundCoil implements Coil {
     }
 
     private static double kelvin(Quantity t) {
-        double k = Require.si("temperature", t, Dimension.TEMPERATURE);
-        if (!(k > 0)) throw new IllegalArgumentException("temperature must be above absolute zero, got " + t);
-        return k;
+        return org.ampturn.material.Conductor.kelvin("temperature", t);
     }
 
     @Override

@@ -8,7 +8,10 @@
  * kernels take and return SI doubles and do not allocate. Objects are immutable, built by
  * {@code of}/{@code singleLayer}/{@code rectangular} factories and changed by {@code with...}
  * copies. Null arguments are errors; every bad argument fails at the door with a message naming
- * the parameter, its value and the valid range.
+ * the parameter, its value and the valid range (through {@link org.ampturn.units.Require}: lengths
+ * 1 nm to 10 km, 1 to 10 000 000 turns). The kernels refuse NaN and infinities too, and fail rather
+ * than return NaN or ∞ when their arguments leave the model's range; the AGM loops have an
+ * iteration cap, and filament sums a work cap and an interrupt poll.
  *
  * <p>Sources (each class names the formula it uses and its range): Maxwell, Treatise on Electricity
  * and Magnetism, 1873; Nagaoka 1909; Rosa, Bull. Bureau of Standards 2, 1906; Rosa and Grover,

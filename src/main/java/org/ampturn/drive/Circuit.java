@@ -50,36 +50,39 @@ public final class Circuit {
 
     /** The switch opens for good at {@code time}, into the clamp given by {@link #clamp(Clamp)}. */
     public Circuit offAt(Quantity time) {
-        double t = Require.nonNegative("off time", time, Dimension.TIME);
+        double t = Require.inRange("off time", time, Dimension.TIME, 0, MAX_DURATION);
         return new Circuit(drive, coil, armature, clamp, t, samples, relTol, numeric);
     }
 
     /** The clamp that carries the current whenever the switch is open. */
     public Circuit clamp(Clamp c) {
-        if (c == null) throw new IllegalArgumentException("clamp is missing (null); use Clamp.none(V(..)) for none");
+        if (c == null) throw Require.fail("clamp is missing (null); use Clamp.none(V(..)) for none");
         return new Circuit(drive, coil, armature, c, offAt, samples, relTol, numeric);
     }
 
     /** The same circuit with the coil at a temperature (its resistance changes). */
     public Circuit at(Quantity temperature) {
-        Require.si("coil temperature", temperature, Dimension.TEMPERATURE);
+        Require.absoluteTemperature("coil temperature", temperature);
         if (!temperature.isAbsoluteTemperature()) {
-            throw new IllegalArgumentException("coil temperature must be an absolute temperature such as degC(80), got " + temperature);
+            throw Require.fail("coil temperature must be an absolute temperature such as degC(80), got " + temperature);
         }
         return coil != null
                 ? new Circuit(drive, coil.atTemperature(temperature), null, clamp, offAt, samples, relTol, numeric)
                 : new Circuit(drive, null, armature.atTemperature(temperature), clamp, offAt, samples, relTol, numeric);
     }
 
+    /** Longest run solved (s): a day. */
+    public static final double MAX_DURATION = 86_400;
+
     /** Number of evenly spaced output samples, from t = 0 to the end (at least 2). */
     public Circuit samples(int n) {
-        if (n < 2 || n > 20_000_000) throw new IllegalArgumentException("samples (" + n + ") must be between 2 and 20000000");
+        Require.between("samples", n, 2, 20_000_000);
         return new Circuit(drive, coil, armature, clamp, offAt, n, relTol, numeric);
     }
 
     /** Relative tolerance of the adaptive integrator (1e-12 to 1e-3). */
     public Circuit tolerance(double rtol) {
-        if (!(rtol >= 1e-12 && rtol <= 1e-3)) throw new IllegalArgumentException("tolerance (" + rtol + ") must be between 1e-12 and 1e-3");
+        Require.between("tolerance", rtol, 1e-12, 1e-3);
         return new Circuit(drive, coil, armature, clamp, offAt, samples, rtol, numeric);
     }
 
@@ -93,8 +96,8 @@ public final class Circuit {
 
     /** Solves the transient from t = 0 (switch closes, coil at rest) to {@code duration}. */
     public Transient simulate(Quantity duration) {
-        double end = Require.si("duration", duration, Dimension.TIME);
-        if (!(end > 0)) throw new IllegalArgumentException("duration must be greater than zero, got " + duration);
+        double end = Require.inRange("duration", duration, Dimension.TIME, 0, MAX_DURATION);
+        if (!(end > 0)) throw Require.fail("duration must be greater than zero, got " + duration);
         return new Solver(this, end).run();
     }
 

@@ -47,7 +47,7 @@ public final class Clamp {
 
     /** No clamp: the switch avalanches at its rated breakdown voltage and absorbs the coil's energy. */
     public static Clamp none(Quantity avalancheVoltage) {
-        double v = Require.positive("switch avalanche voltage", avalancheVoltage, Dimension.VOLTAGE);
+        double v = Require.positive("switch avalanche voltage", avalancheVoltage, Dimension.VOLTAGE, Drive.MAX_VOLTS);
         return new Clamp(Kind.NONE, v, 0, 0, 0);
     }
 
@@ -58,7 +58,7 @@ public final class Clamp {
 
     /** A freewheel diode across the coil with the given forward drop (0 V for an ideal diode). */
     public static Clamp diode(Quantity forwardDrop) {
-        double vf = Require.nonNegative("diode forward drop", forwardDrop, Dimension.VOLTAGE);
+        double vf = Require.nonNegative("diode forward drop", forwardDrop, Dimension.VOLTAGE, Drive.MAX_VOLTS);
         return new Clamp(Kind.DIODE, vf, 0, 0, vf);
     }
 
@@ -69,8 +69,8 @@ public final class Clamp {
 
     /** A diode in series with a zener across the coil: the coil sees −(Vz + Vf). */
     public static Clamp zener(Quantity zenerVoltage, Quantity forwardDrop) {
-        double vz = Require.positive("zener voltage", zenerVoltage, Dimension.VOLTAGE);
-        double vf = Require.nonNegative("diode forward drop", forwardDrop, Dimension.VOLTAGE);
+        double vz = Require.positive("zener voltage", zenerVoltage, Dimension.VOLTAGE, Drive.MAX_VOLTS);
+        double vf = Require.nonNegative("diode forward drop", forwardDrop, Dimension.VOLTAGE, Drive.MAX_VOLTS);
         return new Clamp(Kind.ZENER, vz + vf, 0, 0, vf);
     }
 
@@ -81,8 +81,8 @@ public final class Clamp {
 
     /** A resistor with a blocking diode of the given drop across the coil. */
     public static Clamp resistor(Quantity resistance, Quantity forwardDrop) {
-        double rr = Require.positive("clamp resistance", resistance, Dimension.RESISTANCE);
-        double vf = Require.nonNegative("diode forward drop", forwardDrop, Dimension.VOLTAGE);
+        double rr = Require.positive("clamp resistance", resistance, Dimension.RESISTANCE, Drive.MAX_OHMS);
+        double vf = Require.nonNegative("diode forward drop", forwardDrop, Dimension.VOLTAGE, Drive.MAX_VOLTS);
         return new Clamp(Kind.RESISTOR, vf, rr, 0, vf);
     }
 
@@ -93,15 +93,15 @@ public final class Clamp {
 
     /** A TVS diode across the switch: it holds the switch at {@code Vc + Rd·i} while it conducts. */
     public static Clamp tvs(Quantity clampVoltage, Quantity dynamicResistance) {
-        double v = Require.positive("TVS clamp voltage", clampVoltage, Dimension.VOLTAGE);
-        double rd = Require.nonNegative("TVS dynamic resistance", dynamicResistance, Dimension.RESISTANCE);
+        double v = Require.positive("TVS clamp voltage", clampVoltage, Dimension.VOLTAGE, Drive.MAX_VOLTS);
+        double rd = Require.nonNegative("TVS dynamic resistance", dynamicResistance, Dimension.RESISTANCE, Drive.MAX_OHMS);
         return new Clamp(Kind.TVS, v, rd, 0, 0);
     }
 
     /** A series resistor and capacitor across the switch. */
     public static Clamp snubber(Quantity resistance, Quantity capacitance) {
-        double rr = Require.positive("snubber resistance", resistance, Dimension.RESISTANCE);
-        double cc = Require.positive("snubber capacitance", capacitance, Dimension.CAPACITANCE);
+        double rr = Require.positive("snubber resistance", resistance, Dimension.RESISTANCE, Drive.MAX_OHMS);
+        double cc = Require.positive("snubber capacitance", capacitance, Dimension.CAPACITANCE, 1e3);
         return new Clamp(Kind.SNUBBER, 0, rr, cc, 0);
     }
 

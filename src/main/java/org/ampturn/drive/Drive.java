@@ -23,6 +23,22 @@ public final class Drive {
     /** How peak-and-hold regulates the hold current. */
     public enum Regulation { HYSTERETIC, PWM }
 
+    /** Highest supply voltage accepted (V). */
+    public static final double MAX_VOLTS = 1e6;
+    /** Highest current level accepted (A). */
+    public static final double MAX_AMPS = 1e6;
+    /** Highest switching frequency accepted (Hz). */
+    public static final double MAX_HZ = 1e9;
+    /** Highest source or switch resistance accepted (Ω). */
+    public static final double MAX_OHMS = 1e9;
+    /** Narrowest hysteresis band, as a fraction of the hold current. */
+    public static final double MIN_BAND = 1e-4;
+
+    private static Quantity positive(Quantity supply) {
+        Require.positive("supply voltage", supply, Dimension.VOLTAGE);
+        return supply;
+    }
+
     final Scheme scheme;
     final double volts;
     final double sourceOhms;
@@ -52,15 +68,15 @@ public final class Drive {
 
     /** A DC supply switched on at t = 0. */
     public static Drive dc(Quantity supply) {
-        double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
+        double v = Require.inRange("supply voltage", positive(supply), Dimension.VOLTAGE, 1e-6, MAX_VOLTS);
         return new Drive(Scheme.DC, v, 0, 0, 0, 1, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN);
     }
 
     /** PWM: the switch is on for {@code duty / frequency} at the start of every period, from t = 0. */
     public static Drive pwm(Quantity supply, Quantity frequency, double duty) {
-        double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
-        double f = Require.positive("PWM frequency", frequency, Dimension.FREQUENCY);
-        if (!(duty >= 1e-4 && duty <= 1)) throw new IllegalArgumentException("PWM duty (" + duty + ") must be between 0.0001 and 1");
+        double v = Require.inRange("supply voltage", positive(supply), Dimension.VOLTAGE, 1e-6, MAX_VOLTS);
+        double f = Require.inRange("PWM frequency", frequency, Dimension.FREQUENCY, 1e-3, MAX_HZ);
+        Require.between("PWM duty", duty, 1e-4, 1);
         return new Drive(Scheme.PWM, v, 0, 0, f, duty, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN);
     }
 
@@ -70,22 +86,22 @@ public final class Drive {
      * unless {@link #withHysteresis} or {@link #withHoldPwm} says otherwise.
      */
     public static Drive peakAndHold(Quantity supply, Quantity pullIn, Quantity hold) {
-        double v = Require.positive("supply voltage", supply, Dimension.VOLTAGE);
-        double ip = Require.positive("pull-in current", pullIn, Dimension.CURRENT);
-        double ih = Require.positive("hold current", hold, Dimension.CURRENT);
-        if (!(ih < ip)) throw new IllegalArgumentException("hold current (" + hold + ") must be below the pull-in current (" + pullIn + ")");
+        double v = Require.inRange("supply voltage", positive(supply), Dimension.VOLTAGE, 1e-6, MAX_VOLTS);
+        double ip = Require.inRange("pull-in current", pullIn, Dimension.CURRENT, 1e-9, MAX_AMPS);
+        double ih = Require.inRange("hold current", hold, Dimension.CURRENT, 1e-9, MAX_AMPS);
+        if (!(ih < ip)) throw Require.fail("hold current (" + hold + ") must be below the pull-in current (" + pullIn + ")");
         return new Drive(Scheme.PEAK_AND_HOLD, v, 0, 0, 0, 1, ip, ih, 0.2 * ih, Regulation.HYSTERETIC, Double.NaN);
     }
 
     /** The same drive with a source (supply and wiring) resistance. */
     public Drive withSourceResistance(Quantity r) {
-        double rs = Require.nonNegative("source resistance", r, Dimension.RESISTANCE);
+        double rs = Require.inRange("source resistance", r, Dimension.RESISTANCE, 0, MAX_OHMS);
         return new Drive(scheme, volts, rs, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds);
     }
 
     /** The same drive with a switch of the given on-resistance. */
     public Drive withSwitchResistance(Quantity r) {
-        double ron = Require.nonNegative("switch on-resistance", r, Dimension.RESISTANCE);
+        double ron = Require.inRange("switch on-resistance", r, Dimension.RESISTANCE, 0, MAX_OHMS);
         return new Drive(scheme, volts, sourceOhms, ron, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds);
     }
 
@@ -93,8 +109,12 @@ public final class Drive {
     public Drive withHysteresis(Quantity band) {
         requireScheme(Scheme.PEAK_AND_HOLD, "withHysteresis");
         double b = Require.positive("hysteresis band", band, Dimension.CURRENT);
+        if (!(b >= MIN_BAND * holdAmps)) {
+            throw Require.fail("hysteresis band (" + band + ") must be at least " + Quantity.of(MIN_BAND * holdAmps, Dimension.CURRENT)
+                    + " (1/10000 of the hold current): narrower, the switching would never end");
+        }
         if (!(b < 2 * holdAmps)) {
-            throw new IllegalArgumentException("hysteresis band (" + band + ") must be below twice the hold current ("
+            throw Require.fail("hysteresis band (" + band + ") must be below twice the hold current ("
                     + Quantity.of(2 * holdAmps, Dimension.CURRENT) + ")");
         }
         return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, b, Regulation.HYSTERETIC, peakSeconds);
@@ -106,7 +126,7 @@ public final class Drive {
      */
     public Drive withHoldPwm(Quantity frequency) {
         requireScheme(Scheme.PEAK_AND_HOLD, "withHoldPwm");
-        double f = Require.positive("hold PWM frequency", frequency, Dimension.FREQUENCY);
+        double f = Require.inRange("hold PWM frequency", frequency, Dimension.FREQUENCY, 1e-3, MAX_HZ);
         return new Drive(scheme, volts, sourceOhms, switchOhms, f, duty, peakAmps, holdAmps, band, Regulation.PWM, peakSeconds);
     }
 
@@ -120,7 +140,7 @@ public final class Drive {
      */
     public Drive withPeakTime(Quantity peakTime) {
         requireScheme(Scheme.PEAK_AND_HOLD, "withPeakTime");
-        double tp = Require.positive("peak time", peakTime, Dimension.TIME);
+        double tp = Require.inRange("peak time", peakTime, Dimension.TIME, 1e-12, Circuit.MAX_DURATION);
         return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, tp);
     }
 
@@ -135,13 +155,13 @@ public final class Drive {
 
     /** This drive connected to a coil; the switch closes at t = 0. */
     public Circuit into(Coil coil) {
-        if (coil == null) throw new IllegalArgumentException("coil is missing (null)");
+        if (coil == null) throw Require.fail("coil is missing (null)");
         return Circuit.of(this, coil);
     }
 
     /** This drive connected to a moving-armature actuator; the switch closes at t = 0. */
     public Circuit into(Armature actuator) {
-        if (actuator == null) throw new IllegalArgumentException("actuator is missing (null)");
+        if (actuator == null) throw Require.fail("actuator is missing (null)");
         return Circuit.of(this, actuator);
     }
 

@@ -6,6 +6,10 @@ import org.ampturn.coil.Coil;
 abstract class Load {
     abstract double currentAt(double lambda, double x);
 
+    // currentAt gives NaN where the model refuses the flux linkage (outside its range): a trial step
+    // of the integrator may go there, and the solver rejects such a step or reports where the model
+    // gave no current. No lambda in this path: it runs at every derivative evaluation.
+
     abstract double fieldEnergyAt(double lambda, double x);
 
     abstract double forceAt(double lambda, double x);
@@ -53,7 +57,13 @@ abstract class Load {
             this.linear = coil.isLinear();
         }
 
-        @Override double currentAt(double lambda, double x) { return coil.currentAt(lambda); }
+        @Override double currentAt(double lambda, double x) {
+            try {
+                return coil.currentAt(lambda);
+            } catch (IllegalArgumentException outsideTheModel) {
+                return Double.NaN; // see current(): the solver rejects the step or reports where
+            }
+        }
 
         @Override
         double fieldEnergyAt(double lambda, double x) {
@@ -106,7 +116,13 @@ abstract class Load {
             this.mass = a.massKg();
         }
 
-        @Override double currentAt(double lambda, double x) { return a.currentAt(lambda, x); }
+        @Override double currentAt(double lambda, double x) {
+            try {
+                return a.currentAt(lambda, x);
+            } catch (IllegalArgumentException outsideTheModel) {
+                return Double.NaN;
+            }
+        }
         @Override double fieldEnergyAt(double lambda, double x) { return a.fieldEnergyAt(lambda, x); }
         @Override double forceAt(double lambda, double x) { return a.forceAt(lambda, x); }
         @Override double restoringForceAt(double x, double v) { return a.restoringForceAt(x, v); }

@@ -29,16 +29,19 @@ public final class Signal {
 
     /** A signal from SI samples; the arrays are copied. Times must be finite and non-decreasing. */
     public static Signal of(String name, Dimension dimension, double[] times, double[] values) {
-        if (name == null || name.isBlank()) throw new IllegalArgumentException("a signal needs a name");
-        if (dimension == null) throw new IllegalArgumentException("signal " + name + " needs a dimension");
+        if (name == null || name.isBlank()) throw Require.fail("a signal needs a name");
+        if (dimension == null) throw Require.fail("signal " + name + " needs a dimension");
+        Require.present("times of signal " + name, times);
+        Require.present("values of signal " + name, values);
         if (times.length != values.length) {
-            throw new IllegalArgumentException("signal " + name + ": " + times.length + " times but " + values.length + " values");
+            throw Require.fail("signal " + name + ": " + times.length + " times but " + values.length + " values");
         }
-        if (times.length == 0) throw new IllegalArgumentException("signal " + name + " has no samples");
+        if (times.length == 0) throw Require.fail("signal " + name + " has no samples");
         for (int k = 0; k < times.length; k++) {
             if (!Double.isFinite(times[k]) || (k > 0 && times[k] < times[k - 1])) {
-                throw new IllegalArgumentException("signal " + name + ": time " + k + " (" + times[k] + " s) is not finite and non-decreasing");
+                throw Require.fail("signal " + name + ": time " + k + " (" + times[k] + " s) is not finite and non-decreasing");
             }
+            if (!Double.isFinite(values[k])) throw Require.fail("signal " + name + ": value " + k + " (" + values[k] + ") is not finite");
         }
         return new Signal(name, dimension, times.clone(), values.clone());
     }
@@ -65,21 +68,23 @@ public final class Signal {
     }
 
     /** SI kernel of {@link #at(Quantity)}. */
-    public double valueAt(double seconds) {
+    public double valueAt(double time) {
+        Require.finite("time (s)", time);
+        double seconds = time + 0.0; // -0.0 is 0.0 here: the binary search tells them apart
         if (!(seconds >= times[0] && seconds <= times[times.length - 1])) {
-            throw new IllegalArgumentException("time (" + Quantity.of(seconds, Dimension.TIME) + ") must be within the signal "
+            throw Require.fail("time (" + Quantity.of(seconds, Dimension.TIME) + ") must be within the signal "
                     + name + ", from " + start() + " to " + end());
         }
         int k = Arrays.binarySearch(times, seconds);
         if (k >= 0) {
             // on a duplicated time (a jump) take the value after the jump
             while (k + 1 < times.length && times[k + 1] == seconds) k++;
-            return values[k];
+            return Require.result("value", values[k]);
         }
         int hi = -k - 1;
         int lo = hi - 1;
         double f = (seconds - times[lo]) / (times[hi] - times[lo]);
-        return values[lo] + f * (values[hi] - values[lo]);
+        return Require.result("value", values[lo] + f * (values[hi] - values[lo]));
     }
 
     /** The value at a time, interpolated linearly between samples. */
@@ -120,7 +125,7 @@ public final class Signal {
     public Quantity mean(Quantity from, Quantity to) {
         double a = Require.si("from", from, Dimension.TIME);
         double b = Require.si("to", to, Dimension.TIME);
-        if (!(b > a)) throw new IllegalArgumentException("to (" + to + ") must be after from (" + from + ")");
+        if (!(b > a)) throw Require.fail("to (" + to + ") must be after from (" + from + ")");
         valueAt(a);
         valueAt(b);
         return q(meanBetween(a, b, false));
@@ -128,7 +133,7 @@ public final class Signal {
 
     /** Root mean square over the whole span (trapezoidal rule on the squared samples). */
     public Quantity rms() {
-        return q(Math.sqrt(meanBetween(times[0], times[times.length - 1], true)));
+        return q(Require.result("rms", Math.sqrt(meanBetween(times[0], times[times.length - 1], true))));
     }
 
     private double meanBetween(double a, double b, boolean squared) {

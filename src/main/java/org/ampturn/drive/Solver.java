@@ -1,5 +1,6 @@
 package org.ampturn.drive;
 
+import org.ampturn.units.Require;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.CancellationException;
@@ -26,6 +27,9 @@ final class Solver {
     // outputs of eval()
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
             O_F = 8, O_DVC = 9, O_ACC = 10, O_N = 11;
+
+    /** Most switching segments (each PWM edge, comparator edge or event starts one) a run may take. */
+    static final long MAX_SEGMENTS = 20_000_000L;
 
     /** A current beyond this (A) on an accepted step is taken as a diverging solution. */
     static final double DIVERGED_AMPS = 1e7;
@@ -105,6 +109,8 @@ final class Solver {
         double rTot = rs + ron + rc;
         this.finalCurrent = rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
         validate();
+        // the recorder's arrays and the transient's copies of them
+        org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0)));
         this.rec = new Recorder(n, moves, snub);
     }
 
@@ -115,36 +121,36 @@ final class Solver {
 
     private void validate() {
         if (!(load.inductance() > 0)) {
-            throw new IllegalArgumentException("the coil's inductance must be greater than zero, got "
+            throw Require.fail("the coil's inductance must be greater than zero, got "
                     + q(load.inductance(), Dimension.INDUCTANCE) + ": with no inductance there is no transient to solve");
         }
-        if (!(rc >= 0)) throw new IllegalArgumentException("the coil's resistance must be zero or more, got " + q(rc, Dimension.RESISTANCE));
+        if (!(rc >= 0)) throw Require.fail("the coil's resistance must be zero or more, got " + q(rc, Dimension.RESISTANCE));
         if (!Double.isNaN(offAt) && offAt > tEnd) {
-            throw new IllegalArgumentException("off time (" + sec(offAt) + ") is after the end of the run (" + sec(tEnd)
+            throw Require.fail("off time (" + sec(offAt) + ") is after the end of the run (" + sec(tEnd)
                     + "); simulate for longer or switch off earlier");
         }
         boolean opens = !Double.isNaN(offAt) || drive.scheme != Drive.Scheme.DC;
         if (opens && clamp == null) {
-            throw new IllegalArgumentException("the switch opens during this run but no clamp was given: add .clamp(Clamp.diode()), "
+            throw Require.fail("the switch opens during this run but no clamp was given: add .clamp(Clamp.diode()), "
                     + "or Clamp.none(V(..)) to let the switch avalanche");
         }
         if (clamp != null && clamp.placement() == Clamp.Placement.ACROSS_SWITCH && !(v0 > vs)) {
-            throw new IllegalArgumentException("clamp voltage (" + volt(v0) + ") of the " + clamp + " must be above the supply ("
+            throw Require.fail("clamp voltage (" + volt(v0) + ") of the " + clamp + " must be above the supply ("
                     + volt(vs) + "): it would conduct with the switch open and the coil would never switch off");
         }
         if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && !Double.isNaN(drive.peakSeconds)
                 && drive.regulation == Drive.Regulation.HYSTERETIC && !(drive.band < drive.peakAmps)) {
-            throw new IllegalArgumentException("hysteresis band (" + amp(drive.band) + ") must be below the pull-in current ("
+            throw Require.fail("hysteresis band (" + amp(drive.band) + ") must be below the pull-in current ("
                     + amp(drive.peakAmps) + "): with a peak time the current is limited between the two");
         }
         if (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && Double.isNaN(drive.peakSeconds)) {
             if (!(drive.peakAmps < finalCurrent)) {
-                throw new IllegalArgumentException("pull-in current (" + amp(drive.peakAmps) + ") is never reached: the steady current is V/R = "
+                throw Require.fail("pull-in current (" + amp(drive.peakAmps) + ") is never reached: the steady current is V/R = "
                         + amp(finalCurrent));
             }
         }
         if (drive.scheme == Drive.Scheme.PWM && drive.frequency * tEnd > 5e6) {
-            throw new IllegalArgumentException("the run spans " + Math.round(drive.frequency * tEnd) + " PWM periods; at most 5000000 are solved");
+            throw Require.fail("the run spans " + Math.round(drive.frequency * tEnd) + " PWM periods; at most 5000000 are solved");
         }
         if (drive.scheme == Drive.Scheme.PWM && n / (drive.frequency * tEnd) < 10) {
             notes.add(String.format(java.util.Locale.ROOT, "samples are coarse for the PWM period (%.1f a period): curves alias, "
@@ -593,11 +599,16 @@ final class Solver {
         notes.add(closedForm ? "solved in closed form (linear coil, piecewise-linear circuit)"
                 : "solved with " + ((OdeStepper) stepper).describe());
         int stuck = 0;
+        long segments = 0;
         double lastT = -1;
         int[] fired = new int[1];
         while (t < tEnd) {
             if (Thread.currentThread().isInterrupted()) {
                 throw new CancellationException("transient stopped at t = " + sec(t) + ": the thread was interrupted");
+            }
+            if (++segments > MAX_SEGMENTS) {
+                throw new TransientException("the run needs over " + MAX_SEGMENTS + " switching segments (at t = " + sec(t) + " of " + sec(tEnd)
+                        + "); widen the hysteresis band, lower the PWM frequency or shorten the run");
             }
             double t1 = nextScheduled();
             List<Ev> evs = events();

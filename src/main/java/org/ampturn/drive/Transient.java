@@ -150,7 +150,7 @@ public final class Transient {
             case "drive": case "switch": case "source": return pDrive;
             case "clamp": return pClamp;
             case "mechanical": return pMech;
-            default: throw new IllegalArgumentException("power (\"" + which + "\") must be one of supply, coil, drive, clamp, mechanical");
+            default: throw new IllegalArgumentException("power (" + org.ampturn.units.Require.quote(which) + ") must be one of supply, coil, drive, clamp, mechanical");
         }
     }
 

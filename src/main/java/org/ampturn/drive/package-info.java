@@ -11,7 +11,10 @@
  * in closed form (first-order RL response, Hayt, Kemmerly and Durbin, Engineering Circuit Analysis,
  * 8th ed., ch. 8), the rest with Commons Math's Dormand-Prince 8(5,3) integrator (Hairer, Nørsett and
  * Wanner, Solving ODEs I, II.5). Loops poll the thread's interrupt flag and stop with a
- * {@link java.util.concurrent.CancellationException}. Equations and assumptions: lib-docs/drives.md,
+ * {@link java.util.concurrent.CancellationException}. Levels are checked against the drive's range
+ * (voltages to 1 MV, currents 1 nA to 1 MA, frequencies to 1 GHz, a hysteresis band of at least
+ * 1/10 000 of the hold current), a run's samples against the memory left and its switching segments
+ * against a cap of 20 000 000. Equations and assumptions: lib-docs/drives.md,
  * clamps.md, transients.md.
  */
 package org.ampturn.drive;

@@ -54,7 +54,7 @@ public final class Conductor {
      * @param density mass density (kg/m³)
      */
     public static Conductor of(String name, Quantity resistivity20, Quantity alpha20, Quantity density) {
-        Objects.requireNonNull(name, "name");
+        Require.present("name", name);
         double r = Require.positive("resistivity at 20 °C", resistivity20, Dimension.RESISTIVITY);
         double a = Require.nonNegative("temperature coefficient at 20 °C", alpha20, Dimension.PER_KELVIN);
         double d = Require.positive("density", density, Dimension.DENSITY);
@@ -78,12 +78,14 @@ public final class Conductor {
 
     /** Kernel: resistivity (Ω·m) at a temperature (K). */
     public double resistivityAt(double kelvin) {
-        return rho20 * (1 + alpha20 * (kelvin - T20));
+        Require.between("temperature", kelvin, Dimension.TEMPERATURE, 1e-3, Require.MAX_KELVIN);
+        return Require.result("resistivity", rho20 * (1 + alpha20 * (kelvin - T20)));
     }
 
     /** Kernel: R(T)/R(20 °C) = 1 + α20·(T − 20 °C) for a temperature in kelvin. */
     public double resistanceRatioAt(double kelvin) {
-        return 1 + alpha20 * (kelvin - T20);
+        Require.between("temperature", kelvin, Dimension.TEMPERATURE, 1e-3, Require.MAX_KELVIN);
+        return Require.result("resistance ratio", 1 + alpha20 * (kelvin - T20));
     }
 
     /**
@@ -91,7 +93,8 @@ public final class Conductor {
      * the "resistance method" of temperature measurement (IEC 60034-1 uses the same linear law).
      */
     public double temperatureAtResistanceRatio(double ratio) {
-        return T20 + (ratio - 1) / alpha20;
+        Require.between("resistance ratio", ratio, 0, 1e6);
+        return Require.result("temperature at resistance ratio", T20 + (ratio - 1) / alpha20);
     }
 
     /** Kernel: resistivity at 20 °C (Ω·m). */
@@ -103,11 +106,22 @@ public final class Conductor {
     /** Kernel: density (kg/m³). */
     public double densityKgPerM3() { return density; }
 
-    /** A temperature in kelvin from an absolute temperature, checked. */
+    /** Lowest temperature (K) at which the linear law is used: −100 °C. */
+    public static final double LAW_MIN_K = 173.15;
+    /** Highest temperature (K) at which the linear law is used: 400 °C. */
+    public static final double LAW_MAX_K = 673.15;
+
+    /**
+     * A temperature in kelvin at which the linear law is used, checked: from −100 °C to 400 °C. Beyond
+     * these the law is off by more than a few percent (from memory; near −234.5 °C it gives copper no
+     * resistance at all), so a temperature outside them is refused rather than answered wrongly.
+     */
+    public static double kelvin(String name, Quantity t) {
+        return Require.absoluteTemperature(name, t, LAW_MIN_K, LAW_MAX_K, "the linear resistance law");
+    }
+
     static double kelvin(Quantity t) {
-        double k = Require.si("temperature", t, Dimension.TEMPERATURE);
-        if (!(k > 0)) throw new IllegalArgumentException("temperature must be above absolute zero (−273.15 °C), got " + t);
-        return k;
+        return kelvin("temperature", t);
     }
 
     @Override

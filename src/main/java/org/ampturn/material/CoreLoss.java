@@ -121,13 +121,18 @@ public final class CoreLoss {
 
     /** Kernel: Steinmetz loss density (W/m³) at f (Hz) and peak B (T), sinusoidal. */
     public double densitySineAt(double f, double bPeak) {
-        return k * Math.pow(f, alpha) * Math.pow(Math.abs(bPeak), beta);
+        Require.finite("frequency (Hz)", f);
+        Require.finite("b peak", bPeak);
+        return Require.result("density sine", k * Math.pow(f, alpha) * Math.pow(Math.abs(bPeak), beta));
     }
 
     /** Kernel: iGSE loss density (W/m³) of a triangle: f (Hz), swing ΔB (T, peak to peak), duty D in (0, 1). */
     public double densityTriangularAt(double f, double deltaB, double duty) {
-        if (!(duty > 0 && duty < 1)) throw new IllegalArgumentException("duty must be between 0 and 1 (exclusive), got " + duty);
-        return ki * Math.pow(deltaB, beta) * Math.pow(f, alpha) * (Math.pow(duty, 1 - alpha) + Math.pow(1 - duty, 1 - alpha));
+        Require.finite("frequency (Hz)", f);
+        Require.finite("delta b", deltaB);
+        Require.finite("duty", duty);
+        if (!(duty > 0 && duty < 1)) throw Require.fail("duty must be between 0 and 1 (exclusive), got " + duty);
+        return Require.result("density triangular", ki * Math.pow(deltaB, beta) * Math.pow(f, alpha) * (Math.pow(duty, 1 - alpha) + Math.pow(1 - duty, 1 - alpha)));
     }
 
     /**
@@ -138,23 +143,23 @@ public final class CoreLoss {
     public double densityPiecewiseLinearAt(double[] t, double[] b) {
         int n = t.length;
         if (n != b.length || n < 3) {
-            throw new IllegalArgumentException("a piecewise-linear flux needs at least 3 corner points with one B per time, got "
+            throw Require.fail("a piecewise-linear flux needs at least 3 corner points with one B per time, got "
                     + n + " times and " + b.length + " flux densities");
         }
         double period = t[n - 1] - t[0];
-        if (!(period > 0)) throw new IllegalArgumentException("the period t[last] − t[0] must be greater than zero, got " + period + " s");
+        if (!(period > 0)) throw Require.fail("the period t[last] − t[0] must be greater than zero, got " + period + " s");
         if (Math.abs(b[n - 1] - b[0]) > 1e-9 * (Math.abs(b[0]) + 1e-12) + 1e-15) {
-            throw new IllegalArgumentException("the flux must end where it began over one period: b[0] = " + b[0] + " T, b[last] = " + b[n - 1] + " T");
+            throw Require.fail("the flux must end where it began over one period: b[0] = " + b[0] + " T, b[last] = " + b[n - 1] + " T");
         }
         double lo = b[0], hi = b[0];
         for (double v : b) { lo = Math.min(lo, v); hi = Math.max(hi, v); }
         double sum = 0;
         for (int j = 1; j < n; j++) {
             double dt = t[j] - t[j - 1];
-            if (!(dt >= 0)) throw new IllegalArgumentException("times must not decrease: t[" + j + "] = " + t[j] + " s after " + t[j - 1] + " s");
+            if (!(dt >= 0)) throw Require.fail("times must not decrease: t[" + j + "] = " + t[j] + " s after " + t[j - 1] + " s");
             double db = Math.abs(b[j] - b[j - 1]);
             if (db == 0) continue;
-            if (dt == 0) throw new IllegalArgumentException("a flux step with no time (at t = " + t[j] + " s) has infinite dB/dt");
+            if (dt == 0) throw Require.fail("a flux step with no time (at t = " + t[j] + " s) has infinite dB/dt");
             sum += Math.pow(db, alpha) * Math.pow(dt, 1 - alpha);
         }
         return ki * Math.pow(hi - lo, beta - alpha) * sum / period;

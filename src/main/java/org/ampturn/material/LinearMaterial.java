@@ -1,5 +1,6 @@
 package org.ampturn.material;
 
+import org.ampturn.units.Require;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
 
@@ -18,9 +19,18 @@ final class LinearMaterial implements MagneticMaterial {
     @Override public String name() { return name; }
     @Override public double relativePermeability() { return mur; }
     @Override public Quantity saturationFluxDensity() { return Quantity.of(bsat, Dimension.FLUX_DENSITY); }
-    @Override public double fluxDensityAt(double h) { return MU0 * mur * h; }
-    @Override public double fieldAt(double b) { return b / (MU0 * mur); }
-    @Override public double incrementalPermeabilityAt(double h) { return mur; }
+    @Override public double fluxDensityAt(double h) {
+        Require.finite("field strength (A/m)", h);
+        return Require.result("flux density", MU0 * mur * h);
+    }
+    @Override public double fieldAt(double b) {
+        Require.finite("flux density (T)", b);
+        return Require.result("field", b / (MU0 * mur));
+    }
+    @Override public double incrementalPermeabilityAt(double h) {
+        Require.finite("field strength (A/m)", h);
+        return Require.result("incremental permeability", mur);
+    }
 
     @Override
     public String toString() {

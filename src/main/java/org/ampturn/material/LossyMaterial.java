@@ -1,5 +1,6 @@
 package org.ampturn.material;
 
+import org.ampturn.units.Require;
 import java.util.Optional;
 import org.ampturn.units.Quantity;
 
@@ -16,10 +17,19 @@ final class LossyMaterial implements MagneticMaterial {
     @Override public String name() { return base.name(); }
     @Override public double relativePermeability() { return base.relativePermeability(); }
     @Override public Quantity saturationFluxDensity() { return base.saturationFluxDensity(); }
-    @Override public double fluxDensityAt(double h) { return base.fluxDensityAt(h); }
-    @Override public double fieldAt(double b) { return base.fieldAt(b); }
+    @Override public double fluxDensityAt(double h) {
+        Require.finite("field strength (A/m)", h);
+        return Require.result("flux density", base.fluxDensityAt(h));
+    }
+    @Override public double fieldAt(double b) {
+        Require.finite("flux density (T)", b);
+        return Require.result("field", base.fieldAt(b));
+    }
     @Override public boolean isLinear() { return base.isLinear(); }
-    @Override public double incrementalPermeabilityAt(double h) { return base.incrementalPermeabilityAt(h); }
+    @Override public double incrementalPermeabilityAt(double h) {
+        Require.finite("field strength (A/m)", h);
+        return Require.result("incremental permeability", base.incrementalPermeabilityAt(h));
+    }
     @Override public Optional<CoreLoss> coreLoss() { return Optional.of(loss); }
 
     @Override

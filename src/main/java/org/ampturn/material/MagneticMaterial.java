@@ -40,6 +40,7 @@ public interface MagneticMaterial {
      */
     static MagneticMaterial linear(String name, double relativePermeability, Quantity saturation) {
         Require.positive("relative permeability", relativePermeability);
+        Require.between("relative permeability", relativePermeability, 1e-3, 1e8);
         double bsat = Require.positive("saturation flux density", saturation, Dimension.FLUX_DENSITY);
         return new LinearMaterial(name, relativePermeability, bsat);
     }
@@ -56,8 +57,10 @@ public interface MagneticMaterial {
 
     /** Amplitude relative permeability B/(μ0·H) at field strength H (A/m); the initial value at H = 0. */
     default double amplitudePermeabilityAt(double fieldAmpsPerMetre) {
-        if (fieldAmpsPerMetre == 0) return relativePermeability();
-        return fluxDensityAt(fieldAmpsPerMetre) / (MU0 * fieldAmpsPerMetre);
+        Require.finite("field strength (A/m)", fieldAmpsPerMetre);
+        // below 1 µA/m B/(μ0 H) is the initial permeability (and the division would underflow)
+        if (Math.abs(fieldAmpsPerMetre) < 1e-6) return Require.result("amplitude permeability", relativePermeability());
+        return Require.result("amplitude permeability", fluxDensityAt(fieldAmpsPerMetre) / (MU0 * fieldAmpsPerMetre));
     }
 
     /** B at a field strength, on the Quantity surface. */
@@ -77,7 +80,7 @@ public interface MagneticMaterial {
 
     /** The same material with a core-loss model, e.g. from datasheet Steinmetz parameters. */
     default MagneticMaterial withCoreLoss(CoreLoss loss) {
-        Objects.requireNonNull(loss, "core loss");
+        Require.present("core loss", loss);
         return new LossyMaterial(this, loss);
     }
 
@@ -89,17 +92,17 @@ public interface MagneticMaterial {
      * @param saturation flux density (T) taken as saturated by the saturation check
      */
     static MagneticMaterial fromTable(String name, double[] fieldAmpsPerMetre, double[] tesla, double saturation) {
-        Objects.requireNonNull(name, "name");
-        Objects.requireNonNull(fieldAmpsPerMetre, "H values");
-        Objects.requireNonNull(tesla, "B values");
+        Require.present("name", name);
+        Require.present("H values", fieldAmpsPerMetre);
+        Require.present("B values", tesla);
         Require.positive("saturation flux density (T)", saturation);
         return new TableMaterial(name, fieldAmpsPerMetre, tesla, saturation);
     }
 
     /** A nonlinear material from a B-H table of quantities (H in A/m or Oe, B in T or G). */
     static MagneticMaterial fromTable(String name, Quantity[] field, Quantity[] fluxDensity, Quantity saturation) {
-        Objects.requireNonNull(field, "H values");
-        Objects.requireNonNull(fluxDensity, "B values");
+        Require.present("H values", field);
+        Require.present("B values", fluxDensity);
         double[] h = new double[field.length];
         double[] b = new double[fluxDensity.length];
         for (int i = 0; i < h.length; i++) h[i] = Require.si("H[" + i + "]", field[i], Dimension.FIELD_STRENGTH);

@@ -1,5 +1,6 @@
 package org.ampturn.material;
 
+import org.ampturn.units.Require;
 import java.util.Locale;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
@@ -26,7 +27,7 @@ final class TableMaterial implements MagneticMaterial {
     TableMaterial(String name, double[] hIn, double[] bIn, double bsat) {
         int n = hIn.length;
         if (n != bIn.length) {
-            throw new IllegalArgumentException("the B-H table needs as many B values as H values, got " + n + " H and " + bIn.length + " B");
+            throw Require.fail("the B-H table needs as many B values as H values, got " + n + " H and " + bIn.length + " B");
         }
         boolean hasOrigin = n > 0 && hIn[0] == 0;
         int off = hasOrigin ? 0 : 1;
@@ -34,22 +35,22 @@ final class TableMaterial implements MagneticMaterial {
         double[] bb = new double[n + off];
         for (int i = 0; i < n; i++) {
             if (!Double.isFinite(hIn[i]) || !Double.isFinite(bIn[i])) {
-                throw new IllegalArgumentException("B-H table point " + i + " must be finite, got H = " + hIn[i] + " A/m, B = " + bIn[i] + " T");
+                throw Require.fail("B-H table point " + i + " must be finite, got H = " + hIn[i] + " A/m, B = " + bIn[i] + " T");
             }
             hh[i + off] = hIn[i];
             bb[i + off] = bIn[i];
         }
         if (hasOrigin && bIn[0] != 0) {
-            throw new IllegalArgumentException("B-H table: B at H = 0 must be 0 (an anhysteretic curve through the origin), got " + bIn[0] + " T");
+            throw Require.fail("B-H table: B at H = 0 must be 0 (an anhysteretic curve through the origin), got " + bIn[0] + " T");
         }
-        if (hh.length < 2) throw new IllegalArgumentException("the B-H table needs at least one point with H > 0, got " + n + " points");
+        if (hh.length < 2) throw Require.fail("the B-H table needs at least one point with H > 0, got " + n + " points");
         for (int i = 1; i < hh.length; i++) {
             if (!(hh[i] > hh[i - 1])) {
-                throw new IllegalArgumentException("B-H table: H must increase strictly from 0; H[" + (i - off) + "] = " + hh[i]
+                throw Require.fail("B-H table: H must increase strictly from 0; H[" + (i - off) + "] = " + hh[i]
                         + " A/m after " + hh[i - 1] + " A/m");
             }
             if (!(bb[i] > bb[i - 1])) {
-                throw new IllegalArgumentException("B-H table: B must increase strictly with H; B[" + (i - off) + "] = " + bb[i]
+                throw Require.fail("B-H table: B must increase strictly with H; B[" + (i - off) + "] = " + bb[i]
                         + " T after " + bb[i - 1] + " T");
             }
         }
@@ -58,6 +59,8 @@ final class TableMaterial implements MagneticMaterial {
         this.b = bb;
         this.bsat = bsat;
         this.m = tangents(hh, bb);
+        // a first point at a vanishing H gives an initial slope no material has (and ∞ in a double)
+        Require.between("initial relative permeability of the B-H table", m[0] / MU0, 1e-3, 1e8);
     }
 
     private static double[] tangents(double[] x, double[] y) {
@@ -91,6 +94,7 @@ final class TableMaterial implements MagneticMaterial {
 
     @Override
     public double fluxDensityAt(double hIn) {
+        Require.finite("field strength (A/m)", hIn);
         double x = Math.abs(hIn);
         double r;
         int n = h.length;
@@ -100,20 +104,22 @@ final class TableMaterial implements MagneticMaterial {
             int i = interval(h, x);
             r = hermite(i, x);
         }
-        return hIn < 0 ? -r : r;
+        return Require.result("flux density", hIn < 0 ? -r : r);
     }
 
     @Override
     public double incrementalPermeabilityAt(double hIn) {
+        Require.finite("field strength (A/m)", hIn);
         double x = Math.abs(hIn);
         int n = h.length;
-        if (x >= h[n - 1]) return 1;
+        if (x >= h[n - 1]) return Require.result("incremental permeability", 1);
         int i = interval(h, x);
-        return slope(i, x) / MU0;
+        return Require.result("incremental permeability", slope(i, x) / MU0);
     }
 
     @Override
     public double fieldAt(double bIn) {
+        Require.finite("flux density (T)", bIn);
         double y = Math.abs(bIn);
         int n = h.length;
         double r;
@@ -136,7 +142,7 @@ final class TableMaterial implements MagneticMaterial {
             }
             r = x;
         }
-        return bIn < 0 ? -r : r;
+        return Require.result("field", bIn < 0 ? -r : r);
     }
 
     /** Index i with a[i] <= v < a[i+1]; v is within [a[0], a[n-1]). */

@@ -5,6 +5,7 @@ import java.util.Collections;
 import java.util.List;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
 
 /**
  * One swept parameter: a name and the values it takes, in order. Values are numbers (whole numbers
@@ -50,20 +51,22 @@ public final class Axis<T> {
     /** The values of a list, in order: {@code Axis.of("wire", List.of(Wire.awg(24), Wire.awg(26)))}. */
     public static <T> Axis<T> of(String name, List<T> values) {
         checkName(name);
-        if (values == null || values.isEmpty()) throw new IllegalArgumentException("the list of values for " + name + " is empty");
+        if (values == null || values.isEmpty()) throw Require.fail("the list of values for " + name + " is empty");
         List<T> copy = new ArrayList<>(values.size());
         for (int i = 0; i < values.size(); i++) {
             T v = values.get(i);
-            if (v == null) throw new IllegalArgumentException("value " + (i + 1) + " of " + name + " is missing (null)");
+            if (v == null) throw Require.fail("value " + (i + 1) + " of " + name + " is missing (null)");
             copy.add(v);
         }
         checkSameDimension(name, copy);
+        checkSize("points of the sweep of " + name, copy.size(), BYTES_PER_POINT);
         return new Axis<>(name, Collections.unmodifiableList(copy));
     }
 
     /** The values given: {@code Axis.of("gap", mm(0.1), mm(0.2), mm(0.5))}. */
     @SafeVarargs
     public static <T> Axis<T> of(String name, T... values) {
+        Require.present("values", values);
         return of(name, values == null ? List.of() : java.util.Arrays.asList(values));
     }
 
@@ -86,15 +89,36 @@ public final class Axis<T> {
     }
 
     static void checkName(String name) {
-        if (name == null || name.isBlank()) throw new IllegalArgumentException("a swept parameter needs a name, got \"" + name + "\"");
+        Require.name("a swept parameter", name);
     }
 
+    /** Most points a sweep or a Monte Carlo run takes. */
+    public static final int MAX_POINTS = 100_000_000;
+    /** Memory a point of a general study takes with its parameters and results (bytes, measured roughly). */
+    static final int BYTES_PER_POINT = 400;
+    /** Memory a point of the fast double path takes (bytes): parameter, result, error slot. */
+    static final int BYTES_PER_DOUBLE_POINT = 32;
+
     static void checkCount(String name, int count, double from, double to) {
-        if (count < 1) throw new IllegalArgumentException("count of " + name + " (" + count + ") must be at least 1");
+        checkCount(name, count, from, to, BYTES_PER_POINT);
+    }
+
+    /** The count of points is from 1 to {@link #MAX_POINTS} and its tables fit in the memory left. */
+    static void checkCount(String name, int count, double from, double to, int bytesEach) {
+        if (count < 1) throw Require.fail("count of " + name + " (" + count + ") must be at least 1");
+        checkSize("points of the sweep of " + name, count, bytesEach);
         if (count == 1 && from != to) {
-            throw new IllegalArgumentException("count 1 cannot span " + name + " from " + from + " to " + to
+            throw Require.fail("count 1 cannot span " + name + " from " + from + " to " + to
                     + "; give a count of 2 or more, or the same value at both ends");
         }
+    }
+
+    /** {@code count} items of a study are at most {@link #MAX_POINTS} and fit in the memory left. */
+    static void checkSize(String what, long count, int bytesEach) {
+        if (count > MAX_POINTS) {
+            throw Require.fail(count + " " + what + " are more than the " + MAX_POINTS + " a study takes; use fewer");
+        }
+        Require.fitsInMemory(what, count, bytesEach);
     }
 
     /** The k-th of {@code count} steps; exact at both ends. */
@@ -106,17 +130,17 @@ public final class Axis<T> {
     }
 
     static void checkEnds(String name, double from, double to, boolean log, String fromText, String toText) {
-        if (!Double.isFinite(from)) throw new IllegalArgumentException("start of " + name + " must be a finite number, got " + fromText);
-        if (!Double.isFinite(to)) throw new IllegalArgumentException("end of " + name + " must be a finite number, got " + toText);
+        if (!Double.isFinite(from)) throw Require.fail("start of " + name + " must be a finite number, got " + fromText);
+        if (!Double.isFinite(to)) throw Require.fail("end of " + name + " must be a finite number, got " + toText);
         if (log && !(from > 0 && to > 0)) {
-            throw new IllegalArgumentException("log steps of " + name + " need both ends greater than zero, got " + fromText + " to " + toText);
+            throw Require.fail("log steps of " + name + " need both ends greater than zero, got " + fromText + " to " + toText);
         }
     }
 
     @SuppressWarnings("unchecked")
     private static <N extends Number> Axis<N> numbers(String name, N from, N to, int count, boolean log) {
         checkName(name);
-        if (from == null || to == null) throw new IllegalArgumentException("the range of " + name + " is missing an end (null)");
+        if (from == null || to == null) throw Require.fail("the range of " + name + " is missing an end (null)");
         double a = from.doubleValue();
         double b = to.doubleValue();
         checkEnds(name, a, b, log, String.valueOf(from), String.valueOf(to));
@@ -127,14 +151,14 @@ public final class Axis<T> {
         if (whole) {
             long span = Math.abs(to.longValue() - from.longValue()) + 1;
             if (count > span) {
-                throw new IllegalArgumentException("count of " + name + " (" + count + ") is more than the " + span
+                throw Require.fail("count of " + name + " (" + count + ") is more than the " + span
                         + " whole numbers from " + from + " to " + to);
             }
             long last = Long.MIN_VALUE;
             for (int k = 0; k < count; k++) {
                 long v = Math.round(step(a, b, k, count, log));
                 if (k > 0 && v == last) {
-                    throw new IllegalArgumentException(count + " log steps of " + name + " from " + from + " to " + to
+                    throw Require.fail(count + " log steps of " + name + " from " + from + " to " + to
                             + " repeat whole numbers (" + v + " twice); give a smaller count");
                 }
                 vs.add(kind == Integer.class ? (Number) (int) v : kind == Long.class ? (Number) v
@@ -151,9 +175,9 @@ public final class Axis<T> {
 
     private static Axis<Quantity> quantities(String name, Quantity from, Quantity to, int count, boolean log) {
         checkName(name);
-        if (from == null || to == null) throw new IllegalArgumentException("the range of " + name + " is missing an end (null)");
+        if (from == null || to == null) throw Require.fail("the range of " + name + " is missing an end (null)");
         if (!from.dimension().equals(to.dimension())) {
-            throw new IllegalArgumentException("the ends of " + name + " must be of one kind, got " + from + " (" + from.dimension().name()
+            throw Require.fail("the ends of " + name + " must be of one kind, got " + from + " (" + from.dimension().name()
                     + ") and " + to + " (" + to.dimension().name() + ")");
         }
         checkEnds(name, from.si(), to.si(), log, from.toString(), to.toString());
@@ -175,7 +199,7 @@ public final class Axis<T> {
             Dimension e = ((Quantity) v).dimension();
             if (d == null) d = e;
             else if (!d.equals(e)) {
-                throw new IllegalArgumentException("the values of " + name + " must be of one kind, got " + values.get(0) + " ("
+                throw Require.fail("the values of " + name + " must be of one kind, got " + values.get(0) + " ("
                         + d.name() + ") and " + v + " (" + e.name() + ")");
             }
         }

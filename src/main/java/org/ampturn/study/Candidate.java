@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -37,10 +38,10 @@ public final class Candidate {
             Object v = outputs.get(name);
             if (v instanceof Quantity) return (Quantity) v;
             if (v instanceof Number) return Quantity.number(((Number) v).doubleValue());
-            throw new IllegalArgumentException("output " + name + " is " + v + ", not a quantity");
+            throw Require.fail("output " + name + " is " + v + ", not a quantity");
         }
         if (point.names().contains(name)) return point.get(name);
-        throw new IllegalArgumentException("no parameter or output named " + name + "; parameters " + point.names()
+        throw Require.fail("no parameter or output named " + name + "; parameters " + point.names()
                 + (outputs == null ? "" : ", outputs " + outputs.keySet()));
     }
 

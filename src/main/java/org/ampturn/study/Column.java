@@ -4,6 +4,7 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.List;
+import org.ampturn.units.Require;
 import java.util.Locale;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
@@ -27,6 +28,7 @@ final class Column {
     }
 
     static Column numbers(String name, Dimension d, boolean absolute, double[] values) {
+        Require.present("the kind (dimension) of column " + name, d);
         return new Column(name, d, absolute && Dimension.TEMPERATURE.equals(d), values, null);
     }
 

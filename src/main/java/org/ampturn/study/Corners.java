@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.util.ArrayList;
 import java.util.List;
 import org.ampturn.units.Dimension;
@@ -62,6 +63,7 @@ public final class Corners {
 
     /** The rows that fail a limit (or failed to evaluate). */
     public Table failing(Limit limit) {
+        Require.present("limit", limit);
         table.column(limit.output());
         limit.checkDimension(table.dimension(limit.output()));
         return table.where(r -> !r.ok() || !limit.isMetAt(r.value(limit.output())));

@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import org.ampturn.units.Dimension;
@@ -19,8 +20,8 @@ public final class Limit {
 
     private Limit(String output, boolean atLeast, Quantity bound) {
         Axis.checkName(output);
-        if (bound == null) throw new IllegalArgumentException("the bound on " + output + " is missing (null)");
-        if (!Double.isFinite(bound.si())) throw new IllegalArgumentException("the bound on " + output + " must be finite, got " + bound);
+        if (bound == null) throw Require.fail("the bound on " + output + " is missing (null)");
+        if (!Double.isFinite(bound.si())) throw Require.fail("the bound on " + output + " must be finite, got " + bound);
         this.output = output;
         this.atLeast = atLeast;
         this.bound = bound;
@@ -48,17 +49,17 @@ public final class Limit {
 
     /** Reads {@code "NAME >= QUANTITY"} or {@code "NAME <= QUANTITY"} (≥ and ≤ too): {@code "B <= 0.3 T"}, {@code "turns >= 100"}. */
     public static Limit parse(String text) {
-        if (text == null) throw new IllegalArgumentException("a limit is missing (null)");
+        if (text == null) throw Require.fail("a limit is missing (null)");
         Matcher m = TEXT.matcher(text);
         if (!m.matches()) {
-            throw new IllegalArgumentException("cannot read the limit \"" + text + "\": write an output name, >= or <=, and a value, e.g. \"L >= 1 mH\" or \"B <= 0.3 T\"");
+            throw Require.fail("cannot read the limit \"" + text + "\": write an output name, >= or <=, and a value, e.g. \"L >= 1 mH\" or \"B <= 0.3 T\"");
         }
         String op = m.group(2);
         Quantity q;
         try {
             q = Quantity.parse(m.group(3));
         } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("cannot read the limit \"" + text + "\": " + e.getMessage(), e);
+            throw Require.fail("cannot read the limit \"" + text + "\": " + e.getMessage(), e);
         }
         return new Limit(m.group(1), op.startsWith(">") || op.equals("≥"), q);
     }
@@ -85,7 +86,9 @@ public final class Limit {
     public double relativeMarginAt(double si) {
         double m = marginAt(si);
         double b = Math.abs(bound.si());
-        return b > 0 ? m / b : m;
+        if (!(b > 0)) return m;
+        double r = m / b;
+        return Double.isInfinite(r) ? Math.copySign(Double.MAX_VALUE, r) : r; // a bound of 1e-300 ranks, it does not overflow
     }
 
     /** True when the SI value meets the limit (NaN does not). */
@@ -106,13 +109,14 @@ public final class Limit {
     }
 
     void check(Quantity value) {
-        if (value == null) throw new IllegalArgumentException("no value of " + output + " (null) to check against " + this);
+        if (value == null) throw Require.fail("no value of " + output + " (null) to check against " + this);
         checkDimension(value.dimension());
+        if (!Double.isFinite(value.si())) throw Require.fail("the value of " + output + " to check against " + this + " must be finite, got " + value);
     }
 
     void checkDimension(Dimension d) {
         if (!d.equals(bound.dimension())) {
-            throw new IllegalArgumentException("output " + output + " is a " + d.name() + " but the limit " + this + " is a " + bound.dimension().name());
+            throw Require.fail("output " + output + " is a " + d.name() + " but the limit " + this + " is a " + bound.dimension().name());
         }
     }
 

@@ -6,6 +6,7 @@ import java.util.Locale;
 import org.apache.commons.math3.stat.regression.OLSMultipleLinearRegression;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
 
 /**
  * The result of a Monte Carlo tolerance run: the inputs and outputs of every run (SI), their
@@ -64,7 +65,7 @@ public final class MonteCarlo {
     /** The SI values drawn for a parameter, one per run. */
     public double[] inputs(String parameter) {
         int j = parameterNames().indexOf(parameter);
-        if (j < 0) throw new IllegalArgumentException("no parameter named " + parameter + "; the parameters are " + parameterNames());
+        if (j < 0) throw Require.fail("no parameter named " + Require.quote(parameter) + "; the parameters are " + Require.names(parameterNames()));
         return inputs[j].clone();
     }
 
@@ -97,6 +98,7 @@ public final class MonteCarlo {
 
     /** The fraction of the computed runs that fail a limit; a run that failed to evaluate counts as failing. */
     public double fractionFailing(Limit limit) {
+        Require.present("limit", limit);
         requireOutput(limit.output());
         limit.checkDimension(table.dimension(limit.output()));
         double[] v = table.values(limit.output());
@@ -200,9 +202,9 @@ public final class MonteCarlo {
 
     private void requireOutput(String output) {
         if (!outputNames().contains(output)) {
-            throw new IllegalArgumentException("no output named " + output + "; the outputs are " + outputNames());
+            throw Require.fail("no output named " + Require.quote(output) + "; the outputs are " + Require.names(outputNames()));
         }
-        if (!table.isNumeric(output)) throw new IllegalArgumentException("output " + output + " holds labels, not numbers");
+        if (!table.isNumeric(output)) throw Require.fail("output " + output + " holds labels, not numbers");
     }
 
     @Override

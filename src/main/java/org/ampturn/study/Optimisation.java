@@ -19,6 +19,7 @@ import org.apache.commons.math3.optim.univariate.BrentOptimizer;
 import org.apache.commons.math3.optim.univariate.SearchInterval;
 import org.apache.commons.math3.optim.univariate.UnivariateObjectiveFunction;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.ampturn.units.Require;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
 
@@ -78,10 +79,11 @@ public final class Optimisation {
 
     /** A copy with more parameters to vary. */
     public Optimisation over(Param... more) {
+        Require.present("more", more);
         List<Param> ps = new ArrayList<>(params);
         for (Param p : more) {
-            Objects.requireNonNull(p, "parameter");
-            for (Param q : ps) if (q.name.equals(p.name)) throw new IllegalArgumentException("parameter " + p.name + " is given twice");
+            Require.present("parameter", p);
+            for (Param q : ps) if (q.name.equals(p.name)) throw Require.fail("parameter " + p.name + " is given twice");
             ps.add(p);
         }
         return new Optimisation(objective, maximise, List.copyOf(ps), limits, threads, progress, exhaustiveLimit, runnersUp);
@@ -89,6 +91,7 @@ public final class Optimisation {
 
     /** A copy with more limits, as text: {@code subjectTo("L >= 1 mH", "B <= 0.3 T")}. */
     public Optimisation subjectTo(String... more) {
+        Require.present("more", more);
         Limit[] ls = new Limit[more.length];
         for (int i = 0; i < more.length; i++) ls[i] = Limit.parse(more[i]);
         return subjectTo(ls);
@@ -96,8 +99,9 @@ public final class Optimisation {
 
     /** A copy with more limits. */
     public Optimisation subjectTo(Limit... more) {
+        Require.present("more", more);
         List<Limit> ls = new ArrayList<>(limits);
-        for (Limit l : more) ls.add(Objects.requireNonNull(l, "limit"));
+        for (Limit l : more) ls.add(Require.present("limit", l));
         return new Optimisation(objective, maximise, params, List.copyOf(ls), threads, progress, exhaustiveLimit, runnersUp);
     }
 
@@ -106,25 +110,25 @@ public final class Optimisation {
     }
 
     public Optimisation withProgress(Progress listener) {
-        return new Optimisation(objective, maximise, params, limits, threads, Objects.requireNonNull(listener, "progress listener"), exhaustiveLimit, runnersUp);
+        return new Optimisation(objective, maximise, params, limits, threads, Require.present("progress listener", listener), exhaustiveLimit, runnersUp);
     }
 
     /** A copy that tries every combination of whole numbers and choices when there are at most {@code n}. */
     public Optimisation withExhaustiveLimit(int n) {
-        if (n < 1) throw new IllegalArgumentException("the exhaustive limit must be at least 1, got " + n);
+        if (n < 1) throw Require.fail("the exhaustive limit must be at least 1, got " + n);
         return new Optimisation(objective, maximise, params, limits, threads, progress, n, runnersUp);
     }
 
     /** A copy that keeps {@code n} runners-up (5 unless changed). */
     public Optimisation withRunnersUp(int n) {
-        if (n < 0) throw new IllegalArgumentException("the number of runners-up must be zero or more, got " + n);
+        if (n < 0) throw Require.fail("the number of runners-up must be zero or more, got " + n);
         return new Optimisation(objective, maximise, params, limits, threads, progress, exhaustiveLimit, n);
     }
 
     /** Runs the search; {@code f} returns the objective and the limited outputs ({@link Outputs}, a Map, or one quantity). */
     public Optimum run(Function<Point, ?> f) {
-        Objects.requireNonNull(f, "function");
-        if (params.isEmpty()) throw new IllegalArgumentException("nothing to optimise: give the parameters with over(Param...)");
+        Require.present("function", f);
+        if (params.isEmpty()) throw Require.fail("nothing to optimise: give the parameters with over(Param...)");
         return Runner.guarded(() -> new Search(f).run());
     }
 
@@ -194,7 +198,7 @@ public final class Optimisation {
                 for (int k : discrete) (params.get(k).kind == Param.Kind.CHOICE ? choiceIdx : intIdx).add(k);
                 for (int k : choiceIdx) choiceCombos *= params.get(k).count();
                 if (choiceCombos > exhaustiveLimit) {
-                    throw new IllegalArgumentException("the choices give " + choiceCombos + " combinations, more than the exhaustive limit of "
+                    throw Require.fail("the choices give " + choiceCombos + " combinations, more than the exhaustive limit of "
                             + exhaustiveLimit + "; shorten the lists or raise it with withExhaustiveLimit(n)");
                 }
                 int n = (int) choiceCombos;
@@ -437,21 +441,21 @@ public final class Optimisation {
 
         private double numberOf(Map<String, Object> out, String name, Dimension expected) {
             Object v = out.get(name);
-            if (v == null) throw new IllegalArgumentException("the function gives no output named " + name + "; it gives " + out.keySet());
+            if (v == null) throw Require.fail("the function gives no output named " + Require.quote(name) + "; it gives " + Require.names(out.keySet()));
             if (v instanceof Quantity) {
                 Quantity q = (Quantity) v;
                 if (expected != null && !expected.equals(q.dimension())) {
-                    throw new IllegalArgumentException("output " + name + " is " + q + " (" + q.dimension().name() + ") but its limit is a " + expected.name());
+                    throw Require.fail("output " + name + " is " + q + " (" + q.dimension().name() + ") but its limit is a " + expected.name());
                 }
                 return q.si();
             }
             if (v instanceof Number) {
                 if (expected != null && !expected.isNone()) {
-                    throw new IllegalArgumentException("output " + name + " is the number " + v + " but its limit is a " + expected.name());
+                    throw Require.fail("output " + name + " is the number " + v + " but its limit is a " + expected.name());
                 }
                 return ((Number) v).doubleValue();
             }
-            throw new IllegalArgumentException("output " + name + " must be a quantity or a number, got " + v);
+            throw Require.fail("output " + name + " must be a quantity or a number, got " + v);
         }
     }
 

@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
 
 /**
  * Several named results of one evaluation, in order: {@code Outputs.of("L", l, "R", r)}. Each value
@@ -21,15 +22,16 @@ public final class Outputs {
 
     /** Names and values in turn: {@code Outputs.of("L", mH(2), "R", ohm(4.5), "turns", 400)}. */
     public static Outputs of(Object... namesAndValues) {
+        Require.present("namesAndValues", namesAndValues);
         if (namesAndValues.length == 0 || namesAndValues.length % 2 != 0) {
-            throw new IllegalArgumentException("Outputs.of takes names and values in pairs, e.g. Outputs.of(\"L\", l, \"R\", r); got "
+            throw Require.fail("Outputs.of takes names and values in pairs, e.g. Outputs.of(\"L\", l, \"R\", r); got "
                     + namesAndValues.length + " arguments");
         }
         LinkedHashMap<String, Object> m = new LinkedHashMap<>();
         for (int i = 0; i < namesAndValues.length; i += 2) {
             Object name = namesAndValues[i];
             if (!(name instanceof String) || ((String) name).isBlank()) {
-                throw new IllegalArgumentException("argument " + (i + 1) + " of Outputs.of must be a name (text), got " + name);
+                throw Require.fail("argument " + (i + 1) + " of Outputs.of must be a name (text), got " + name);
             }
             put(m, (String) name, namesAndValues[i + 1]);
         }
@@ -38,15 +40,15 @@ public final class Outputs {
 
     /** The entries of a map, in its iteration order. */
     public static Outputs of(Map<String, ?> map) {
-        if (map.isEmpty()) throw new IllegalArgumentException("the map of outputs is empty");
+        if (map == null || map.isEmpty()) throw Require.fail("the map of outputs is empty");
         LinkedHashMap<String, Object> m = new LinkedHashMap<>();
         map.forEach((k, v) -> put(m, k, v));
         return new Outputs(m);
     }
 
     private static void put(LinkedHashMap<String, Object> m, String name, Object v) {
-        if (v == null) throw new IllegalArgumentException("output " + name + " is missing (null)");
-        if (m.put(name, v) != null) throw new IllegalArgumentException("output " + name + " is given twice");
+        if (v == null) throw Require.fail("output " + name + " is missing (null)");
+        if (m.put(name, v) != null) throw Require.fail("output " + name + " is given twice");
     }
 
     /** A copy with one more output. */
@@ -64,7 +66,7 @@ public final class Outputs {
     /** The value of an output as given (a Quantity, a Number or another object). */
     public Object value(String name) {
         Object v = values.get(name);
-        if (v == null) throw new IllegalArgumentException("no output named " + name + "; the outputs are " + values.keySet());
+        if (v == null) throw Require.fail("no output named " + Require.quote(name) + "; the outputs are " + Require.names(values.keySet()));
         return v;
     }
 
@@ -73,7 +75,7 @@ public final class Outputs {
         Object v = value(name);
         if (v instanceof Quantity) return (Quantity) v;
         if (v instanceof Number) return Quantity.number(((Number) v).doubleValue());
-        throw new IllegalArgumentException("output " + name + " is not a quantity: " + v);
+        throw Require.fail("output " + name + " is not a quantity: " + v);
     }
 
     Map<String, Object> map() {
@@ -86,16 +88,29 @@ public final class Outputs {
      */
     static Map<String, Object> from(Object result, String defaultName) {
         if (result == null) throw new IllegalStateException("the function returned nothing (null)");
-        if (result instanceof Outputs) return ((Outputs) result).values;
-        if (result instanceof Map) {
-            LinkedHashMap<String, Object> m = new LinkedHashMap<>();
+        Map<String, Object> m;
+        if (result instanceof Outputs) {
+            m = ((Outputs) result).values;
+        } else if (result instanceof Map) {
+            m = new LinkedHashMap<>();
             for (Map.Entry<?, ?> e : ((Map<?, ?>) result).entrySet()) {
                 if (e.getValue() == null) throw new IllegalStateException("output " + e.getKey() + " is missing (null)");
                 m.put(String.valueOf(e.getKey()), e.getValue());
             }
-            return m;
+        } else {
+            m = Map.of(defaultName, result);
         }
-        return Map.of(defaultName, result);
+        // a NaN or an infinity is the row's error, not a value in the table
+        m.forEach((name, v) -> {
+            if (!isFinite(v)) throw new IllegalStateException("output " + Require.quote(name) + " is " + v + ", not a finite number");
+        });
+        return m;
+    }
+
+    private static boolean isFinite(Object v) {
+        if (v instanceof Quantity) return Double.isFinite(((Quantity) v).si());
+        if (v instanceof Double || v instanceof Float) return Double.isFinite(((Number) v).doubleValue());
+        return true;
     }
 
     @Override

@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.util.List;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
@@ -38,9 +39,9 @@ public final class Param {
 
     /** A quantity between {@code lo} and {@code hi}: {@code Param.real("gap", mm(0.1), mm(1))}. */
     public static Param real(String name, Quantity lo, Quantity hi) {
-        if (lo == null || hi == null) throw new IllegalArgumentException("the bounds of " + name + " are missing an end (null)");
+        if (lo == null || hi == null) throw Require.fail("the bounds of " + name + " are missing an end (null)");
         if (!lo.dimension().equals(hi.dimension())) {
-            throw new IllegalArgumentException("the bounds of " + name + " must be of one kind, got " + lo + " (" + lo.dimension().name()
+            throw Require.fail("the bounds of " + name + " must be of one kind, got " + lo + " (" + lo.dimension().name()
                     + ") and " + hi + " (" + hi.dimension().name() + ")");
         }
         checkBounds(name, lo.si(), hi.si(), lo.toString(), hi.toString());
@@ -49,22 +50,22 @@ public final class Param {
 
     /** A whole number from {@code lo} to {@code hi}, both included: {@code Param.integer("turns", 50, 2000)}. */
     public static Param integer(String name, int lo, int hi) {
-        if (lo > hi) throw new IllegalArgumentException("the range of " + name + " is empty: " + lo + " to " + hi + " (the first must not exceed the second)");
+        if (lo > hi) throw Require.fail("the range of " + name + " is empty: " + lo + " to " + hi + " (the first must not exceed the second)");
         return new Param(name, Kind.INTEGER, lo, hi, null, false, null);
     }
 
     /** One of the options of a list, tried in turn: {@code Param.choice("wire", List.of(Wire.awg(24), Wire.awg(26)))}. */
     public static Param choice(String name, List<?> options) {
-        if (options == null || options.isEmpty()) throw new IllegalArgumentException("the list of options for " + name + " is empty");
+        if (options == null || options.isEmpty()) throw Require.fail("the list of options for " + name + " is empty");
         for (int i = 0; i < options.size(); i++) {
-            if (options.get(i) == null) throw new IllegalArgumentException("option " + (i + 1) + " of " + name + " is missing (null)");
+            if (options.get(i) == null) throw Require.fail("option " + (i + 1) + " of " + name + " is missing (null)");
         }
         return new Param(name, Kind.CHOICE, 0, options.size() - 1, null, false, List.copyOf(options));
     }
 
     private static void checkBounds(String name, double lo, double hi, String loText, String hiText) {
-        if (!Double.isFinite(lo) || !Double.isFinite(hi)) throw new IllegalArgumentException("the bounds of " + name + " must be finite, got " + loText + " to " + hiText);
-        if (!(lo < hi)) throw new IllegalArgumentException("the range of " + name + " is empty: " + loText + " to " + hiText + " (the lower bound must be below the upper)");
+        if (!Double.isFinite(lo) || !Double.isFinite(hi)) throw Require.fail("the bounds of " + name + " must be finite, got " + loText + " to " + hiText);
+        if (!(lo < hi)) throw Require.fail("the range of " + name + " is empty: " + loText + " to " + hiText + " (the lower bound must be below the upper)");
     }
 
     public String name() {

@@ -4,6 +4,7 @@ import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
 import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
 
 /**
  * The parameter values at one point of an optimisation or a tolerance run, by name:
@@ -23,7 +24,7 @@ public final class Point {
     /** The value as given: an Integer, a Double, a Quantity, or a chosen object. */
     public Object value(String name) {
         Integer k = index.get(name);
-        if (k == null) throw new IllegalArgumentException("no parameter named " + name + "; the parameters are " + names);
+        if (k == null) throw Require.fail("no parameter named " + Require.quote(name) + "; the parameters are " + Require.names(names));
         return values[k];
     }
 
@@ -32,7 +33,7 @@ public final class Point {
         Object v = value(name);
         if (v instanceof Quantity) return (Quantity) v;
         if (v instanceof Number) return Quantity.number(((Number) v).doubleValue());
-        throw new IllegalArgumentException("parameter " + name + " is " + v + ", not a quantity; read it with choice(\"" + name + "\")");
+        throw Require.fail("parameter " + name + " is " + v + ", not a quantity; read it with choice(\"" + name + "\")");
     }
 
     /** The SI value of a numeric parameter. */
@@ -48,7 +49,7 @@ public final class Point {
             double d = ((Number) v).doubleValue();
             if (d == Math.rint(d) && Math.abs(d) < Integer.MAX_VALUE) return (int) d;
         }
-        throw new IllegalArgumentException("parameter " + name + " is " + v + ", not a whole number");
+        throw Require.fail("parameter " + name + " is " + v + ", not a whole number");
     }
 
     /** A parameter chosen from a list (a wire, a material), as its own type. */

@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.io.PrintStream;
 import java.time.Duration;
 import java.util.Locale;
@@ -68,7 +69,7 @@ public interface Progress {
      * on and ends it with a newline. Runs shorter than half a second print nothing.
      */
     static Progress bar(PrintStream out) {
-        Objects.requireNonNull(out, "out");
+        Require.present("out", out);
         return new Progress() {
             private boolean drawn;
             private int width;

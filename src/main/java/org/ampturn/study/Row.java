@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import org.ampturn.units.Quantity;
 
 /** One row of a {@link Table}: the parameters of a point and what was computed there. */
@@ -20,14 +21,14 @@ public final class Row {
     /** The value in a numeric column as a quantity (NaN when the row failed). */
     public Quantity get(String column) {
         Column c = table.column(column);
-        if (!c.numeric()) throw new IllegalArgumentException("column " + column + " holds labels; use label(\"" + column + "\") or param(\"" + column + "\")");
+        if (!c.numeric()) throw Require.fail("column " + column + " holds labels; use label(\"" + column + "\") or param(\"" + column + "\")");
         return c.quantity(index);
     }
 
     /** The SI value in a numeric column (NaN when the row failed). */
     public double value(String column) {
         Column c = table.column(column);
-        if (!c.numeric()) throw new IllegalArgumentException("column " + column + " holds labels; use label(\"" + column + "\")");
+        if (!c.numeric()) throw Require.fail("column " + column + " holds labels; use label(\"" + column + "\")");
         return c.values[index];
     }
 

@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.time.Duration;
 import java.util.ArrayList;
 import java.util.List;
@@ -99,7 +100,7 @@ final class Runner {
     }
 
     static Progress install(Progress p) {
-        Objects.requireNonNull(p, "progress listener");
+        Require.present("progress listener", p);
         Progress old = installed;
         installed = p;
         return old;
@@ -111,7 +112,7 @@ final class Runner {
 
     static int checkThreads(int threads) {
         if (threads < 1 || threads > 1024) {
-            throw new IllegalArgumentException("threads must be between 1 and 1024, got " + threads);
+            throw Require.fail("threads must be between 1 and 1024, got " + threads);
         }
         return threads;
     }
@@ -131,6 +132,7 @@ final class Runner {
         private final long total;
         private final String task;
         private final Progress progress;
+        private final java.util.Set<Thread> workers = new java.util.HashSet<>();
 
         Control(String task, long total, Progress progress) {
             this.task = task;
@@ -140,11 +142,36 @@ final class Runner {
             this.lastReport = new AtomicLong(start);
         }
 
+        /**
+         * Stops the run: every worker is interrupted too, so a long point (a transient, a filament
+         * sum) that polls its thread's interrupt flag ends at once rather than when it is done.
+         */
+        void stopAll() {
+            stop = true;
+            synchronized (workers) {
+                for (Thread t : workers) t.interrupt();
+            }
+        }
+
+        void enter(Thread t) {
+            synchronized (workers) {
+                workers.add(t);
+                if (stop) t.interrupt();
+            }
+        }
+
+        void leave(Thread t) {
+            synchronized (workers) {
+                workers.remove(t);
+                Thread.interrupted(); // the pool thread goes back clean
+            }
+        }
+
         /** True when the run must stop: the caller was interrupted, or this worker was. */
         boolean stopped() {
             if (stop) return true;
             if (Thread.currentThread().isInterrupted()) {
-                stop = true;
+                stopAll();
                 return true;
             }
             return false;
@@ -209,7 +236,10 @@ final class Runner {
         Control control = new Control(task, n, progress == null ? installed : progress);
         AtomicInteger next = new AtomicInteger();
         Throwable[] failure = new Throwable[1];
+        Thread caller = Thread.currentThread();
         Runnable worker = () -> {
+            boolean helper = Thread.currentThread() != caller;
+            if (helper) control.enter(Thread.currentThread());
             try {
                 int b;
                 while (!control.stopped() && (b = next.getAndIncrement()) < blocks) {
@@ -224,6 +254,8 @@ final class Runner {
                         if (failure[0] == null) failure[0] = e;
                     }
                 }
+            } finally {
+                if (helper) control.leave(Thread.currentThread());
             }
         };
         int helpers = Math.min(checkThreads(threads), blocks) - 1;
@@ -239,12 +271,12 @@ final class Runner {
                         break;
                     } catch (InterruptedException e) {
                         interrupted = true;
-                        control.stop = true;
+                        control.stopAll();
                     } catch (ExecutionException e) {
                         break; // the worker records its own failure
                     } catch (Error e) {
                         if (!isForcedStop(e)) throw e;
-                        control.stop = true; // stopped by force while waiting: wait for the workers, then return
+                        control.stopAll(); // stopped by force while waiting: wait for the workers, then return
                     }
                 }
             }

@@ -6,6 +6,7 @@ import java.util.function.DoubleUnaryOperator;
 import java.util.function.Function;
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.apache.commons.math3.exception.TooManyEvaluationsException;
+import org.ampturn.units.Require;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
 
@@ -24,14 +25,14 @@ public final class Solve {
 
     /** The x in [lo, hi] where {@code f(x) = target}, all plain numbers. */
     public static double of(DoubleUnaryOperator f, double target, double lo, double hi) {
-        Objects.requireNonNull(f, "function");
-        if (!Double.isFinite(target)) throw new IllegalArgumentException("target must be a finite number, got " + target);
+        Require.present("function", f);
+        if (!Double.isFinite(target)) throw Require.fail("target must be a finite number, got " + target);
         return root(f, target, lo, hi, Solve::num, v -> num(v));
     }
 
     /** The x in [lo, hi] where the quantity {@code f(x)} equals {@code target}: turns for an inductance. */
     public static double of(DoubleFunction<Quantity> f, Quantity target, double lo, double hi) {
-        Objects.requireNonNull(f, "function");
+        Require.present("function", f);
         double t = checkTarget(target);
         Dimension d = target.dimension();
         DoubleUnaryOperator g = x -> valueOf(f.apply(x), d, target, num(x));
@@ -40,11 +41,11 @@ public final class Solve {
 
     /** The quantity x in [lo, hi] where {@code f(x)} equals {@code target}. */
     public static Quantity of(Function<Quantity, Quantity> f, Quantity target, Quantity lo, Quantity hi) {
-        Objects.requireNonNull(f, "function");
+        Require.present("function", f);
         double t = checkTarget(target);
-        if (lo == null || hi == null) throw new IllegalArgumentException("the range to search is missing an end (null)");
+        if (lo == null || hi == null) throw Require.fail("the range to search is missing an end (null)");
         if (!lo.dimension().equals(hi.dimension())) {
-            throw new IllegalArgumentException("the ends of the range must be of one kind, got " + lo + " (" + lo.dimension().name() + ") and "
+            throw Require.fail("the ends of the range must be of one kind, got " + lo + " (" + lo.dimension().name() + ") and "
                     + hi + " (" + hi.dimension().name() + ")");
         }
         Dimension xd = lo.dimension();
@@ -56,8 +57,8 @@ public final class Solve {
     }
 
     private static double checkTarget(Quantity target) {
-        if (target == null) throw new IllegalArgumentException("the target is missing (null)");
-        if (!Double.isFinite(target.si())) throw new IllegalArgumentException("target must be finite, got " + target);
+        if (target == null) throw Require.fail("the target is missing (null)");
+        if (!Double.isFinite(target.si())) throw Require.fail("target must be finite, got " + target);
         return target.si();
     }
 
@@ -73,9 +74,9 @@ public final class Solve {
     private static double root(DoubleUnaryOperator f, double target, double lo, double hi,
                                DoubleFunction<String> showX, DoubleFunction<String> showF) {
         if (!Double.isFinite(lo) || !Double.isFinite(hi)) {
-            throw new IllegalArgumentException("the range to search must be finite, got " + showX.apply(lo) + " to " + showX.apply(hi));
+            throw Require.fail("the range to search must be finite, got " + showX.apply(lo) + " to " + showX.apply(hi));
         }
-        if (lo == hi) throw new IllegalArgumentException("the range to search is empty: both ends are " + showX.apply(lo));
+        if (lo == hi) throw Require.fail("the range to search is empty: both ends are " + showX.apply(lo));
         if (lo > hi) {
             double t = lo;
             lo = hi;
@@ -98,6 +99,8 @@ public final class Solve {
         } catch (TooManyEvaluationsException e) {
             throw new SolveException("no answer within " + MAX_EVALUATIONS + " evaluations between x = " + showX.apply(lo) + " and "
                     + showX.apply(hi) + "; is f continuous there?", e);
+        } catch (org.apache.commons.math3.exception.MathIllegalArgumentException e) {
+            throw Require.fail("the range from x = " + showX.apply(lo) + " to " + showX.apply(hi) + " is too narrow to search", e);
         }
     }
 

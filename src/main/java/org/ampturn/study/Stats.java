@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.util.Arrays;
 
 /** Small statistics on SI columns that skip NaN (failed runs). */
@@ -37,7 +38,7 @@ final class Stats {
      * Statistician 50(4), 1996, definition 7).
      */
     static double percentile(double[] v, double p) {
-        if (!(p >= 0 && p <= 100)) throw new IllegalArgumentException("percentile must be between 0 and 100, got " + p);
+        if (!(p >= 0 && p <= 100)) throw Require.fail("percentile must be between 0 and 100, got " + p);
         double[] f = finite(v);
         if (f.length == 0) return Double.NaN;
         Arrays.sort(f);

@@ -8,6 +8,7 @@ import java.util.Objects;
 import java.util.function.BiFunction;
 import java.util.function.DoubleUnaryOperator;
 import java.util.function.Function;
+import org.ampturn.units.Require;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
 
@@ -48,7 +49,7 @@ public final class Sweep {
 
     /** A copy that reports to {@code listener} instead of the installed one. */
     public Sweep withProgress(Progress listener) {
-        return new Sweep(threads, Objects.requireNonNull(listener, "progress listener"));
+        return new Sweep(threads, Require.present("progress listener", listener));
     }
 
     public int threads() {
@@ -57,8 +58,8 @@ public final class Sweep {
 
     /** The function at every value of one parameter. */
     public <A> Table of(Axis<A> axis, Function<? super A, ?> f) {
-        Objects.requireNonNull(axis, "axis");
-        Objects.requireNonNull(f, "function");
+        Require.present("axis", axis);
+        Require.present("function", f);
         List<A> as = axis.values();
         Object[][] params = new Object[as.size()][];
         for (int i = 0; i < as.size(); i++) params[i] = new Object[] {as.get(i)};
@@ -70,12 +71,13 @@ public final class Sweep {
 
     /** The function over the grid of two parameters: every value of {@code b} for each value of {@code a}. */
     public <A, B> Table of(Axis<A> a, Axis<B> b, BiFunction<? super A, ? super B, ?> f) {
-        Objects.requireNonNull(a, "first axis");
-        Objects.requireNonNull(b, "second axis");
-        Objects.requireNonNull(f, "function");
-        if (a.name().equals(b.name())) throw new IllegalArgumentException("the two swept parameters have the same name, " + a.name());
+        Require.present("first axis", a);
+        Require.present("second axis", b);
+        Require.present("function", f);
+        if (a.name().equals(b.name())) throw Require.fail("the two swept parameters have the same name, " + a.name());
         long n = (long) a.size() * b.size();
-        if (n > 50_000_000L) throw new IllegalArgumentException("a grid of " + a.size() + " × " + b.size() + " points is too large (over 50 million)");
+        if (n > 50_000_000L) throw Require.fail("a grid of " + a.size() + " × " + b.size() + " points is too large (over 50 million)");
+        Axis.checkSize("points of the grid of " + a.name() + " × " + b.name(), n, Axis.BYTES_PER_POINT);
         Object[][] params = new Object[(int) n][];
         int k = 0;
         for (A x : a.values()) for (B y : b.values()) params[k++] = new Object[] {x, y};
@@ -99,9 +101,10 @@ public final class Sweep {
     public Table ofDoubles(String name, Dimension xDimension, double[] xs, String output, Dimension outputDimension, DoubleUnaryOperator f) {
         Axis.checkName(name);
         Axis.checkName(output);
-        Objects.requireNonNull(f, "function");
-        if (xs == null || xs.length == 0) throw new IllegalArgumentException("the list of values for " + name + " is empty");
-        if (name.equals(output)) throw new IllegalArgumentException("the parameter and the output have the same name, " + name);
+        Require.present("function", f);
+        if (xs == null || xs.length == 0) throw Require.fail("the list of values for " + name + " is empty");
+        if (name.equals(output)) throw Require.fail("the parameter and the output have the same name, " + name);
+        Axis.checkSize("points of the sweep of " + name, xs.length, Axis.BYTES_PER_DOUBLE_POINT);
         double[] x = xs.clone();
         return Runner.guarded(() -> doubles(name, xDimension, x, output, outputDimension, f));
     }
@@ -118,6 +121,10 @@ public final class Sweep {
                 for (; i < end; i++) {
                     try {
                         y[i] = f.applyAsDouble(x[i]);
+                        if (!Double.isFinite(y[i])) {
+                            errors[i] = "the function gave " + y[i] + ", not a finite number";
+                            y[i] = Double.NaN;
+                        }
                     } catch (RuntimeException e) {
                         y[i] = Double.NaN;
                         errors[i] = Runner.describe(e);
@@ -147,7 +154,7 @@ public final class Sweep {
     public static double[] steps(String name, double from, double to, int count, boolean log) {
         Axis.checkName(name);
         Axis.checkEnds(name, from, to, log, String.valueOf(from), String.valueOf(to));
-        Axis.checkCount(name, count, from, to);
+        Axis.checkCount(name, count, from, to, Axis.BYTES_PER_DOUBLE_POINT);
         double[] xs = new double[count];
         for (int k = 0; k < count; k++) xs[k] = Axis.step(from, to, k, count, log);
         return xs;

@@ -17,6 +17,7 @@ import java.util.function.DoublePredicate;
 import java.util.function.Predicate;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
 
 /**
  * The result of a study: named columns of SI numbers with their {@link Dimension} (or text labels,
@@ -177,6 +178,7 @@ public final class Table {
 
     /** The rows that pass a test. */
     public Table where(Predicate<Row> test) {
+        Require.present("test", test);
         int[] keep = new int[size];
         int n = 0;
         for (int i = 0; i < size; i++) if (test.test(new Row(this, i))) keep[n++] = i;
@@ -185,6 +187,7 @@ public final class Table {
 
     /** The rows whose SI value in a numeric column passes a test: {@code where("L", l -> l > 1e-3)}. */
     public Table where(String column, DoublePredicate test) {
+        Require.present("test", test);
         double[] v = column(column).numeric() ? column(column).values : values(column);
         int[] keep = new int[size];
         int n = 0;
@@ -240,13 +243,13 @@ public final class Table {
     Column column(String name) {
         if (name == null) throw new IllegalArgumentException("a column name is missing (null)");
         Column c = byName.get(name);
-        if (c == null) throw new IllegalArgumentException("no column named " + name + "; the columns are " + byName.keySet());
+        if (c == null) throw new IllegalArgumentException("no column named " + Require.quote(name) + "; the columns are " + Require.names(byName.keySet()));
         return c;
     }
 
     Object parameter(int row, String name) {
         int k = parameterNames().indexOf(name);
-        if (k < 0) throw new IllegalArgumentException("no parameter named " + name + "; the parameters are " + parameterNames());
+        if (k < 0) throw new IllegalArgumentException("no parameter named " + Require.quote(name) + "; the parameters are " + Require.names(parameterNames()));
         if (parameters == null) {
             Column c = columns.get(k);
             return c.numeric() ? (Object) c.values[row] : c.labels[row];

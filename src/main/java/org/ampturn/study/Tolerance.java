@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -38,15 +39,16 @@ public final class Tolerance {
 
     /** A tolerance study of {@code f}, which reads the parameters by name from its {@link Point}. */
     public static Tolerance of(Function<Point, ?> f) {
-        return new Tolerance(Objects.requireNonNull(f, "function"), List.of(), List.of(), Runner.CORES, null);
+        return new Tolerance(Require.present("function", f), List.of(), List.of(), Runner.CORES, null);
     }
 
     /** A copy with more toleranced parameters. */
     public Tolerance vary(Varied... more) {
+        Require.present("more", more);
         List<Varied> vs = new ArrayList<>(varied);
         for (Varied v : more) {
-            Objects.requireNonNull(v, "toleranced parameter");
-            for (Varied w : vs) if (w.name.equals(v.name)) throw new IllegalArgumentException("parameter " + v.name + " is given twice");
+            Require.present("toleranced parameter", v);
+            for (Varied w : vs) if (w.name.equals(v.name)) throw Require.fail("parameter " + v.name + " is given twice");
             vs.add(v);
         }
         return new Tolerance(f, List.copyOf(vs), limits, threads, progress);
@@ -54,6 +56,7 @@ public final class Tolerance {
 
     /** A copy with limits the outputs must meet, as text: {@code limit("I >= 2 A")}. */
     public Tolerance limit(String... more) {
+        Require.present("more", more);
         Limit[] ls = new Limit[more.length];
         for (int i = 0; i < more.length; i++) ls[i] = Limit.parse(more[i]);
         return limit(ls);
@@ -61,8 +64,9 @@ public final class Tolerance {
 
     /** A copy with limits the outputs must meet. */
     public Tolerance limit(Limit... more) {
+        Require.present("more", more);
         List<Limit> ls = new ArrayList<>(limits);
-        for (Limit l : more) ls.add(Objects.requireNonNull(l, "limit"));
+        for (Limit l : more) ls.add(Require.present("limit", l));
         return new Tolerance(f, varied, List.copyOf(ls), threads, progress);
     }
 
@@ -71,7 +75,7 @@ public final class Tolerance {
     }
 
     public Tolerance withProgress(Progress listener) {
-        return new Tolerance(f, varied, limits, threads, Objects.requireNonNull(listener, "progress listener"));
+        return new Tolerance(f, varied, limits, threads, Require.present("progress listener", listener));
     }
 
     public List<Varied> parameters() {
@@ -83,7 +87,7 @@ public final class Tolerance {
     }
 
     private void requireParameters() {
-        if (varied.isEmpty()) throw new IllegalArgumentException("no parameter has a tolerance: give them with vary(Varied...)");
+        if (varied.isEmpty()) throw Require.fail("no parameter has a tolerance: give them with vary(Varied...)");
     }
 
     private List<String> names() {
@@ -111,7 +115,7 @@ public final class Tolerance {
     private Corners runCorners() {
         int k = varied.size();
         if (k > MAX_CORNER_PARAMS) {
-            throw new IllegalArgumentException(k + " toleranced parameters give 2^" + k + " corners, more than 2^" + MAX_CORNER_PARAMS
+            throw Require.fail(k + " toleranced parameters give 2^" + k + " corners, more than 2^" + MAX_CORNER_PARAMS
                     + "; use monteCarlo(runs, seed) instead");
         }
         int corners = 1 << k;
@@ -148,7 +152,8 @@ public final class Tolerance {
     /** {@code runs} random designs drawn from {@code seed}; the same runs for a seed on any number of threads. */
     public MonteCarlo monteCarlo(int runs, long seed) {
         requireParameters();
-        if (runs < 2) throw new IllegalArgumentException("runs (" + runs + ") must be at least 2");
+        if (runs < 2) throw Require.fail("runs (" + runs + ") must be at least 2");
+        Axis.checkSize("Monte Carlo runs", runs, Axis.BYTES_PER_POINT + 8 * varied.size());
         return Runner.guarded(() -> runMonteCarlo(runs, seed));
     }
 

@@ -1,5 +1,6 @@
 package org.ampturn.study;
 
+import org.ampturn.units.Require;
 import java.util.Locale;
 import java.util.random.RandomGenerator;
 import org.ampturn.units.Quantity;
@@ -24,6 +25,9 @@ public final class Varied {
     private final String band;
 
     private Varied(String name, Quantity nominal, boolean plainNumber, double half, Shape shape, double sigmas, String band) {
+        if (!Double.isFinite(nominal.si() - half) || !Double.isFinite(nominal.si() + half)) {
+            throw Require.fail("the band of " + name + " (" + band + " about " + nominal + ") reaches beyond the range of a double");
+        }
         this.name = name;
         this.nominal = nominal;
         this.plainNumber = plainNumber;
@@ -50,10 +54,10 @@ public final class Varied {
     /** {@code nominal ± delta}, uniform: {@code Varied.plusMinus("gap", mm(0.30), mm(0.05))}. */
     public static Varied plusMinus(String name, Quantity nominal, Quantity delta) {
         checkNominal(name, nominal);
-        if (delta == null) throw new IllegalArgumentException("the tolerance of " + name + " is missing (null)");
+        if (delta == null) throw Require.fail("the tolerance of " + name + " is missing (null)");
         boolean diff = nominal.isAbsoluteTemperature() && delta.dimension().equals(nominal.dimension());
         if (!delta.dimension().equals(nominal.dimension()) && !diff) {
-            throw new IllegalArgumentException("the tolerance of " + name + " must be a " + nominal.dimension().name() + " like its nominal "
+            throw Require.fail("the tolerance of " + name + " must be a " + nominal.dimension().name() + " like its nominal "
                     + nominal + ", got " + delta + " (" + delta.dimension().name() + ")");
         }
         checkHalf(name, delta.si(), "tolerance");
@@ -74,7 +78,7 @@ public final class Varied {
 
     /** The same band, spread normally with the band at ±{@code sigmas}·σ (e.g. 2 for a 95 % band). */
     public Varied normal(double sigmas) {
-        if (!(sigmas > 0) || Double.isInfinite(sigmas)) throw new IllegalArgumentException("sigmas for " + name + " must be a finite number above zero, got " + sigmas);
+        Require.between("band in standard deviations (sigmas)", sigmas, 0.1, 10);
         return new Varied(name, nominal, plainNumber, half, Shape.NORMAL, sigmas, band);
     }
 
@@ -124,18 +128,18 @@ public final class Varied {
 
     private static double checkNominal(String name, Quantity nominal) {
         Axis.checkName(name);
-        if (nominal == null) throw new IllegalArgumentException("the nominal value of " + name + " is missing (null)");
-        if (!Double.isFinite(nominal.si())) throw new IllegalArgumentException("the nominal value of " + name + " must be finite, got " + nominal);
+        if (nominal == null) throw Require.fail("the nominal value of " + name + " is missing (null)");
+        if (!Double.isFinite(nominal.si())) throw Require.fail("the nominal value of " + name + " must be finite, got " + nominal);
         return nominal.si();
     }
 
     private static void checkFinite(String name, double v) {
         Axis.checkName(name);
-        if (!Double.isFinite(v)) throw new IllegalArgumentException("the nominal value of " + name + " must be finite, got " + v);
+        Require.finite("the nominal value of " + name, v);
     }
 
     private static void checkHalf(String name, double v, String what) {
-        if (!(v >= 0) || Double.isInfinite(v)) throw new IllegalArgumentException("the " + what + " of " + name + " must be a finite value, zero or more, got " + v);
+        Require.nonNegative("the " + what + " of " + name, v);
     }
 
     @Override

@@ -9,7 +9,9 @@
  * {@code null} unless a method says so. Runs use a fixed split into blocks of points and as many
  * threads as the machine has cores (or {@code withThreads(n)}); results never depend on the number
  * of threads. Long runs report to a {@link Progress} listener and stop early, keeping what they have
- * computed, when the calling thread is interrupted.
+ * computed, when the calling thread is interrupted (its workers are interrupted too, so a long point
+ * ends at once). A study's size is checked before it starts: at most 100 000 000 points, and its
+ * table must fit in the memory left; the message names the count.
  *
  * <p>Numerical methods come from Apache Commons Math 3.6.1: Brent's root finder
  * ({@code BrentSolver}; R. P. Brent, <i>Algorithms for Minimization without Derivatives</i>, 1973,

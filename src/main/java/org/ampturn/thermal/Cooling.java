@@ -15,6 +15,14 @@ public interface Cooling {
     /** One line naming the rule and its source. */
     String describe();
 
+    /**
+     * Null where the rule holds at this loss and surface, else a note that it is used outside the
+     * range it was drawn from (an empirical rule extrapolated).
+     */
+    default String rangeNote(double watts, double squareMetres) {
+        return null;
+    }
+
     /** The rise on the Quantity surface. */
     default Quantity rise(Quantity power, Quantity area) {
         double p = Require.nonNegative("power", power, Dimension.POWER);
@@ -49,7 +57,11 @@ public interface Cooling {
     static Cooling surfaceCoefficient(Quantity h) {
         double v = Require.positive("heat transfer coefficient", h, Dimension.HEAT_TRANSFER_COEFFICIENT);
         return new Cooling() {
-            @Override public double riseAt(double watts, double squareMetres) { return watts / (v * squareMetres); }
+            @Override public double riseAt(double watts, double squareMetres) {
+                Require.finite("power (W)", watts);
+                Require.finite("area (m²)", squareMetres);
+                return Require.result("rise", Require.nonNegative("power (W)", watts) / (v * Require.positive("surface area (m²)", squareMetres)));
+            }
             @Override public String describe() { return "surface coefficient h = " + h; }
             @Override public String toString() { return describe(); }
         };

@@ -69,8 +69,8 @@ public final class HeatState {
     public Quantity margin() { return Quantity.of(insulation.limit().si() - kelvin - allowance, Dimension.TEMPERATURE); }
 
     /**
-     * The warnings that apply: hot spot over (or within 10 K of) the insulation class, and a hot
-     * surface that can burn. Empty when none apply.
+     * The warnings that apply: hot spot over (or within 10 K of) the insulation class, a cooling rule
+     * used outside the range it was drawn from, and a hot surface that can burn. Empty when none apply.
      */
     public List<String> warnings() {
         List<String> w = new ArrayList<>();
@@ -82,6 +82,8 @@ public final class HeatState {
             w.add("hot-spot estimate " + hotSpot() + " is within " + Quantity.of(-over, Dimension.TEMPERATURE) + " of thermal " + insulation
                     + " (IEC 60085): the estimate is rough, so measure the coil (resistance method) before relying on it");
         }
+        String range = setup.cooling().rangeNote(totalLoss().si(), setup.areaM2());
+        if (range != null) w.add(range);
         double surfaceC = kelvin - 273.15;
         if (surfaceC > TOUCH_LIMIT_C) {
             w.add("caution: the coil surface reaches about " + temperature() + ", hot enough to burn skin on contact (above about "

@@ -45,22 +45,21 @@ public final class Heating {
 
     /** A winding in 25 °C still air, its own outside surface shedding the heat, class 130 (B) insulation. */
     public static Heating of(Winding winding) {
-        Objects.requireNonNull(winding, "winding");
+        Require.present("winding", winding);
         return new Heating(winding.resistanceAt(Conductor.T20), winding.conductor(), winding.surfaceArea().si(), 298.15,
                 Cooling.handbookRule(), 0, 10, InsulationClass.B);
     }
 
     /** A coil known by its resistance at 20 °C, its conductor and its cooling surface area. */
     public static Heating of(Quantity resistance20, Conductor conductor, Quantity surfaceArea) {
-        Objects.requireNonNull(conductor, "conductor");
+        Require.present("conductor", conductor);
         double r = Require.positive("resistance at 20 °C", resistance20, Dimension.RESISTANCE);
         double a = Require.positive("surface area", surfaceArea, Dimension.AREA);
         return new Heating(r, conductor, a, 298.15, Cooling.handbookRule(), 0, 10, InsulationClass.B);
     }
 
     public Heating withAmbient(Quantity temperature) {
-        double t = Require.si("ambient temperature", temperature, Dimension.TEMPERATURE);
-        Require.between("ambient temperature (K)", t, 173.15, 573.15);
+        double t = Require.absoluteTemperature("ambient temperature", temperature, 173.15, 573.15, "the cooling rules");
         return new Heating(r20, conductor, area, t, cooling, extraWatts, allowance, insulation);
     }
 
@@ -70,7 +69,7 @@ public final class Heating {
     }
 
     public Heating withCooling(Cooling c) {
-        Objects.requireNonNull(c, "cooling");
+        Require.present("cooling", c);
         return new Heating(r20, conductor, area, ambient, c, extraWatts, allowance, insulation);
     }
 
@@ -87,7 +86,7 @@ public final class Heating {
     }
 
     public Heating withInsulationClass(InsulationClass c) {
-        Objects.requireNonNull(c, "insulation class");
+        Require.present("insulation class", c);
         return new Heating(r20, conductor, area, ambient, cooling, extraWatts, allowance, c);
     }
 

@@ -1,5 +1,6 @@
 package org.ampturn.thermal;
 
+import org.ampturn.units.Require;
 import org.ampturn.units.Quantity;
 
 /**
@@ -30,18 +31,18 @@ public enum InsulationClass {
     /** The class by its temperature: 90, 105, 120, 130, 155, 180, 200, 220 or 250. */
     public static InsulationClass of(int celsius) {
         for (InsulationClass c : values()) if (c.celsius == celsius) return c;
-        throw new IllegalArgumentException("thermal class " + celsius + " is not one of IEC 60085's: 90, 105, 120, 130, 155, 180, 200, 220, 250");
+        throw Require.fail("thermal class " + celsius + " is not one of IEC 60085's: 90, 105, 120, 130, 155, 180, 200, 220, 250");
     }
 
     /** The class by its letter (Y, A, E, B, F, H, N, R) or its number as text ("155"). */
     public static InsulationClass of(String name) {
-        if (name == null) throw new IllegalArgumentException("thermal class is missing (null); write a letter such as \"F\" or a number such as \"155\"");
+        if (name == null) throw Require.fail("thermal class is missing (null); write a letter such as \"F\" or a number such as \"155\"");
         String s = name.strip().toUpperCase(java.util.Locale.ROOT);
         for (InsulationClass c : values()) if (!c.letter.isEmpty() && c.letter.equals(s)) return c;
         try {
             return of(Integer.parseInt(s));
         } catch (NumberFormatException e) {
-            throw new IllegalArgumentException("cannot read \"" + name + "\" as a thermal class; write Y, A, E, B, F, H, N, R or 90 … 250");
+            throw Require.fail("cannot read \"" + name + "\" as a thermal class; write Y, A, E, B, F, H, N, R or 90 … 250");
         }
     }
 

@@ -9,9 +9,18 @@ import java.util.Arrays;
 public final class Dimension {
     private static final String[] BASE = {"m", "kg", "s", "A", "K"};
 
+    /** Largest exponent of a base unit a dimension may have (either sign); no quantity of the trade comes near it. */
+    public static final int MAX_EXPONENT = 24;
+
     private final int[] exp;
 
     private Dimension(int... exp) {
+        for (int e : exp) {
+            if (e > MAX_EXPONENT || e < -MAX_EXPONENT) {
+                throw Require.fail("a unit exponent of " + e + " is out of range: each base unit's exponent must be from "
+                        + -MAX_EXPONENT + " to " + MAX_EXPONENT);
+            }
+        }
         this.exp = exp;
     }
 
@@ -61,6 +70,7 @@ public final class Dimension {
     public static final Dimension HEAT_CAPACITY = of(2, 1, -2, 0, -1);
 
     public int exponent(int baseIndex) {
+        Require.between("base unit index (0 m, 1 kg, 2 s, 3 A, 4 K)", baseIndex, 0, 4);
         return exp[baseIndex];
     }
 
@@ -69,12 +79,14 @@ public final class Dimension {
     }
 
     public Dimension times(Dimension o) {
+        Require.present("dimension", o);
         int[] r = new int[5];
         for (int i = 0; i < 5; i++) r[i] = exp[i] + o.exp[i];
         return new Dimension(r);
     }
 
     public Dimension div(Dimension o) {
+        Require.present("dimension", o);
         int[] r = new int[5];
         for (int i = 0; i < 5; i++) r[i] = exp[i] - o.exp[i];
         return new Dimension(r);
@@ -82,16 +94,24 @@ public final class Dimension {
 
     public Dimension pow(int n) {
         int[] r = new int[5];
-        for (int i = 0; i < 5; i++) r[i] = exp[i] * n;
+        for (int i = 0; i < 5; i++) {
+            long e = (long) exp[i] * n;
+            if (Math.abs(e) > MAX_EXPONENT) {
+                throw Require.fail("cannot raise " + baseSymbols() + " to the power " + n + ": exponents must stay within ±"
+                        + MAX_EXPONENT);
+            }
+            r[i] = (int) e;
+        }
         return new Dimension(r);
     }
 
     /** The n-th root; fails when an exponent is not divisible by n. */
     public Dimension root(int n) {
         int[] r = new int[5];
+        if (n < 1) throw Require.fail("cannot take root " + n + " of " + baseSymbols() + ": the root must be 1 or more");
         for (int i = 0; i < 5; i++) {
             if (exp[i] % n != 0) {
-                throw new ArithmeticException("cannot take root " + n + " of " + baseSymbols()
+                throw Require.fail("cannot take root " + n + " of " + baseSymbols()
                         + ": the exponents are not divisible by " + n);
             }
             r[i] = exp[i] / n;

@@ -26,13 +26,17 @@ public final class Quantity implements Comparable<Quantity> {
     private final boolean absolute;
 
     private Quantity(double si, Dimension dimension, boolean absolute) {
-        if (dimension == null) throw new IllegalArgumentException("a quantity needs a dimension");
+        if (dimension == null) throw Require.fail("a quantity needs a dimension");
         this.si = si;
         this.dimension = dimension;
         this.absolute = absolute && dimension.equals(Dimension.TEMPERATURE);
     }
 
-    /** A quantity from its SI value. */
+    /**
+     * A quantity from its SI value. This is the kernels' wrapper and checks nothing: NaN stands for a
+     * figure that does not apply (a drop-out time of a coil without an armature). What a user types
+     * ({@link #of(double, String)}, {@link #parse}) and the arithmetic never give NaN or an infinity.
+     */
     public static Quantity of(double si, Dimension dimension) {
         return new Quantity(si, dimension, false);
     }
@@ -40,7 +44,10 @@ public final class Quantity implements Comparable<Quantity> {
     /** A quantity from a value in a unit: {@code Quantity.of(4.7, "mH")}. */
     public static Quantity of(double value, String unit) {
         Unit u = Unit.parse(unit);
-        return new Quantity(u.toSi(value), u.dimension(), u.isOffset());
+        if (!Double.isFinite(value)) throw Require.fail("a value in " + unit + " must be a finite number, got " + Require.show(value));
+        double si = u.toSi(value);
+        if (!Double.isFinite(si)) throw Require.fail(Require.show(value) + " " + unit + " is beyond the range of a double in SI units");
+        return new Quantity(si, u.dimension(), u.isOffset());
     }
 
     /** A pure number. */
@@ -53,8 +60,11 @@ public final class Quantity implements Comparable<Quantity> {
         return new Quantity(kelvin, Dimension.TEMPERATURE, true);
     }
 
-    /** An absolute temperature from degrees Celsius. */
+    /** An absolute temperature from degrees Celsius; at or above absolute zero and finite. */
     public static Quantity celsius(double degC) {
+        if (!(degC >= -Units.ZERO_CELSIUS) || Double.isInfinite(degC)) {
+            throw Require.fail("a temperature in °C must be a finite number from -273.15 up, got " + Require.show(degC));
+        }
         return new Quantity(degC + Units.ZERO_CELSIUS, Dimension.TEMPERATURE, true);
     }
 
@@ -64,31 +74,72 @@ public final class Quantity implements Comparable<Quantity> {
     /**
      * Reads what engineers type: {@code 4.7 mH}, {@code 4.7mH}, {@code 1.2 kohm}, {@code 1.2 kΩ},
      * {@code 25 mm}, {@code 0.35 T}, {@code 40 degC}, {@code 100 kHz}, {@code 2.5 A/mm^2}.
+     * Only finite values that a {@code double} holds are accepted: NaN, infinities, numbers that
+     * overflow ({@code 1e999}) and non-zero numbers that underflow to zero ({@code 1e-400}) are
+     * refused with the position of the number.
      */
     public static Quantity parse(String text) {
-        if (text == null) throw new IllegalArgumentException("cannot read a quantity from null");
+        if (text == null) throw Require.fail("cannot read a quantity from null");
         Matcher m = NUMBER.matcher(text);
         if (!m.find()) {
             int at = firstNonSpace(text);
-            throw new IllegalArgumentException("cannot read \"" + text + "\" as a quantity: a number is expected at position "
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: a number is expected at position "
                     + (at + 1) + "; write for example 4.7 mH, 25 mm, 1.2 kΩ, 40 degC");
         }
         String num = m.group(1);
-        double v;
+        int at = m.start(1) + 1;
         String bare = num.replaceFirst("^[+-]", "");
-        double sign = num.startsWith("-") ? -1 : 1;
-        if (bare.equals("NaN")) v = Double.NaN;
-        else if (bare.equals("Infinity") || bare.equals("inf") || bare.equals("∞")) v = sign * Double.POSITIVE_INFINITY;
-        else v = Double.parseDouble(num);
+        if (bare.equals("NaN") || bare.equals("Infinity") || bare.equals("inf") || bare.equals("∞")) {
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: " + bare
+                    + " at position " + at + " is not a finite number");
+        }
+        double v = Double.parseDouble(num);
+        if (Double.isInfinite(v)) {
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: the number at position " + at
+                    + " is too large (a double holds up to about 1.8e308)");
+        }
+        if (!(Math.abs(v) >= Double.MIN_NORMAL) && hasNonZeroDigit(num)) {
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: the number at position " + at
+                    + " is too small to hold (below about 2.2e-308) but is not zero");
+        }
         String rest = text.substring(m.end());
         Unit u;
         try {
             u = Unit.parse(rest.strip());
-        } catch (IllegalArgumentException e) {
-            throw new IllegalArgumentException("cannot read \"" + text + "\" as a quantity: "
-                    + e.getMessage().replaceFirst("^cannot read unit \"[^\"]*\": ", "in the unit \"" + rest.strip() + "\", "), e);
+        } catch (UnitParser.Failure e) {
+            // the unit text is the rest stripped: its position 0 is the first non-space after the number
+            int unitAt = m.end() + firstNonSpace(rest);
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: " + e.reason + " at position "
+                    + (unitAt + e.position + 1) + "; write for example 4.7 mH, 2.5 A/mm^2, 40 degC", e);
         }
-        return new Quantity(u.toSi(v), u.dimension(), u.isOffset());
+        double si = u.toSi(v);
+        if (!Double.isFinite(si) || v != 0 && !(Math.abs(si) >= Double.MIN_NORMAL)) {
+            throw Require.fail("cannot read " + quote(text) + " as a quantity: " + num + " " + rest.strip()
+                    + " is beyond the range of a double in SI units");
+        }
+        return new Quantity(si, u.dimension(), u.isOffset());
+    }
+
+    private static boolean hasNonZeroDigit(String num) {
+        int e = num.toLowerCase(Locale.ROOT).indexOf('e');
+        String mant = e < 0 ? num : num.substring(0, e);
+        for (int i = 0; i < mant.length(); i++) {
+            char c = mant.charAt(i);
+            if (c >= '1' && c <= '9') return true;
+        }
+        return false;
+    }
+
+    /** Text for a message, in quotes, cut to 40 characters. */
+    static String quote(String text) {
+        if (text == null) return "null";
+        String t = text.length() <= 40 ? text : text.substring(0, 39) + "…";
+        StringBuilder sb = new StringBuilder("\"");
+        for (int i = 0; i < t.length(); i++) {
+            char c = t.charAt(i);
+            sb.append(Character.isISOControl(c) ? '⏎' : c);
+        }
+        return sb.append('"').toString();
     }
 
     private static int firstNonSpace(String s) {
@@ -105,7 +156,7 @@ public final class Quantity implements Comparable<Quantity> {
     /** Sets the significant digits used by {@link #toString()} (1 to 15). */
     public static void setDisplayDigits(int digits) {
         if (digits < 1 || digits > 15) {
-            throw new IllegalArgumentException("digits must be between 1 and 15, got " + digits);
+            throw Require.fail("digits must be between 1 and 15, got " + digits);
         }
         displayDigits = digits;
     }
@@ -128,7 +179,7 @@ public final class Quantity implements Comparable<Quantity> {
     public double in(String unit) {
         Unit u = Unit.parse(unit);
         if (!u.dimension().equals(dimension)) {
-            throw new IllegalArgumentException("cannot express " + this + " (" + dimension.name() + ") in " + unit
+            throw Require.fail("cannot express " + this + " (" + dimension.name() + ") in " + unit
                     + " (" + u.dimension().name() + ")");
         }
         return u.fromSi(si);
@@ -136,8 +187,9 @@ public final class Quantity implements Comparable<Quantity> {
 
     /** Fails unless this quantity has the given dimension; returns the SI value. */
     public double si(Dimension expected) {
+        Require.present("expected dimension", expected);
         if (!dimension.equals(expected)) {
-            throw new IllegalArgumentException("expected a " + expected.name() + ", got " + this + " (" + dimension.name() + ")");
+            throw Require.fail("expected a " + expected.name() + ", got " + this + " (" + dimension.name() + ")");
         }
         return si;
     }
@@ -149,39 +201,66 @@ public final class Quantity implements Comparable<Quantity> {
     public Quantity plus(Quantity o) {
         requireSame(o, "add", "to");
         if (absolute && o.absolute) {
-            throw new IllegalArgumentException("cannot add two temperatures (" + this + " and " + o
+            throw Require.fail("cannot add two temperatures (" + this + " and " + o
                     + "); subtract them to get a difference, or add a difference in K");
         }
-        return new Quantity(si + o.si, dimension, absolute || o.absolute);
+        return checked(new Quantity(si + o.si, dimension, absolute || o.absolute), o, "+", o);
     }
 
     public Quantity minus(Quantity o) {
         requireSame(o, "subtract", "from");
-        return new Quantity(si - o.si, dimension, absolute && !o.absolute);
+        return checked(new Quantity(si - o.si, dimension, absolute && !o.absolute), o, "−", o);
     }
 
     public Quantity times(Quantity o) {
-        return new Quantity(si * o.si, dimension.times(o.dimension), false);
+        requireOperand(o, "multiply", "by");
+        return checked(new Quantity(si * o.si, dimension.times(o.dimension), false), o, "×", o);
     }
 
     public Quantity times(double k) {
-        return new Quantity(si * k, dimension, false);
+        Require.finite("factor", k);
+        return checked(new Quantity(si * k, dimension, false), k, "×", Require.show(k));
     }
 
     public Quantity div(Quantity o) {
-        return new Quantity(si / o.si, dimension.div(o.dimension), false);
+        requireOperand(o, "divide", "by");
+        if (o.si == 0) throw Require.fail("cannot divide " + this + " by zero (" + o + ")");
+        return checked(new Quantity(si / o.si, dimension.div(o.dimension), false), o, "÷", o);
     }
 
     public Quantity div(double k) {
-        return new Quantity(si / k, dimension, false);
+        Require.finite("divisor", k);
+        if (k == 0) throw Require.fail("cannot divide " + this + " by zero");
+        return checked(new Quantity(si / k, dimension, false), k, "÷", Require.show(k));
     }
 
     public Quantity pow(int n) {
-        return new Quantity(Math.pow(si, n), dimension.pow(n), false);
+        if (si == 0 && n < 0) throw Require.fail("cannot raise zero (" + this + ") to the power " + n);
+        return checked(new Quantity(Math.pow(si, n), dimension.pow(n), false), n, "^", n);
     }
 
     public Quantity sqrt() {
-        return new Quantity(Math.sqrt(si), dimension.root(2), false);
+        if (si < 0) throw Require.fail("cannot take the square root of a negative quantity, " + this);
+        return checked(new Quantity(Math.sqrt(si), dimension.root(2), false), 0.0, "√", "");
+    }
+
+    private void requireComparable(Quantity o) {
+        if (!Double.isFinite(si) || !Double.isFinite(o.si)) {
+            throw Require.fail("cannot take the smaller or larger of " + this + " and " + o + ": an operand is not a finite number");
+        }
+    }
+
+    private void requireOperand(Quantity o, String verb, String prep) {
+        if (o == null) throw Require.fail("cannot " + verb + " " + this + " " + prep + " nothing (null)");
+    }
+
+    /** The result, unless finite operands gave an infinite or NaN value (an overflow). */
+    private Quantity checked(Quantity r, Object other, String op, Object otherText) {
+        if (Double.isFinite(r.si)) return r;
+        if (!Double.isFinite(si) || other instanceof Quantity && !Double.isFinite(((Quantity) other).si)) {
+            throw Require.fail("cannot compute " + this + " " + op + " " + otherText + ": an operand is not a finite number");
+        }
+        throw Require.fail("the result of " + this + " " + op + " " + otherText + " overflows: beyond about 1.8e308 in SI units");
     }
 
     public Quantity negate() {
@@ -194,17 +273,19 @@ public final class Quantity implements Comparable<Quantity> {
 
     public Quantity min(Quantity o) {
         requireSame(o, "compare", "with");
+        requireComparable(o);
         return si <= o.si ? this : o;
     }
 
     public Quantity max(Quantity o) {
         requireSame(o, "compare", "with");
+        requireComparable(o);
         return si >= o.si ? this : o;
     }
 
     /** True when both have the same dimension and differ by at most {@code relTol} of the larger magnitude. */
     public boolean isCloseTo(Quantity o, double relTol) {
-        if (!dimension.equals(o.dimension)) return false;
+        if (o == null || !dimension.equals(o.dimension)) return false;
         if (si == o.si) return true;
         return Math.abs(si - o.si) <= relTol * Math.max(Math.abs(si), Math.abs(o.si));
     }
@@ -216,9 +297,9 @@ public final class Quantity implements Comparable<Quantity> {
     }
 
     private void requireSame(Quantity o, String verb, String prep) {
-        if (o == null) throw new IllegalArgumentException("cannot " + verb + " nothing (null) " + prep + " " + this);
+        if (o == null) throw Require.fail("cannot " + verb + " nothing (null) " + prep + " " + this);
         if (!dimension.equals(o.dimension)) {
-            throw new IllegalArgumentException("cannot " + verb + " " + o + " " + prep + " " + this
+            throw Require.fail("cannot " + verb + " " + o + " " + prep + " " + this
                     + " (" + o.dimension.name() + " and " + dimension.name() + ")");
         }
     }
@@ -231,7 +312,7 @@ public final class Quantity implements Comparable<Quantity> {
 
     /** Engineering notation with the given number of significant digits. */
     public String format(int digits) {
-        if (digits < 1 || digits > 17) throw new IllegalArgumentException("digits must be between 1 and 17, got " + digits);
+        if (digits < 1 || digits > 17) throw Require.fail("digits must be between 1 and 17, got " + digits);
         if (absolute) {
             return plain(si - Units.ZERO_CELSIUS, digits) + " °C";
         }
@@ -256,6 +337,12 @@ public final class Quantity implements Comparable<Quantity> {
                 chosen = u;
                 break;
             }
+        }
+        double shown = round(a / chosen.factor(), digits);
+        if (shown < 1e-3 || shown >= 1e6) {
+            // beyond the display units: a power of ten in the base unit, never a zero for a value that is not zero
+            Unit base = baseOf(units);
+            return plain(si / base.factor(), digits) + " " + base.symbol();
         }
         return fixed(si / chosen.factor(), digits) + " " + chosen.symbol();
     }

@@ -25,10 +25,11 @@ public final class Unit {
 
     /** Reads a unit expression; fails with a message that names the text and the position. */
     public static Unit parse(String text) {
+        if (text == null) throw Require.fail("a unit is missing (null); give one such as \"mH\" or \"\" for a pure number");
         Unit u = CACHE.get(text);
         if (u == null) {
             u = new UnitParser(text).parse();
-            if (CACHE.size() < 10_000) CACHE.put(text, u);
+            if (CACHE.size() < 10_000 && text.length() <= 64) CACHE.put(text, u); // long texts are rare: no cache of megabytes
         }
         return u;
     }
@@ -52,11 +53,13 @@ public final class Unit {
     }
 
     public double toSi(double value) {
-        return value * factor + offset;
+        Require.finite("value", value);
+        return Require.result("to si", value * factor + offset);
     }
 
     public double fromSi(double si) {
-        return (si - offset) / factor;
+        Require.finite("SI value", si);
+        return Require.result("from si", (si - offset) / factor);
     }
 
     @Override

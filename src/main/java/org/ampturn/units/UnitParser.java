@@ -1,7 +1,8 @@
 package org.ampturn.units;
 
 /**
- * Recursive-descent reader of unit expressions.
+ * Recursive-descent reader of unit expressions. Brackets nest at most {@link #MAX_DEPTH} deep and an
+ * exponent has at most three digits, so no text can exhaust the stack or overflow an exponent.
  * <pre>
  *   expr   := term (('·' | '*' | '.' | ' ' | '/') term)*
  *   term   := '1' | '(' expr ')' | symbol power?
@@ -10,8 +11,12 @@ package org.ampturn.units;
  * A '/' divides by the single term that follows it, as in {@code W/(m²·K)}.
  */
 final class UnitParser {
+    /** Deepest nesting of brackets accepted. */
+    static final int MAX_DEPTH = 16;
+
     private final String text;
     private int pos;
+    private int depth;
 
     UnitParser(String text) {
         this.text = text;
@@ -56,12 +61,22 @@ final class UnitParser {
             skipSpaces();
             double[] g = {1};
             Dimension e = term(g);
-            if (divide) {
-                f[0] /= g[0];
-                d = d.div(e);
-            } else {
-                f[0] *= g[0];
-                d = d.times(e);
+            int at = pos;
+            try {
+                if (divide) {
+                    f[0] /= g[0];
+                    d = d.div(e);
+                } else {
+                    f[0] *= g[0];
+                    d = d.times(e);
+                }
+            } catch (IllegalArgumentException x) {
+                pos = at;
+                throw error("the units make an exponent beyond ±" + Dimension.MAX_EXPONENT);
+            }
+            if (!(f[0] > 0 && Double.isFinite(f[0]) && f[0] >= Double.MIN_NORMAL)) {
+                pos = at;
+                throw error("the units make a scale factor a double cannot hold");
             }
         }
     }
@@ -71,12 +86,14 @@ final class UnitParser {
         char c = text.charAt(pos);
         Dimension d;
         if (c == '(') {
+            if (++depth > MAX_DEPTH) throw error("brackets nest more than " + MAX_DEPTH + " deep");
             pos++;
             skipSpaces();
             d = expr(f);
             skipSpaces();
             if (pos >= text.length() || text.charAt(pos) != ')') throw error("')' expected");
             pos++;
+            depth--;
         } else if (c == '1') {
             pos++;
             d = Dimension.NONE;
@@ -88,15 +105,25 @@ final class UnitParser {
             Unit u = Units.simple(sym);
             if (u == null) {
                 pos = start;
-                throw error("unknown unit \"" + sym + "\"");
+                throw error("unknown unit " + Quantity.quote(sym));
             }
             f[0] *= u.factor();
             d = u.dimension();
         }
+        int at = pos;
         int p = power();
         if (p != 1) {
             f[0] = Math.pow(f[0], p);
-            d = d.pow(p);
+            try {
+                d = d.pow(p);
+            } catch (IllegalArgumentException e) {
+                pos = at;
+                throw error("the power " + p + " makes an exponent beyond ±" + Dimension.MAX_EXPONENT);
+            }
+            if (!(f[0] > 0 && Double.isFinite(f[0]) && f[0] >= Double.MIN_NORMAL)) {
+                pos = at;
+                throw error("the power " + p + " makes a scale factor a double cannot hold");
+            }
         }
         return d;
     }
@@ -109,6 +136,10 @@ final class UnitParser {
             while (pos < text.length() && Character.isDigit(text.charAt(pos))) pos++;
             String s = text.substring(start, pos);
             if (s.isEmpty() || s.equals("-") || s.equals("+")) throw error("an exponent is expected after '^'");
+            if (s.replaceFirst("^[+-]", "").length() > 3) {
+                pos = start;
+                throw error("an exponent of at most 3 digits is expected");
+            }
             return Integer.parseInt(s);
         }
         int sign = 1;
@@ -122,6 +153,10 @@ final class UnitParser {
         while (pos < text.length()) {
             int dgt = Units.superscriptDigit(text.charAt(pos));
             if (dgt < 0) break;
+            if (value >= 100) {
+                pos = start;
+                throw error("an exponent of at most 3 digits is expected");
+            }
             value = value * 10 + dgt;
             any = true;
             pos++;
@@ -141,8 +176,21 @@ final class UnitParser {
         while (pos < text.length() && text.charAt(pos) == ' ') pos++;
     }
 
-    private IllegalArgumentException error(String what) {
-        return new IllegalArgumentException("cannot read unit \"" + text + "\": " + what + " at position "
-                + (pos + 1) + "; expected units such as mH, kΩ, mm, A/mm^2, W/(m²·K), degC");
+    private Failure error(String what) {
+        return new Failure(text, what, pos);
+    }
+
+    /** A unit text that cannot be read: the reason and the position (from 0) kept apart for callers that quote more text. */
+    static final class Failure extends IllegalArgumentException {
+        private static final long serialVersionUID = 1L;
+        final String reason;
+        final int position;
+
+        Failure(String text, String reason, int position) {
+            super("cannot read unit " + Quantity.quote(text) + ": " + reason + " at position " + (position + 1)
+                    + "; expected units such as mH, kΩ, mm, A/mm^2, W/(m²·K), degC");
+            this.reason = reason;
+            this.position = position;
+        }
     }
 }

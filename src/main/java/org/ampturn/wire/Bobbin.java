@@ -36,9 +36,9 @@ public final class Bobbin {
      * @param depth radial depth available for the winding
      */
     public static Bobbin of(Quantity width, Quantity innerDiameter, Quantity depth) {
-        double w = Require.positive("winding width", width, Dimension.LENGTH);
-        double di = Require.positive("inner diameter", innerDiameter, Dimension.LENGTH);
-        double h = Require.positive("winding depth", depth, Dimension.LENGTH);
+        double w = Require.length("winding width", width);
+        double di = Require.length("inner diameter", innerDiameter);
+        double h = Require.length("winding depth", depth);
         return new Bobbin(w, h, di, Double.NaN, Double.NaN);
     }
 
@@ -51,10 +51,10 @@ public final class Bobbin {
      * @param depth depth available for the winding
      */
     public static Bobbin rectangular(Quantity width, Quantity tubeSideA, Quantity tubeSideB, Quantity depth) {
-        double w = Require.positive("winding width", width, Dimension.LENGTH);
-        double a = Require.positive("tube side A", tubeSideA, Dimension.LENGTH);
-        double b = Require.positive("tube side B", tubeSideB, Dimension.LENGTH);
-        double h = Require.positive("winding depth", depth, Dimension.LENGTH);
+        double w = Require.length("winding width", width);
+        double a = Require.length("tube side A", tubeSideA);
+        double b = Require.length("tube side B", tubeSideB);
+        double h = Require.length("winding depth", depth);
         return new Bobbin(w, h, Double.NaN, a, b);
     }
 
@@ -97,8 +97,9 @@ public final class Bobbin {
 
     /** Kernel: length (m) of one turn whose centre is at height r (m) above the tube. */
     public double turnLengthAt(double heightAboveTube) {
-        if (isRound()) return Math.PI * (innerDiameter + 2 * heightAboveTube);
-        return 2 * (sideA + sideB) + 2 * Math.PI * heightAboveTube;
+        Require.finite("height above tube", heightAboveTube);
+        if (isRound()) return Require.result("turn length", Math.PI * (innerDiameter + 2 * heightAboveTube));
+        return Require.result("turn length", 2 * (sideA + sideB) + 2 * Math.PI * heightAboveTube);
     }
 
     /** Kernel: the perimeter of the outside of a winding of build b (m) (for its cooling surface). */

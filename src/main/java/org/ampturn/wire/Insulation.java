@@ -58,7 +58,7 @@ public final class Insulation {
 
     /** An insulation of a fixed increase in diameter (twice the film thickness), from a datasheet. */
     public static Insulation ofIncrease(Quantity increaseInDiameter) {
-        double inc = Require.nonNegative("increase in diameter", increaseInDiameter, Dimension.LENGTH);
+        double inc = Require.lengthOrZero("increase in diameter", increaseInDiameter);
         return new Insulation("+" + Quantity.of(inc, Dimension.LENGTH) + " film", null, inc);
     }
 
@@ -66,20 +66,21 @@ public final class Insulation {
 
     /** Increase in diameter for a bare diameter. */
     public Quantity increase(Quantity bareDiameter) {
-        return Quantity.of(increaseAt(Require.positive("bare diameter", bareDiameter, Dimension.LENGTH)), Dimension.LENGTH);
+        return Quantity.of(increaseAt(Require.length("bare diameter", bareDiameter)), Dimension.LENGTH);
     }
 
     /** Kernel: increase in diameter (m) for a bare diameter (m). */
     public double increaseAt(double bareMetres) {
-        if (table == null) return fixed;
+        Require.finite("bare metres", bareMetres);
+        if (table == null) return Require.result("increase", fixed);
         double dmm = bareMetres * 1e3;
-        if (dmm <= D[0]) return table[0] * 1e-3;
+        if (dmm <= D[0]) return Require.result("increase", table[0] * 1e-3);
         int n = D.length;
-        if (dmm >= D[n - 1]) return table[n - 1] * 1e-3;
+        if (dmm >= D[n - 1]) return Require.result("increase", table[n - 1] * 1e-3);
         int i = 0;
         while (dmm > D[i + 1]) i++;
         double u = Math.log(dmm / D[i]) / Math.log(D[i + 1] / D[i]);
-        return Math.exp(Math.log(table[i]) + u * Math.log(table[i + 1] / table[i])) * 1e-3;
+        return Require.result("increase", Math.exp(Math.log(table[i]) + u * Math.log(table[i + 1] / table[i])) * 1e-3);
     }
 
     @Override

@@ -1,5 +1,6 @@
 package org.ampturn.wire;
 
+import org.ampturn.units.Require;
 /** The lattice of a round-wire winding (see {@link Packing}); lengths in metres. */
 final class Layout {
     private Layout() {}
@@ -16,7 +17,7 @@ final class Layout {
     /** Layers that fit in a depth h. */
     static int layersThatFit(double h, double d, Packing p) {
         if (h < d * (1 - EPS)) return 0;
-        if (h / d > 1e8) throw new IllegalArgumentException("the winding depth is more than 1e8 wire diameters; check the units");
+        if (h / d > 1e8) throw Require.fail("the winding depth is more than 1e8 wire diameters; check the units");
         if (p == Packing.LAYERED) return (int) Math.floor(h / d * (1 + EPS));
         return 1 + (int) Math.floor((h - d) / (d * ROOT3_2) * (1 + EPS) + EPS);
     }

@@ -1,5 +1,6 @@
 package org.ampturn.wire;
 
+import org.ampturn.units.Require;
 import org.ampturn.material.MagneticMaterial;
 
 /**
@@ -25,15 +26,18 @@ public final class SkinEffect {
 
     /** Kernel: skin depth (m) for resistivity ρ (Ω·m) and frequency f (Hz), μr = 1. */
     public static double depthAt(double resistivity, double frequency) {
-        return Math.sqrt(resistivity / (Math.PI * frequency * MagneticMaterial.MU0));
+        Require.finite("resistivity", resistivity);
+        Require.finite("frequency (Hz)", frequency);
+        return Require.result("depth", Math.sqrt(resistivity / (Math.PI * frequency * MagneticMaterial.MU0)));
     }
 
     /** Kernel: R_ac/R_dc of an isolated round wire for the ratio of radius to skin depth a/δ. */
     public static double roundWireFactorAt(double radiusOverDepth) {
+        Require.finite("radius over depth", radiusOverDepth);
         double x = radiusOverDepth;
-        if (!(x >= 0)) throw new IllegalArgumentException("radius/skin depth must be zero or more, got " + x);
-        if (x > SERIES_LIMIT) return asymptoticFactorAt(x);
-        if (x == 0) return 1;
+        if (!(x >= 0)) throw Require.fail("radius/skin depth must be zero or more, got " + x);
+        if (x > SERIES_LIMIT) return Require.result("round wire factor", asymptoticFactorAt(x));
+        if (x == 0) return Require.result("round wire factor", 1);
         // z = k a = (1 - j) x ; J0(z) and J1(z) by their power series in (z/2)^2
         double zr = x, zi = -x;
         double wr = (zr * zr - zi * zi) / 4, wi = (2 * zr * zi) / 4; // w = (z/2)^2 = -j x²/2
@@ -56,12 +60,13 @@ public final class SkinEffect {
         // (z/2) J0/J1 = (z/2) s0 / ((z/2) s1) = s0/s1; the ratio R_ac/R_dc = Re[(z/2) J0/J1] = Re[(z/2)·s0/((z/2)·s1)]·... :
         // (k a/2)·J0/J1 with J1 = (z/2)·s1 gives s0/s1.
         double den = s1r * s1r + s1i * s1i;
-        return (s0r * s1r + s0i * s1i) / den;
+        return Require.result("round wire factor", (s0r * s1r + s0i * s1i) / den);
     }
 
     /** Kernel: the large-a/δ expansion a/(2δ) + 1/4 + 3δ/(32 a) of the round-wire factor. */
     public static double asymptoticFactorAt(double radiusOverDepth) {
+        Require.finite("radius over depth", radiusOverDepth);
         double x = radiusOverDepth;
-        return x / 2 + 0.25 + 3 / (32 * x);
+        return Require.result("asymptotic factor", x / 2 + 0.25 + 3 / (32 * x));
     }
 }

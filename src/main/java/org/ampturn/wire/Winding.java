@@ -34,7 +34,7 @@ public final class Winding {
         double d = wire.overallDiameterM();
         int first = Layout.turnsPerLayer(bobbin.widthM(), d, 1, packing);
         if (first < 1) {
-            throw new IllegalArgumentException("the wire (" + wire.size() + ", " + wire.overallDiameter()
+            throw Require.fail("the wire (" + wire.size() + ", " + wire.overallDiameter()
                     + " overall) is wider than the winding width " + bobbin.width() + ": not one turn fits in a layer");
         }
         int second = Layout.turnsPerLayer(bobbin.widthM(), d, 2, packing);
@@ -42,7 +42,7 @@ public final class Winding {
         double build = Layout.build(d, (int) Math.min(Integer.MAX_VALUE, needed), packing);
         if (build > bobbin.depthM() * (1 + 1e-9)) {
             int cap = bobbin.capacity(wire, packing);
-            throw new IllegalArgumentException(turns + " turns of " + wire.size() + " (" + wire.overallDiameter() + " overall) do not fit: "
+            throw Require.fail(turns + " turns of " + wire.size() + " (" + wire.overallDiameter() + " overall) do not fit: "
                     + "they need " + needed + " layers of up to " + first + " turns (" + packing + "), "
                     + q(build) + " deep, and the bobbin is " + bobbin.depth() + " deep, " + q(build - bobbin.depthM())
                     + " too shallow. It holds at most " + cap + " turns, " + (turns - cap) + " fewer than asked");
@@ -71,18 +71,21 @@ public final class Winding {
 
     /** {@code turns} turns of {@code wire} on {@code bobbin} with the given packing. Fails when they do not fit. */
     public static Winding of(Wire wire, int turns, Bobbin bobbin, Packing packing) {
-        Objects.requireNonNull(wire, "wire");
-        Objects.requireNonNull(bobbin, "bobbin");
-        Objects.requireNonNull(packing, "packing");
-        Require.positive("turns", turns);
+        Require.present("wire", wire);
+        Require.present("bobbin", bobbin);
+        Require.present("packing", packing);
+        Require.turns("turns", turns);
         return new Winding(wire, turns, bobbin, packing);
     }
 
     /** The most turns that fill the bobbin with this wire and packing. */
     public static Winding full(Wire wire, Bobbin bobbin, Packing packing) {
+        Require.present("wire", wire);
+        Require.present("bobbin", bobbin);
+        Require.present("packing", packing);
         int cap = bobbin.capacity(wire, packing);
         if (cap < 1) {
-            throw new IllegalArgumentException("not one turn of " + wire.size() + " (" + wire.overallDiameter() + " overall) fits on the "
+            throw Require.fail("not one turn of " + wire.size() + " (" + wire.overallDiameter() + " overall) fits on the "
                     + bobbin);
         }
         return new Winding(wire, cap, bobbin, packing);
@@ -219,7 +222,10 @@ public final class Winding {
     // ---- kernels ----
 
     /** Kernel: DC resistance (Ω) at a temperature (K). */
-    public double resistanceAt(double kelvin) { return wire.resistancePerLengthAt(kelvin) * length; }
+    public double resistanceAt(double kelvin) {
+        Require.finite("temperature (K)", kelvin);
+        return Require.result("resistance", wire.resistancePerLengthAt(kelvin) * length);
+    }
 
     /** Kernel: wire length (m). */
     public double wireLengthM() { return length; }

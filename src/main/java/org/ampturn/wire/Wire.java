@@ -52,7 +52,7 @@ public final class Wire {
      * An AWG size from text: "24", "24.5", "0", "00", "000", "0000", "1/0", "2/0", "3/0", "4/0".
      */
     public static Wire awg(String gauge) {
-        if (gauge == null) throw new IllegalArgumentException("AWG gauge is missing (null); write for example \"24\" or \"4/0\"");
+        if (gauge == null) throw Require.fail("AWG gauge is missing (null); write for example \"24\" or \"4/0\"");
         String g = gauge.strip();
         double n;
         if (g.matches("0{2,4}")) {
@@ -63,7 +63,7 @@ public final class Wire {
             try {
                 n = Double.parseDouble(g);
             } catch (NumberFormatException e) {
-                throw new IllegalArgumentException("cannot read \"" + gauge + "\" as an AWG gauge; write a number from 0000 (4/0) to 56, e.g. \"24\", \"24.5\", \"2/0\"");
+                throw Require.fail("cannot read \"" + gauge + "\" as an AWG gauge; write a number from 0000 (4/0) to 56, e.g. \"24\", \"24.5\", \"2/0\"");
             }
         }
         return awg(n);
@@ -71,12 +71,13 @@ public final class Wire {
 
     /** Kernel: ASTM B258 bare diameter (m) of gauge n. */
     public static double awgDiameterAt(double gauge) {
-        return D36 * Math.pow(92, (36 - gauge) / 39);
+        Require.between("AWG gauge", gauge, -3, 56);
+        return Require.result("awg diameter", D36 * Math.pow(92, (36 - gauge) / 39));
     }
 
     /** The (fractional) AWG gauge of a bare diameter, the inverse of {@link #awgDiameterAt}. */
     public static double awgGaugeOf(Quantity bareDiameter) {
-        double d = Require.positive("bare diameter", bareDiameter, Dimension.LENGTH);
+        double d = Require.length("bare diameter", bareDiameter);
         return 36 - 39 * Math.log(d / D36) / Math.log(92);
     }
 
@@ -88,8 +89,8 @@ public final class Wire {
 
     /** A metric wire by its nominal bare diameter, e.g. {@code Wire.metric(mm(0.50))}. */
     public static Wire metric(Quantity bareDiameter) {
-        double d = Require.positive("bare diameter", bareDiameter, Dimension.LENGTH);
-        if (d > 0.02) throw new IllegalArgumentException("bare diameter must be at most 20 mm for a round magnet wire, got " + bareDiameter);
+        double d = Require.length("bare diameter", bareDiameter);
+        if (d > 0.02) throw Require.fail("bare diameter must be at most 20 mm for a round magnet wire, got " + bareDiameter);
         return new Wire(metricName(d), d, Conductor.COPPER, Insulation.HEAVY, Double.NaN);
     }
 
@@ -102,21 +103,21 @@ public final class Wire {
 
     /** The same size in another conductor, e.g. {@code .withConductor(Conductor.ALUMINIUM)}. */
     public Wire withConductor(Conductor c) {
-        Objects.requireNonNull(c, "conductor");
+        Require.present("conductor", c);
         return new Wire(size, bare, c, insulation, overallOverride);
     }
 
     /** The same conductor with another insulation build. */
     public Wire withInsulation(Insulation ins) {
-        Objects.requireNonNull(ins, "insulation");
+        Require.present("insulation", ins);
         return new Wire(size, bare, conductor, ins, Double.NaN);
     }
 
     /** The same wire with an overall diameter from a datasheet (must exceed the bare diameter). */
     public Wire withOverallDiameter(Quantity overall) {
-        double o = Require.positive("overall diameter", overall, Dimension.LENGTH);
+        double o = Require.length("overall diameter", overall);
         if (!(o >= bare)) {
-            throw new IllegalArgumentException("overall diameter must be at least the bare diameter " + bareDiameter() + ", got " + overall);
+            throw Require.fail("overall diameter must be at least the bare diameter " + bareDiameter() + ", got " + overall);
         }
         return new Wire(size, bare, conductor, Insulation.ofIncrease(Quantity.of(o - bare, Dimension.LENGTH)), o);
     }
@@ -180,13 +181,12 @@ public final class Wire {
 
     /** Kernel: resistance per length (Ω/m) at a temperature (K). */
     public double resistancePerLengthAt(double kelvin) {
-        return conductor.resistivityAt(kelvin) / areaM2();
+        Require.finite("temperature (K)", kelvin);
+        return Require.result("resistance per length", conductor.resistivityAt(kelvin) / areaM2());
     }
 
     static double kelvin(Quantity t) {
-        double k = Require.si("temperature", t, Dimension.TEMPERATURE);
-        if (!(k > 0)) throw new IllegalArgumentException("temperature must be above absolute zero (−273.15 °C), got " + t);
-        return k;
+        return Conductor.kelvin("temperature", t);
     }
 
     @Override

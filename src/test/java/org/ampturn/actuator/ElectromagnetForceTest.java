@@ -84,8 +84,8 @@ class ElectromagnetForceTest {
         assertTrue(e.getMessage().contains("turns"));
         Electromagnet em = Electromagnet.of(100, path, mm2(150), 2);
         e = assertThrows(IllegalArgumentException.class, () -> em.force(mm(0), A(1)));
-        assertTrue(e.getMessage().contains("gap") && e.getMessage().contains("greater than zero"), e.getMessage());
-        e = assertThrows(IllegalArgumentException.class, () -> em.force(mm(1), A(Double.NaN)));
+        assertTrue(e.getMessage().contains("gap") && e.getMessage().contains("from 1.000 nm to 10.00 km, got 0.000 m"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> em.force(mm(1), org.ampturn.units.Quantity.of(Double.NaN, org.ampturn.units.Dimension.CURRENT)));
         assertTrue(e.getMessage().contains("current"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Force.ofFluxDensity(T(1), cm2(-1)));
         assertTrue(e.getMessage().contains("pole area"), e.getMessage());

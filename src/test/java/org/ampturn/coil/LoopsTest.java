@@ -52,7 +52,7 @@ class LoopsTest {
         var e = assertThrows(IllegalArgumentException.class, () -> Loops.mutualInductance(cm(1), cm(1), cm(0)));
         assertTrue(e.getMessage().contains("coincide"));
         e = assertThrows(IllegalArgumentException.class, () -> Loops.mutualInductance(cm(-1), cm(1), cm(1)));
-        assertTrue(e.getMessage().contains("radius1"));
+        assertTrue(e.getMessage().contains("radius 1"), e.getMessage());
     }
 
     /** Round-wire loop L = μ0 a (ln(8a/ρ) − 7/4) (Rosa and Grover 1912); 10 cm loop of 1 mm radius wire: 0.5333 μH (computed from that formula). */

@@ -2,6 +2,8 @@ package org.ampturn.coil;
 
 import static org.ampturn.Ampturn.*;
 import static org.junit.jupiter.api.Assertions.*;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
 
 import org.ampturn.material.MagneticMaterial;
 import org.junit.jupiter.api.Test;
@@ -158,7 +160,7 @@ class MagneticCircuitTest {
         assertTrue(e.getMessage().contains("path length"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Core.of("x", mm(10), mm(100), FERRITE));
         assertTrue(e.getMessage().contains("area") && e.getMessage().contains("length"), e.getMessage());
-        e = assertThrows(IllegalArgumentException.class, () -> AirGap.of(mm(Double.NaN), mm2(1)));
+        e = assertThrows(IllegalArgumentException.class, () -> AirGap.of(Quantity.of(Double.NaN, Dimension.LENGTH), mm2(1)));
         assertTrue(e.getMessage().contains("gap length"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> core.inductance(0));
         assertTrue(e.getMessage().contains("turns"), e.getMessage());

@@ -2,6 +2,8 @@ package org.ampturn.coil;
 
 import static org.ampturn.Ampturn.*;
 import static org.junit.jupiter.api.Assertions.*;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
 
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
@@ -166,10 +168,10 @@ class SolenoidTest {
     @Test
     void badInputNamesParameterValueAndRange() {
         var e = assertThrows(IllegalArgumentException.class, () -> Solenoid.singleLayer(0, mm(30), mm(10)));
-        assertTrue(e.getMessage().contains("turns") && e.getMessage().contains("0") && e.getMessage().contains("at least 1"), e.getMessage());
+        assertTrue(e.getMessage().contains("turns") && e.getMessage().contains("got 0") && e.getMessage().contains("from 1 to 10000000"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Solenoid.singleLayer(10, mm(-3), mm(10)));
-        assertTrue(e.getMessage().contains("length") && e.getMessage().contains("-3.000 mm") && e.getMessage().contains("greater than zero"), e.getMessage());
-        e = assertThrows(IllegalArgumentException.class, () -> Solenoid.singleLayer(10, mm(Double.NaN), mm(10)));
+        assertTrue(e.getMessage().contains("length") && e.getMessage().contains("-3.000 mm") && e.getMessage().contains("from 1.000 nm to 10.00 km"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> Solenoid.singleLayer(10, Quantity.of(Double.NaN, Dimension.LENGTH), mm(10)));
         assertTrue(e.getMessage().contains("length"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Solenoid.singleLayer(10, mm(30), A(1)));
         assertTrue(e.getMessage().contains("mean diameter"), e.getMessage());

@@ -41,7 +41,7 @@ class BadInputTest {
 
     @Test
     void drives() {
-        fails(() -> Drive.pwm(V(12), kHz(1), 1.5), "duty (1.5)");
+        fails(() -> Drive.pwm(V(12), kHz(1), 1.5), "PWM duty must be between 1.000e-4 and 1, got 1.500");
         fails(() -> Drive.pwm(V(12), kHz(1), 0), "duty");
         fails(() -> Drive.pwm(V(12), Hz(-1), 0.5), "PWM frequency");
         fails(() -> Drive.peakAndHold(V(12), A(1), A(2)), "hold current", "below the pull-in");
@@ -51,8 +51,8 @@ class BadInputTest {
                 .simulate(ms(10)), "hysteresis band (2.500 A)", "below the pull-in current (2.000 A)");
         fails(() -> Drive.dc(V(12)).withHysteresis(A(0.1)), "peak-and-hold");
         fails(() -> Drive.dc(V(0)), "supply voltage");
-        fails(() -> Drive.dc(V(12)).into(coil).samples(1), "samples (1)");
-        fails(() -> Drive.dc(V(12)).into(coil).tolerance(0.5), "tolerance (0.5)");
+        fails(() -> Drive.dc(V(12)).into(coil).samples(1), "samples must be a whole number from 2 to 20000000, got 1");
+        fails(() -> Drive.dc(V(12)).into(coil).tolerance(0.5), "tolerance must be between 1.000e-12 and 0.001000, got 0.5000");
         fails(() -> Drive.dc(V(12)).into(coil).at(K(80)), "absolute temperature");
     }
 

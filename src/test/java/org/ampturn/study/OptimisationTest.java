@@ -127,6 +127,6 @@ class OptimisationTest {
         e = assertThrows(IllegalArgumentException.class, () -> limit("L = 1 mH"));
         assertTrue(e.getMessage().contains("\"L >= 1 mH\""), e.getMessage());
         var st = assertThrows(IllegalStateException.class, () -> minimise("R").over(Param.integer("n", 1, 3)).run(p -> Outputs.of("L", mH(1))));
-        assertTrue(st.getMessage().contains("no output named R"), st.getMessage());
+        assertTrue(st.getMessage().contains("no output named \"R\""), st.getMessage());
     }
 }

@@ -107,6 +107,16 @@ class ThermalTest {
     }
 
     @Test
+    void theHandbookRuleSaysWhenItIsUsedOutsideItsRange() {
+        // McLyman's rule is drawn from 0.005 to 0.15 W/cm² (Cooling.handbookRule's documentation, from memory)
+        HeatState inside = Heating.of(q("100 ohm"), Conductor.COPPER, q("50 cm^2")).atVoltage(q("12 V")); // about 1.4 W: 0.03 W/cm²
+        assertTrue(inside.warnings().stream().noneMatch(w -> w.contains("outside its range")), inside.warnings().toString());
+        HeatState tiny = Heating.of(q("1000 ohm"), Conductor.COPPER, q("500 cm^2")).atVoltage(q("1 V")); // 1 mW: 2e-6 W/cm²
+        assertTrue(tiny.warnings().stream().anyMatch(w -> w.contains("outside its range") && w.contains("0.005")), tiny.warnings().toString());
+        assertTrue(tiny.toString().contains("warning"), tiny.toString());
+    }
+
+    @Test
     void warningsNameTheClassAndTheBurnHazard() {
         Winding w = Winding.full(Wire.awg(30), Bobbin.of(q("25 mm"), q("12 mm"), q("8 mm")), Packing.LAYERED);
         HeatState cool = Heating.of(w).atVoltage(q("3 V"));
@@ -129,7 +139,7 @@ class ThermalTest {
         assertTrue(e.getMessage().contains("resistance at 20 °C"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Heating.of(q("5 ohm"), Conductor.COPPER, q("-5 cm^2")));
         assertTrue(e.getMessage().contains("surface area"), e.getMessage());
-        e = assertThrows(IllegalArgumentException.class, () -> Heating.of(q("5 ohm"), Conductor.COPPER, q("5 cm^2")).atVoltage(q("NaN V")));
+        e = assertThrows(IllegalArgumentException.class, () -> Heating.of(q("5 ohm"), Conductor.COPPER, q("5 cm^2")).atVoltage(org.ampturn.units.Quantity.of(Double.NaN, org.ampturn.units.Dimension.VOLTAGE)));
         assertTrue(e.getMessage().contains("voltage"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Cooling.surfaceCoefficient(q("0 W/(m^2*K)")));
         assertTrue(e.getMessage().contains("heat transfer coefficient"), e.getMessage());

@@ -92,7 +92,7 @@ class WindingTest {
         assertTrue(e.getMessage().contains("-3"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Bobbin.of(mm(0), mm(10), mm(5)));
         assertTrue(e.getMessage().contains("winding width"), e.getMessage());
-        e = assertThrows(IllegalArgumentException.class, () -> Bobbin.of(mm(20), mm(Double.NaN), mm(5)));
+        e = assertThrows(IllegalArgumentException.class, () -> Bobbin.of(mm(20), org.ampturn.units.Quantity.of(Double.NaN, org.ampturn.units.Dimension.LENGTH), mm(5)));
         assertTrue(e.getMessage().contains("inner diameter"), e.getMessage());
     }
 
@@ -125,7 +125,9 @@ class WindingTest {
     void absurdTurnCountsFailAtOnce() {
         Bobbin b = Bobbin.of(mm(20), mm(10), mm(5));
         var e = assertThrows(IllegalArgumentException.class, () -> Winding.of(Wire.awg(24), Integer.MAX_VALUE, b));
-        assertTrue(e.getMessage().contains("do not fit") && e.getMessage().contains("61356676 layers"), e.getMessage());
+        assertTrue(e.getMessage().contains("turns") && e.getMessage().contains("from 1 to 10000000, got 2147483647"), e.getMessage());
+        e = assertThrows(IllegalArgumentException.class, () -> Winding.of(Wire.awg(24), 9_000_000, b));
+        assertTrue(e.getMessage().contains("do not fit") && e.getMessage().contains("257143 layers"), e.getMessage());
     }
 
     @Test

@@ -147,7 +147,7 @@ class WireTest {
         e = assertThrows(IllegalArgumentException.class, () -> Wire.awg("5/0"));
         assertTrue(e.getMessage().contains("5/0"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Wire.metric(Quantity.of(-0.5, "mm")));
-        assertTrue(e.getMessage().contains("bare diameter") && e.getMessage().contains("greater than zero"), e.getMessage());
+        assertTrue(e.getMessage().contains("bare diameter") && e.getMessage().contains("from 1.000 nm to 10.00 km, got -500.0 µm"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Wire.metric(Quantity.of(0.5, "A")));
         assertTrue(e.getMessage().contains("length"), e.getMessage());
         e = assertThrows(IllegalArgumentException.class, () -> Wire.awg(24).withOverallDiameter(Quantity.of(0.4, "mm")));
