@@ -155,6 +155,12 @@ public final class Transient {
         }
     }
 
+    /** What was solved: the drive, the coil and the clamp, in words. */
+    public String circuit() { return circuit; }
+
+    /** The length of the run, from switch-on at t = 0. */
+    public Quantity duration() { return tq(duration); }
+
     /** Every signal of the run, current first, for charts. */
     public List<Signal> signals() { return signals; }
 
