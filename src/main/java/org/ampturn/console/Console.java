@@ -308,6 +308,10 @@ public final class Console implements SessionConsole {
         return help;
     }
 
+    Terminal terminal() {
+        return terminal;
+    }
+
     /** Takes the last entry back; false when there is none. */
     boolean undo() {
         if (history.isEmpty() || !session().undoLast()) return false;
