@@ -56,15 +56,31 @@ final class Render {
 
     static String svg(JFreeChart chart, int width, int height) {
         SVGGraphics2D g = new SVGGraphics2D(width, height);
-        // the library's default prefix of clip and gradient ids is made from the clock; a fixed one
-        // makes the same figure give the same bytes, so a saved SVG diffs cleanly
-        g.setDefsKeyPrefix(SVG_ID_PREFIX);
+        // the library's default prefix of clip and gradient ids is made from the clock. Ids made from
+        // the drawing itself instead: the same figure gives the same bytes (a saved SVG diffs
+        // cleanly), and two different figures inlined in one HTML report do not share ids
+        g.setDefsKeyPrefix(PLACEHOLDER);
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         chart.draw(g, new Rectangle2D.Double(0, 0, width, height));
-        return g.getSVGDocument();
+        String doc = g.getSVGDocument();
+        return doc.replace(PLACEHOLDER, SVG_ID_PREFIX + digest(doc) + "-");
     }
 
-    /** Prefix of the ids in an SVG document's definitions (clip paths, gradients). */
+    private static final String PLACEHOLDER = "ampturnIdPrefixToBeReplaced";
+
+    /** The first 12 hex digits of the SHA-256 of the text. */
+    static String digest(String text) {
+        try {
+            byte[] h = java.security.MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
+            StringBuilder sb = new StringBuilder();
+            for (int i = 0; i < 6; i++) sb.append(String.format(Locale.ROOT, "%02x", h[i]));
+            return sb.toString();
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException("this Java runtime has no SHA-256", e);
+        }
+    }
+
+    /** Start of the ids in an SVG document's definitions (clip paths, gradients); a digest of the drawing follows. */
     static final String SVG_ID_PREFIX = "ampturn-";
 
     /**

@@ -191,6 +191,14 @@ class ChartOutputTest {
         byte[] x = Files.readAllBytes(a), y = Files.readAllBytes(b);
         assertTrue(new String(x, StandardCharsets.UTF_8).contains("clipPath"), "the document has clip paths, whose ids must be stable");
         assertArrayEquals(x, y);
+        // a different figure has other ids, so both can be inlined in one HTML report
+        java.util.regex.Pattern id = java.util.regex.Pattern.compile("id='([^']+)'");
+        Set<String> ids = new HashSet<>(), others = new HashSet<>();
+        id.matcher(new String(x, StandardCharsets.UTF_8)).results().forEach(m -> ids.add(m.group(1)));
+        id.matcher(Files.readString(dir.resolve("between.svg"))).results().forEach(m -> others.add(m.group(1)));
+        assertFalse(ids.isEmpty() || others.isEmpty());
+        ids.retainAll(others);
+        assertEquals(Set.of(), ids, "ids shared by two different figures");
     }
 
     @Test
