@@ -30,11 +30,20 @@ final class HelpPager {
         return w <= 0 ? 80 : Math.min(w, 100);
     }
 
+    /** Terminal rows a line takes: a line of code wider than the terminal wraps onto several. */
+    static int rows(AttributedString line, int width) {
+        int w = line.columnLength();
+        return width <= 0 || w <= width ? 1 : (w + width - 1) / width;
+    }
+
     static void page(Terminal terminal, List<AttributedString> lines) {
         PrintWriter out = terminal.writer();
         int rows = terminal.getHeight();
+        int width = terminal.getWidth();
         boolean dumb = terminal.getType() == null || terminal.getType().startsWith(Terminal.TYPE_DUMB);
-        if (dumb || rows < MIN_ROWS || lines.size() <= rows - 1) {
+        int total = 0;
+        for (AttributedString l : lines) total += rows(l, width);
+        if (dumb || rows < MIN_ROWS || total <= rows - 1) {
             for (AttributedString l : lines) out.println(l.toAnsi(terminal));
             out.flush();
             return;
@@ -45,8 +54,14 @@ final class HelpPager {
             int shown = 0;
             int next = screen;
             while (true) {
-                int end = Math.min(lines.size(), shown + next);
-                for (int k = shown; k < end; k++) out.println(lines.get(k).toAnsi(terminal));
+                // at least one line, then as many as fit in the rows asked for
+                int used = 0;
+                int end = shown;
+                while (end < lines.size() && (end == shown || used + rows(lines.get(end), width) <= next)) {
+                    used += rows(lines.get(end), width);
+                    out.println(lines.get(end).toAnsi(terminal));
+                    end++;
+                }
                 shown = end;
                 if (shown >= lines.size()) break;
                 String prompt = " " + (100 * shown / lines.size()) + " % of the page · Space: more · Enter: one line · q: done ";

@@ -155,6 +155,21 @@ class HelpRenderTest {
     }
 
     @Test
+    void aLineWiderThanTheTerminalCountsItsRows() throws IOException {
+        List<AttributedString> lines = numbered(30);
+        lines.set(2, new AttributedString("x".repeat(200))); // 3 rows on an 80-column terminal
+        ByteArrayOutputStream screen = new ByteArrayOutputStream();
+        try (Terminal t = terminal("q", screen, 10)) {
+            HelpPager.page(t, lines);
+        }
+        String s = screen.toString(StandardCharsets.UTF_8);
+        assertTrue(s.contains("line 7"), s);
+        assertFalse(s.contains("line 8"), "9 rows: lines 1-2, the 3-row line, lines 4-7: " + s);
+        assertEquals(3, HelpPager.rows(lines.get(2), 80));
+        assertEquals(1, HelpPager.rows(lines.get(0), 80));
+    }
+
+    @Test
     void aDumbTerminalGetsTheWholePage() throws IOException {
         ByteArrayOutputStream screen = new ByteArrayOutputStream();
         try (Terminal t = new DumbTerminal("help-test", Terminal.TYPE_DUMB, new ByteArrayInputStream(new byte[0]), screen, StandardCharsets.UTF_8)) {
