@@ -52,6 +52,9 @@ final class Build {
     /** At or below this many points a curve also shows its points (a coarse sweep). */
     static final int DOTS_UP_TO = 40;
 
+    /** The most lines a figure's title takes. */
+    static final int TITLE_LINES = 3;
+
     static JFreeChart chart(FigureData d) {
         if (d instanceof FigureData.Lines l) return lines(l);
         if (d instanceof FigureData.Histogram h) return histogram(h);
@@ -100,14 +103,15 @@ final class Build {
             }
             XYItemRenderer r = dense ? sampling() : lineRenderer(dots);
             for (int i = 0; i < p.traces().size(); i++) {
-                r.setSeriesPaint(i, Style.series(colour++));
-                r.setSeriesStroke(i, Style.LINE);
+                r.setSeriesPaint(i, Style.series(colour));
+                r.setSeriesStroke(i, Style.line(colour));
+                colour++;
             }
             XYPlot plot = new XYPlot(ds, null, yAxis, r);
             area(plot);
             for (int i = 0; i < ds.getSeriesCount(); i++) {
                 LegendItem li = new LegendItem(String.valueOf(ds.getSeriesKey(i)), null, null, null,
-                        new Line2D.Double(-10, 0, 10, 0), Style.LINE, r.getSeriesPaint(i));
+                        new Line2D.Double(-12, 0, 12, 0), r.getSeriesStroke(i), r.getSeriesPaint(i));
                 li.setLabelFont(Style.LEGEND);
                 li.setLabelPaint(Style.INK);
                 legendItems.add(li);
@@ -147,7 +151,7 @@ final class Build {
                 }
             }
             if (m.isVertical()) {
-                String text = m.label() + " = " + shown(m.x(), d.xDimension(), xu);
+                String text = m.text() != null ? m.text() : m.label() + " = " + shown(m.x(), d.xDimension(), xu);
                 boolean everyPanel = m.trace() == null;
                 for (int i = 0; i < plots.size(); i++) {
                     if (!everyPanel && i != home) continue;
@@ -161,7 +165,7 @@ final class Build {
                 }
             } else if (m.isHorizontal()) {
                 ValueMarker vm = marker(yu[home].toDisplay(m.y()), Style.MARK, Style.MARK_LINE);
-                vm.setLabel(m.label() + " " + shown(m.y(), panels.get(home).dimension(), yu[home]));
+                vm.setLabel(m.text() != null ? m.text() : m.label() + " " + shown(m.y(), panels.get(home).dimension(), yu[home]));
                 vm.setLabelAnchor(RectangleAnchor.TOP_LEFT);
                 vm.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
                 plots.get(home).addRangeMarker(vm);
@@ -169,7 +173,8 @@ final class Build {
                 Panel p = panels.get(home);
                 double x = xu.toDisplay(m.x());
                 double y = yu[home].toDisplay(m.y());
-                String text = m.label() + " " + shown(m.y(), p.dimension(), yu[home]) + " at " + shown(m.x(), d.xDimension(), xu);
+                String text = m.text() != null ? m.text()
+                        : m.label() + " " + shown(m.y(), p.dimension(), yu[home]) + " at " + shown(m.x(), d.xDimension(), xu);
                 double angle = pointerAngle(p, m);
                 XYPointerAnnotation a = new XYPointerAnnotation(text, x, y, angle);
                 a.setFont(Style.NOTE);
@@ -405,6 +410,11 @@ final class Build {
             TextTitle t = new TextTitle(title, Style.TITLE);
             t.setPaint(Style.INK);
             t.setHorizontalAlignment(org.jfree.chart.ui.HorizontalAlignment.LEFT);
+            // a long title wraps at word boundaries, every line flush left; past TITLE_LINES lines
+            // the last shown line ends in an ellipsis, so nothing is cut mid-glyph at the edge
+            t.setTextAlignment(org.jfree.chart.ui.HorizontalAlignment.LEFT);
+            t.setMaximumLinesToDisplay(TITLE_LINES);
+            t.setExpandToFitSpace(false);
             t.setPadding(new RectangleInsets(0, 4, 6, 0));
             chart.setTitle(t);
         }

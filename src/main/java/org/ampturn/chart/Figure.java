@@ -33,8 +33,13 @@ public final class Figure {
 
     public FigureData data() { return data; }
 
-    /** Files written so far, oldest first. */
-    public List<Path> files() { return List.copyOf(files); }
+    /** Files written so far, oldest first (writing this figure's own file first if it is due). */
+    public List<Path> files() {
+        Figures.flush();
+        return List.copyOf(files);
+    }
+
+    List<Path> filesWritten() { return List.copyOf(files); }
 
     /** Writes the figure at {@value #DEFAULT_WIDTH}×{@value #DEFAULT_HEIGHT} pixels; PNG or SVG by extension. */
     public Figure save(String path) {
@@ -50,14 +55,25 @@ public final class Figure {
         return save(Path.of(path), width, height);
     }
 
+    /**
+     * Writes the figure at a stated size, PNG or SVG by the extension, atomically and with the
+     * user's normal file permissions. Saving the figure that {@code plot} just made writes this file
+     * instead of the numbered one {@code plot} would otherwise write.
+     */
     public Figure save(Path path, int width, int height) {
+        if (path == null) throw new IllegalArgumentException("figure file is missing (null)");
+        write(path, width, height);
+        Figures.savedByUser(this, path);
+        return this;
+    }
+
+    void write(Path path, int width, int height) {
         Render.checkSize(width, height);
         Render.formatOf(path);
         Display.settle();
         Render.write(Build.chart(data), path, width, height);
         if (!files.contains(path)) files.add(path);
         Figures.written(path);
-        return this;
     }
 
     /** Opens (or refreshes) this figure's window when a display exists; otherwise does nothing. */
@@ -73,6 +89,7 @@ public final class Figure {
 
     @Override
     public String toString() {
+        Figures.flush();
         StringBuilder sb = new StringBuilder("figure ").append(name).append(": ").append(describe(data));
         // the file's name only: a worksheet records this text, and the folder differs between the
         // console, a batch run and verify (the worksheet's //= figure: lines hold the path)

@@ -94,7 +94,10 @@ public final class Figures {
     }
 
     /** The figures made so far, oldest first. */
-    public static List<Figure> made() { return List.copyOf(MADE); }
+    public static List<Figure> made() {
+        flush();
+        return List.copyOf(MADE);
+    }
 
     /** The latest figure of that name. */
     public static Optional<Figure> named(String name) {
@@ -104,6 +107,7 @@ public final class Figures {
 
     /** One line per figure: name, what it shows, its files; for the figures command. */
     public static String listing() {
+        flush();
         if (MADE.isEmpty()) return "no figures yet";
         StringBuilder sb = new StringBuilder();
         for (Figure f : MADE) {
@@ -124,19 +128,37 @@ public final class Figures {
     /**
      * The log of figure files written so far, one item per write, oldest first. It only grows, so
      * the files an entry wrote are the items added while it ran, even when it rewrote a file that an
-     * earlier entry had written.
+     * earlier entry had written. Writes the last figure's own file first, if it is still due
+     * ({@link #flush()}).
      */
-    public static List<Path> written() { return List.copyOf(WRITTEN); }
+    public static List<Path> written() {
+        flush();
+        return List.copyOf(WRITTEN);
+    }
 
     /** Forgets the figures made (a fresh session); windows stay open. */
-    public static void clear() { MADE.clear(); }
+    public static void clear() {
+        flush();
+        MADE.clear();
+    }
+
+    /** The figure whose own file is still to be written, and the number it was given; guarded by its class. */
+    private record Due(Figure figure, int number, boolean inWindow) {}
+
+    private static Due due;
 
     /**
-     * Shows a figure under its name: refreshes that name's window, or, without a window, writes
-     * {@code NN-name.png} to {@link #directory()} and prints the path and the preview. Never throws
-     * for want of a display.
+     * Shows a figure under its name: refreshes that name's window, or, without a window, arranges
+     * its own file {@code NN-name.png} in {@link #directory()} and prints the path and the preview.
+     * Never throws for want of a display.
+     *
+     * <p>The file is written when the figure is next looked at (its text, its files, the list of
+     * figures), when another figure is shown, or when the session collects the entry's files, unless
+     * the figure is saved to a file of the user's choice first: {@code plot(x).save("f.png")}
+     * writes {@code f.png} and nothing else.
      */
     public static Figure show(Figure f) {
+        flush();
         MADE.add(f);
         boolean shown = false;
         Display.settle();
@@ -155,14 +177,43 @@ public final class Figures {
         }
         if (!shown || filesWithWindows) {
             int n = numbering != null ? numbering.getAsInt() : MADE.size();
-            for (String ext : formats) {
-                Path file = directory.resolve(String.format(Locale.ROOT, "%02d-%s.%s", n, slug(f.name()), ext));
-                f.save(file, Figure.DEFAULT_WIDTH, Figure.DEFAULT_HEIGHT);
+            synchronized (Figures.class) {
+                due = new Due(f, n, shown);
             }
-            print("figure " + f.name() + " → " + String.join(", ", f.files().stream().map(Path::toString).toList()));
-            if (!shown) print(f.preview());
         }
         return f;
+    }
+
+    /** Writes the file of the last figure shown, if it is still due; a program that plots without saving calls it before it ends. */
+    public static void flush() {
+        Due d;
+        synchronized (Figures.class) {
+            d = due;
+            due = null;
+        }
+        if (d == null) return;
+        for (String ext : formats) {
+            Path file = directory.resolve(String.format(Locale.ROOT, "%02d-%s.%s", d.number(), slug(d.figure().name()), ext));
+            d.figure().write(file, Figure.DEFAULT_WIDTH, Figure.DEFAULT_HEIGHT);
+        }
+        print("figure " + d.figure().name() + " → " + String.join(", ", d.figure().filesWritten().stream().map(Path::toString).toList()));
+        if (!d.inWindow()) print(d.figure().preview());
+    }
+
+    /**
+     * Called when the user saves a figure to a file of their choice: if it is the figure whose own
+     * file is due, that file is not written, and the path (and, without a window, the preview) is
+     * printed for the user's file instead.
+     */
+    static void savedByUser(Figure f, Path file) {
+        Due d;
+        synchronized (Figures.class) {
+            if (due == null || due.figure() != f) return;
+            d = due;
+            due = null;
+        }
+        print("figure " + f.name() + " → " + file);
+        if (!d.inWindow()) print(f.preview());
     }
 
     private static void print(String line) {

@@ -8,10 +8,8 @@ import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.Iterator;
 import java.util.Locale;
 import javax.imageio.IIOImage;
@@ -19,6 +17,8 @@ import javax.imageio.ImageIO;
 import javax.imageio.ImageWriteParam;
 import javax.imageio.ImageWriter;
 import javax.imageio.stream.ImageOutputStream;
+import javax.imageio.stream.MemoryCacheImageOutputStream;
+import org.ampturn.units.AtomicFile;
 import org.jfree.chart.ChartRenderingInfo;
 import org.jfree.chart.JFreeChart;
 import org.jfree.svg.SVGGraphics2D;
@@ -56,43 +56,58 @@ final class Render {
 
     static String svg(JFreeChart chart, int width, int height) {
         SVGGraphics2D g = new SVGGraphics2D(width, height);
+        // the library's default prefix of clip and gradient ids is made from the clock. Ids made from
+        // the drawing itself instead: the same figure gives the same bytes (a saved SVG diffs
+        // cleanly), and two different figures inlined in one HTML report do not share ids
+        g.setDefsKeyPrefix(PLACEHOLDER);
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         chart.draw(g, new Rectangle2D.Double(0, 0, width, height));
-        return g.getSVGDocument();
+        String doc = g.getSVGDocument();
+        return doc.replace(PLACEHOLDER, SVG_ID_PREFIX + digest(doc) + "-");
     }
 
+    private static final String PLACEHOLDER = "ampturnIdPrefixToBeReplaced";
+
+    /** The first 12 hex digits of the SHA-256 of the text. */
+    static String digest(String text) {
+        try {
+            byte[] h = java.security.MessageDigest.getInstance("SHA-256").digest(text.getBytes(StandardCharsets.UTF_8));
+            StringBuilder sb = new StringBuilder();
+            for (int i = 0; i < 6; i++) sb.append(String.format(Locale.ROOT, "%02x", h[i]));
+            return sb.toString();
+        } catch (java.security.NoSuchAlgorithmException e) {
+            throw new IllegalStateException("this Java runtime has no SHA-256", e);
+        }
+    }
+
+    /** Start of the ids in an SVG document's definitions (clip paths, gradients); a digest of the drawing follows. */
+    static final String SVG_ID_PREFIX = "ampturn-";
+
+    /**
+     * Writes the chart to a file atomically with the user's normal permissions ({@link AtomicFile}),
+     * creating missing folders.
+     */
     static void write(JFreeChart chart, Path file, int width, int height) {
         checkSize(width, height);
         String format = formatOf(file);
         try {
-            Path dir = file.toAbsolutePath().getParent();
-            if (dir != null) Files.createDirectories(dir);
-            Path tmp = (dir != null ? dir : Path.of("")).resolve("." + file.getFileName() + "." + ProcessHandle.current().pid() + ".tmp");
-            try {
-                if (format.equals("png")) {
-                    writePng(image(chart, width, height), tmp);
-                } else {
-                    Files.writeString(tmp, svg(chart, width, height), StandardCharsets.UTF_8);
-                }
-                try {
-                    Files.move(tmp, file, StandardCopyOption.ATOMIC_MOVE, StandardCopyOption.REPLACE_EXISTING);
-                } catch (AtomicMoveNotSupportedException e) {
-                    Files.move(tmp, file, StandardCopyOption.REPLACE_EXISTING);
-                }
-            } finally {
-                Files.deleteIfExists(tmp);
+            if (format.equals("png")) {
+                BufferedImage img = image(chart, width, height);
+                AtomicFile.write(file, out -> writePng(img, out));
+            } else {
+                AtomicFile.write(file, svg(chart, width, height).getBytes(StandardCharsets.UTF_8));
             }
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the figure to " + file + ": " + e.getMessage(), e);
+        } catch (UncheckedIOException e) {
+            throw new UncheckedIOException("cannot write the figure to " + file + ": " + e.getCause().getMessage(), e.getCause());
         }
     }
 
     /** PNG at a moderate deflate level: a chart is mostly flat colour, so it shrinks well and fast. */
-    static void writePng(BufferedImage img, Path file) throws IOException {
+    static void writePng(BufferedImage img, OutputStream out) throws IOException {
         Iterator<ImageWriter> it = ImageIO.getImageWritersByFormatName("png");
         if (!it.hasNext()) throw new IOException("no PNG writer in this Java runtime");
         ImageWriter w = it.next();
-        try (OutputStream out = Files.newOutputStream(file); ImageOutputStream ios = ImageIO.createImageOutputStream(out)) {
+        try (ImageOutputStream ios = new MemoryCacheImageOutputStream(out)) { // no cache file in the temporary folder
             w.setOutput(ios);
             ImageWriteParam p = w.getDefaultWriteParam();
             if (p.canWriteCompressed()) {

@@ -35,8 +35,35 @@ final class Style {
         new Color(0x4B, 0x55, 0x63), // slate
     };
 
+    /**
+     * The colour of the {@code i}-th curve of a figure: the palette in order, again for each further
+     * round with another dash ({@link #line(int)}), so no two curves of a figure share both.
+     */
     static Color series(int i) {
         return PALETTE[Math.floorMod(i, PALETTE.length)];
+    }
+
+    /**
+     * The line of the {@code i}-th curve of a figure: solid for the first round of the palette, then
+     * dashed, dotted, dash-dot, and longer dashes for each further round, so the pair (colour, line)
+     * of every curve differs from every other.
+     */
+    static Stroke line(int i) {
+        int round = Math.floorDiv(Math.max(i, 0), PALETTE.length);
+        float[] dash = dash(round);
+        if (dash == null) return LINE;
+        return new BasicStroke(1.6f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash, 0f);
+    }
+
+    /** The dash pattern of a round of the palette; null for a solid line. Each round's pattern differs from all others. */
+    static float[] dash(int round) {
+        switch (round) {
+            case 0: return null;
+            case 1: return new float[] {7f, 4f};
+            case 2: return new float[] {2f, 3f};
+            case 3: return new float[] {9f, 3f, 2f, 3f};
+            default: return new float[] {4f + 3f * round, 4f};
+        }
     }
 
     static final String FACE = Font.SANS_SERIF;

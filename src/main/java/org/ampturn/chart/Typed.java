@@ -42,20 +42,75 @@ final class Typed {
             Signal s = by.get(extra);
             if (s != null && Trace.maxAbs(s.values()) > 0) energies.add(extra);
         }
-        panel(panels, "energy", Dimension.ENERGY, by, energies.toArray(new String[0]));
+        List<Panel> energy = new ArrayList<>();
+        panel(energy, "energy", Dimension.ENERGY, by, energies.toArray(new String[0]));
+        for (Panel p : energy) panels.addAll(byMagnitude(p, ENERGY_SPREAD));
         panel(panels, "position", Dimension.LENGTH, by, "position");
         if (panels.isEmpty()) throw new IllegalArgumentException("the transient has no current, voltage or energy signals to plot");
         List<Mark> marks = new ArrayList<>();
         for (Marker m : run.markers()) {
             if (!KEY_MARKERS.contains(m.label()) || m.time() == null || !Double.isFinite(m.time().si())) continue;
             if (TIME_LINES.contains(m.label())) marks.add(new Mark("", m.time().si(), Double.NaN, null));
-            if (m.value() != null && Double.isFinite(m.value().si())) {
-                marks.add(new Mark(m.label(), m.time().si(), m.value().si(), m.signal()));
+            Mark mark = m.value() != null && Double.isFinite(m.value().si())
+                    ? new Mark(m.label(), m.time().si(), m.value().si(), m.signal())
+                    : new Mark(m.label(), m.time().si(), Double.NaN, m.signal());
+            String text = markText(run, m.label());
+            marks.add(text == null ? mark : mark.withText(text));
+        }
+        return new FigureData.Lines(title(run), "time", Dimension.TIME, panels, marks);
+    }
+
+    /** The figure's title: the run's length and its circuit, without the metrics (the panels show those). */
+    static String title(Transient run) {
+        return "transient " + run.duration() + " of " + run.circuit();
+    }
+
+    /**
+     * The label of a key marker, stated as the metric it shows so that chart and metric agree: a
+     * duration counted from the event that starts it (pull-in from switch-on, drop-out from the final
+     * switch-off, τ from switch-on), while the marker itself stands at its time on the axis. Null
+     * for a marker labelled with its value and time (the peak switch voltage, an instant).
+     */
+    static String markText(Transient run, String label) {
+        switch (label) {
+            case "τ": return "τ = " + run.timeConstant();
+            case "pull-in": return "pull-in " + run.pullInTime() + " after switch-on";
+            case "drop-out": return "drop-out " + run.dropOutTime() + " after switch-off";
+            default: return null;
+        }
+    }
+
+    /** Curves whose peaks lie more than this factor below a panel's largest peak get their own panel. */
+    static final double ENERGY_SPREAD = 20;
+
+    /**
+     * Splits a panel so that no curve is drawn flat against one twenty times larger: curves are taken
+     * largest peak first, and a curve joins the current panel when its peak is at least
+     * 1/{@code spread} of that panel's largest, else opens a new panel below (its own axis and unit).
+     * Curves keep their order within a panel; an all-zero curve stays with the largest.
+     */
+    static List<Panel> byMagnitude(Panel p, double spread) {
+        List<Trace> traces = new ArrayList<>(p.traces());
+        List<Trace> bySize = new ArrayList<>(traces);
+        bySize.sort((a, b) -> Double.compare(b.maxAbsY(), a.maxAbsY()));
+        Map<Trace, Integer> group = new java.util.IdentityHashMap<>();
+        List<Double> tops = new ArrayList<>();
+        for (Trace t : bySize) {
+            double peak = t.maxAbsY();
+            if (!tops.isEmpty() && (peak == 0 || peak * spread >= tops.get(tops.size() - 1))) {
+                group.put(t, peak == 0 ? 0 : tops.size() - 1);
             } else {
-                marks.add(new Mark(m.label(), m.time().si(), Double.NaN, m.signal()));
+                tops.add(peak);
+                group.put(t, tops.size() - 1);
             }
         }
-        return new FigureData.Lines(Adapt.title(run), "time", Dimension.TIME, panels, marks);
+        List<Panel> out = new ArrayList<>();
+        for (int g = 0; g < tops.size(); g++) {
+            List<Trace> members = new ArrayList<>();
+            for (Trace t : traces) if (group.get(t) == g) members.add(t);
+            out.add(new Panel(p.quantity(), p.dimension(), members));
+        }
+        return out;
     }
 
     private static void panel(List<Panel> panels, String word, Dimension d, Map<String, Signal> by, String... names) {

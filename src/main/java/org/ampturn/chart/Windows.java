@@ -40,7 +40,8 @@ final class Windows {
      * Starts the window system from a thread of the top thread group. The event thread takes the
      * thread group of whoever first touches the window system; when that is a JShell snippet, the
      * event thread lands in the shell's execution group, and the shell stops the threads of that
-     * group (seen on Java 17: windows then stay blank). So the first touch is made here instead.
+     * group (seen on Java 17: windows then stay blank). So the first touch is made here instead, by
+     * {@link AmpturnWindows}, which also gives the windows their class name on X11.
      */
     static void prepare() {
         if (prepared) return;
@@ -48,16 +49,7 @@ final class Windows {
             if (prepared) return;
             ThreadGroup top = Thread.currentThread().getThreadGroup();
             while (top.getParent() != null) top = top.getParent();
-            Throwable[] failed = new Throwable[1];
-            Thread t = new Thread(top, () -> {
-                try {
-                    SwingUtilities.invokeAndWait(() -> { });
-                } catch (Throwable e) {
-                    failed[0] = e;
-                }
-            }, "ampturn-window-start");
-            t.setDaemon(true);
-            t.setContextClassLoader(Windows.class.getClassLoader());
+            AmpturnWindows t = new AmpturnWindows(top);
             t.start();
             try {
                 t.join();
@@ -65,9 +57,10 @@ final class Windows {
                 Thread.currentThread().interrupt();
                 return;
             }
-            if (failed[0] != null) {
-                Throwable c = failed[0] instanceof java.lang.reflect.InvocationTargetException ite && ite.getCause() != null
-                        ? ite.getCause() : failed[0];
+            Throwable failed = t.failure();
+            if (failed != null) {
+                Throwable c = failed instanceof java.lang.reflect.InvocationTargetException ite && ite.getCause() != null
+                        ? ite.getCause() : failed;
                 throw new Unavailable(c);
             }
             prepared = true;
@@ -84,7 +77,7 @@ final class Windows {
                 w.frame().toFront();
                 return;
             }
-            JFrame frame = new JFrame(f.name() + " · ampturn");
+            JFrame frame = new JFrame(title(f));
             ChartPanel panel = new ChartPanel(chart, false);
             panel.setMouseWheelEnabled(true);
             panel.setMaximumDrawWidth(4000);
@@ -103,6 +96,11 @@ final class Windows {
             frame.setVisible(true);
             OPEN.put(f.name(), new Frame(frame, panel));
         });
+    }
+
+    /** The window's title: the figure's name, then the program's, as desktops list windows. */
+    static String title(Figure f) {
+        return f.name() + " — Ampturn";
     }
 
     private static Dimension fit(Dimension want) {

@@ -338,6 +338,10 @@ public final class Console {
         return help;
     }
 
+    Terminal terminal() {
+        return terminal;
+    }
+
     /** Takes the last entry back; false when there is none. */
     boolean undo() {
         String last = worksheet.undo();

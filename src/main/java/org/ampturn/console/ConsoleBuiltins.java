@@ -37,7 +37,7 @@ final class ConsoleBuiltins {
         if (cmd.isEmpty()) {
             Optional<List<String>> page = c.help().page(topic);
             if (page.isPresent()) {
-                for (String l : page.get()) out.println("  " + l);
+                HelpPager.show(c.terminal(), page.get());
                 return;
             }
             cmd = c.commands().find(topic);

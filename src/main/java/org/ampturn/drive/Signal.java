@@ -57,6 +57,10 @@ public final class Signal {
     public double[] values() { return values.clone(); }
     public int size() { return times.length; }
 
+    /** Package use: the arrays themselves, for writers that only read them. */
+    double[] timesShared() { return times; }
+    double[] valuesShared() { return values; }
+
     /** Start of the sampled span. */
     public Quantity start() { return Quantity.of(times[0], Dimension.TIME); }
 
@@ -156,6 +160,16 @@ public final class Signal {
             if (times[k] >= b) break;
         }
         return sum / (b - a);
+    }
+
+    /** The signal as CSV: {@code time (s)} and this signal with its SI unit, one row per sample. */
+    public String toCsv() {
+        return SignalCsv.text(java.util.List.of(this));
+    }
+
+    /** Writes {@link #toCsv()} to a file atomically with the user's normal permissions; returns the absolute path. */
+    public java.nio.file.Path saveCsv(String path) {
+        return SignalCsv.save(path, java.util.List.of(this));
     }
 
     /** One line: name, size and peak. */

@@ -1,5 +1,6 @@
 package org.ampturn.drive;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
@@ -154,6 +155,12 @@ public final class Transient {
         }
     }
 
+    /** What was solved: the drive, the coil and the clamp, in words. */
+    public String circuit() { return circuit; }
+
+    /** The length of the run, from switch-on at t = 0. */
+    public Quantity duration() { return tq(duration); }
+
     /** Every signal of the run, current first, for charts. */
     public List<Signal> signals() { return signals; }
 
@@ -191,6 +198,41 @@ public final class Transient {
             }
         }
         return tq(Double.NaN);
+    }
+
+    /**
+     * Every signal of the run as CSV: a {@code time (s)} column, then one column per signal in the
+     * order of {@link #signals()}, each header with its SI unit in ASCII ({@code current (A)},
+     * {@code flux linkage (Wb)}); SI values that read back exactly. See lib-docs/transients.md.
+     */
+    public String toCsv() {
+        return SignalCsv.text(signals);
+    }
+
+    /** The chosen signals of this run as CSV, in the order given, after a {@code time (s)} column. */
+    public String toCsv(Signal... chosen) {
+        return SignalCsv.text(chosen(chosen));
+    }
+
+    /** Writes {@link #toCsv()} to a file atomically, with the user's normal permissions; returns the absolute path. */
+    public Path saveCsv(String path) {
+        return SignalCsv.save(path, signals);
+    }
+
+    /** Writes the chosen signals ({@link #toCsv(Signal...)}) to a file atomically; returns the absolute path. */
+    public Path saveCsv(String path, Signal... chosen) {
+        return SignalCsv.save(path, chosen(chosen));
+    }
+
+    private List<Signal> chosen(Signal... chosen) {
+        if (chosen == null || chosen.length == 0) throw new IllegalArgumentException("name at least one signal of the run, e.g. run.current()");
+        for (Signal s : chosen) {
+            if (s == null) throw new IllegalArgumentException("a signal is missing (null)");
+            if (s.timesShared() != current.timesShared()) {
+                throw new IllegalArgumentException("signal " + s.name() + " is not from this run; give signals such as run.current()");
+            }
+        }
+        return List.of(chosen);
     }
 
     /** How the run was solved, and what to know about the result. */

@@ -105,14 +105,6 @@ final class Column {
         return new Shown(chosen.symbol(), chosen.factor(), 0, false);
     }
 
-    /** The unit a CSV file states for this column: the SI unit of the dimension. */
-    String siSymbol() {
-        if (absolute || Dimension.TEMPERATURE.equals(dimension)) return "K";
-        List<Unit> units = Units.displayUnits(dimension);
-        for (Unit u : units) if (u.factor() == 1) return u.symbol();
-        return dimension.isNone() ? "" : dimension.baseSymbols();
-    }
-
     /** A number with {@code digits} significant digits: plain decimals from 0.001 to 1e6, else an exponent. */
     static String number(double v, int digits) {
         if (Double.isNaN(v)) return "NaN";

@@ -1,11 +1,6 @@
 package org.ampturn.study;
 
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.Collections;
@@ -15,6 +10,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.function.DoublePredicate;
 import java.util.function.Predicate;
+import org.ampturn.units.Csv;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
 import org.ampturn.units.Require;
@@ -327,15 +323,18 @@ public final class Table {
         sb.append('\n');
     }
 
-    /** The table as CSV: a header with each column's SI unit, e.g. {@code L (H)}; SI values; empty cells where missing. */
+    /**
+     * The table as CSV ({@link Csv}): a header with each numeric column's SI unit in ASCII, e.g.
+     * {@code L (H)}, {@code R (ohm)}, temperatures in kelvin; SI values that read back exactly;
+     * empty cells where a row has no value; an {@code error} column when some row failed.
+     */
     public String toCsv() {
         StringBuilder sb = new StringBuilder();
         boolean anyError = failures() > 0;
         for (int j = 0; j < columns.size(); j++) {
             Column c = columns.get(j);
             if (j > 0) sb.append(',');
-            String unit = c.numeric() ? c.siSymbol() : "";
-            sb.append(csv(unit.isEmpty() ? c.name : c.name + " (" + unit + ")"));
+            sb.append(c.numeric() ? Csv.header(c.name, c.dimension) : Csv.cell(c.name));
         }
         if (anyError) sb.append(",error");
         sb.append('\n');
@@ -343,42 +342,27 @@ public final class Table {
             for (int j = 0; j < columns.size(); j++) {
                 Column c = columns.get(j);
                 if (j > 0) sb.append(',');
-                if (c.numeric()) {
-                    double v = c.values[i];
-                    if (!Double.isNaN(v)) sb.append(v == Math.rint(v) && Math.abs(v) < 1e15 ? Long.toString((long) v) : Double.toString(v));
-                } else {
-                    sb.append(csv(c.labels[i]));
-                }
+                sb.append(c.numeric() ? Csv.number(c.values[i]) : Csv.cell(c.labels[i]));
             }
-            if (anyError) sb.append(',').append(errors[i] == null ? "" : csv(errors[i]));
+            if (anyError) sb.append(',').append(Csv.cell(errors[i]));
             sb.append('\n');
         }
         return sb.toString();
     }
 
-    /** Writes {@link #toCsv()} to a file (through a temporary file, then a rename); returns the path. */
+    /**
+     * Writes {@link #toCsv()} to a file atomically (temporary file, then a rename) with the user's
+     * normal file permissions; UTF-8, with a byte-order mark only when a label holds non-ASCII text.
+     * Returns the absolute path.
+     */
     public Path saveCsv(String path) {
+        if (path == null || path.isBlank()) throw new IllegalArgumentException("the CSV file name is missing (\"" + path + "\")");
         return saveCsv(Path.of(path));
     }
 
-    /** Writes {@link #toCsv()} to a file (through a temporary file, then a rename); returns the path. */
+    /** Writes {@link #toCsv()} to a file; see {@link #saveCsv(String)}. */
     public Path saveCsv(Path path) {
-        try {
-            Path abs = path.toAbsolutePath();
-            Path dir = abs.getParent();
-            if (dir != null) Files.createDirectories(dir);
-            Path tmp = Files.createTempFile(dir, abs.getFileName().toString(), ".tmp");
-            Files.writeString(tmp, toCsv(), StandardCharsets.UTF_8);
-            Files.move(tmp, abs, StandardCopyOption.REPLACE_EXISTING, StandardCopyOption.ATOMIC_MOVE);
-            return abs;
-        } catch (IOException e) {
-            throw new UncheckedIOException("cannot write the table to " + path + ": " + e.getMessage(), e);
-        }
-    }
-
-    private static String csv(String s) {
-        if (s == null) return "";
-        if (s.contains(",") || s.contains("\"") || s.contains("\n")) return '"' + s.replace("\"", "\"\"") + '"';
-        return s;
+        if (path == null) throw new IllegalArgumentException("the CSV file is missing (null)");
+        return Csv.save(path, toCsv());
     }
 }

@@ -47,6 +47,7 @@ class FiguresTest {
         assertTrue(GraphicsEnvironment.isHeadless(), "the tests run headless (surefire argLine)");
         Figures.useNumbering(() -> 3);
         Figure f = Plots.plot(new RlRun(20_001));
+        Figures.flush(); // the session does this when the entry ends
         Path png = dir.resolve("gate-latch.figures/03-transient.png");
         assertTrue(Files.isRegularFile(png), "figure file " + png);
         assertEquals(Figure.DEFAULT_WIDTH, ImageIO.read(png.toFile()).getWidth());
@@ -83,6 +84,7 @@ class FiguresTest {
     void silencedFiguresPrintNothing() {
         Figures.silence();
         Plots.plot(new double[] {1, 2, 3});
+        Figures.flush();
         assertEquals("", out());
         assertTrue(Files.isRegularFile(dir.resolve("gate-latch.figures/01-values.png")));
     }

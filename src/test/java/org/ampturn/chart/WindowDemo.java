@@ -56,6 +56,22 @@ public final class WindowDemo {
         }
         waitForWindows(1);
         check(Windows.open().equals(List.of("transient")), "one window, named transient");
+        check(titles().equals(List.of("transient — Ampturn")), "its title names the figure and the program: " + titles());
+        String toolkit = java.awt.Toolkit.getDefaultToolkit().getClass().getName();
+        if (toolkit.equals("sun.awt.X11.XToolkit")) {
+            // the toolkit was started by AmpturnWindows, so the X11 window class is ours, not java-lang-Thread
+            java.lang.reflect.Method m = Class.forName(toolkit).getDeclaredMethod("getAWTAppClassName");
+            String wmClass;
+            try {
+                m.setAccessible(true);
+                wmClass = (String) m.invoke(null);
+            } catch (RuntimeException e) {
+                wmClass = null; // the JVM does not open sun.awt.X11: read it with xprop instead (bench/chart window)
+            }
+            if (wmClass != null) {
+                check(wmClass.equals(AmpturnWindows.WINDOW_CLASS) || wmClass.equals(AmpturnWindows.FALLBACK_CLASS), "X11 window class " + wmClass);
+            }
+        }
 
         // plotting again under the same name updates that window
         if (!Boolean.getBoolean("demo.noreplot")) Plots.plot(new RlRun(50_001, 0.8));
@@ -124,6 +140,12 @@ public final class WindowDemo {
         Thread.sleep(hold);
         System.out.println(failures == 0 ? "all window checks passed" : failures + " window checks failed");
         System.exit(failures == 0 ? 0 : 1);
+    }
+
+    private static List<String> titles() {
+        List<String> t = new java.util.ArrayList<>();
+        for (Frame f : Frame.getFrames()) if (f.isShowing()) t.add(f.getTitle());
+        return t;
     }
 
     private static int countShowing() {
