@@ -280,14 +280,20 @@ public final class Session implements AutoCloseable {
                     for (SnippetEvent e : events) if (e.causeSnippet() == null) added.add(e.snippet());
                     break;
                 }
+                boolean shown = false;
                 for (SnippetEvent e : events) {
                     if (e.causeSnippet() != null) continue; // a dependent snippet changed state
                     added.add(e.snippet());
                     Result r = describe(e, events, entrySource, pieceStart, piece);
                     if (r == null) continue;
                     results.add(r);
+                    shown = true;
                     if (r.kind() == Kind.ERROR) failed = true;
                     else kind = r.kind();
+                }
+                if (interrupted && !shown) { // stopped with nothing of its own to show: say so
+                    failed = true;
+                    results.add(Result.of(Kind.ERROR, INTERRUPTED));
                 }
                 if (interrupted) break; // the rest of a stopped entry does not run
                 consumed = entrySource.length() - remaining.length();
@@ -444,8 +450,10 @@ public final class Session implements AutoCloseable {
 
     /** True when a stopped snippet still ended with a value of its own (a study that returned its partial result). */
     private static boolean gaveValue(List<SnippetEvent> events) {
+        // a statement stopped before or while it ran reports VALID with no exception and an empty
+        // value: only a non-empty value is a result the entry returned
         return events.stream().anyMatch(e -> e.causeSnippet() == null && e.exception() == null && e.value() != null
-                && e.status() == Snippet.Status.VALID);
+                && !e.value().isEmpty() && e.status() == Snippet.Status.VALID);
     }
 
     /** The analysis of the text's first snippet, or null when the analysis itself failed on it. */
