@@ -112,6 +112,34 @@ public final class WoundCoil implements Coil {
         return Quantity.of(storedEnergyAt(Require.si("current", current, Dimension.CURRENT)), Dimension.ENERGY);
     }
 
+    /**
+     * The DC current at which the incremental inductance dλ/di has fallen to {@code fraction} of its
+     * small-signal value: the current a choke may carry before its ripple inductance has rolled off
+     * that far (with DC bias in the core material, saturation, or both). Found by bracketing and
+     * Brent's method (Commons Math) to 10⁻⁹ relative.
+     *
+     * @param fraction of the small-signal inductance, between 0.01 and 0.99 (0.8 for "80 % of L")
+     */
+    public Quantity currentAtInductanceFraction(double fraction) {
+        Require.between("inductance fraction", fraction, 0.01, 0.99);
+        if (isLinear()) throw Require.fail("the core of " + circuit.name() + " is linear: its inductance does not fall with current");
+        double l0 = incrementalInductanceAt(0);
+        double target = fraction * l0;
+        // the current that drives 1 mT through the effective area, then doubling until L has fallen
+        double lo = 0;
+        double hi = 1e-3 * circuit.effectiveArea().si() * circuit.reluctanceSI() / turns;
+        int doublings = 0;
+        while (incrementalInductanceAt(hi) > target) {
+            lo = hi;
+            hi *= 2;
+            Require.notInterrupted("the roll-off current search");
+            if (++doublings > 200) throw Require.fail("the inductance of " + describe() + " does not fall to " + fraction + " of " + inductance() + " at any current");
+        }
+        var brent = new org.apache.commons.math3.analysis.solvers.BrentSolver(1e-9, 1e-12 * hi);
+        double i = brent.solve(10_000, x -> incrementalInductanceAt(x) - target, lo, hi);
+        return Quantity.of(Require.result("roll-off current", i), Dimension.CURRENT);
+    }
+
     /** Copper loss i²R at the coil's temperature. */
     public Quantity copperLoss(Quantity current) {
         double i = Require.si("current", current, Dimension.CURRENT);

@@ -85,6 +85,27 @@ public interface MagneticMaterial {
     }
 
     /**
+     * A powder or distributed-gap core material whose permeability rolls off with DC bias: the
+     * incremental relative permeability is μΔ(H) = 1 + (μi − 1)/(1 + (|H|/H½)^n). This is the curve
+     * fit 1/(a + b·H^c) of makers' "percent permeability against DC bias" curves normalised to a = 1,
+     * so H½ = (a/b)^(1/c) in the fit's units and n = c. A core of such a material carries the bias
+     * in its own permeability; a gap in the magnetic circuit adds to it.
+     *
+     * @param initialPermeability μi, 1.5 to 10⁶
+     * @param halfField H½, the DC field at which μi − 1 has halved
+     * @param sharpness n, 0.5 to 5 (larger is a sharper knee)
+     * @param saturation flux density taken as saturated by the saturation check
+     */
+    static MagneticMaterial rollOff(String name, double initialPermeability, Quantity halfField, double sharpness, Quantity saturation) {
+        Require.name("material", name);
+        Require.between("initial relative permeability μi", initialPermeability, 1.5, 1e6);
+        double half = Require.positive("field at half permeability", halfField, Dimension.FIELD_STRENGTH, 1e8);
+        Require.between("roll-off sharpness n", sharpness, 0.5, 5);
+        double bsat = Require.positive("saturation flux density", saturation, Dimension.FLUX_DENSITY, 10);
+        return new RollOffMaterial(name, initialPermeability, half, sharpness, bsat);
+    }
+
+    /**
      * A nonlinear material from its B-H table in SI (H in A/m, B in T), e.g. from a datasheet curve.
      * H and B must increase strictly; the origin is added when missing. Between the points a monotone
      * cubic (Fritsch–Carlson 1980) is used, beyond the last point the slope is μ0, and the curve is odd.
