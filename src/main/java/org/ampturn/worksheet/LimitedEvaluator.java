@@ -2,7 +2,6 @@ package org.ampturn.worksheet;
 
 import java.time.Duration;
 import java.util.List;
-import java.util.concurrent.Executors;
 import java.util.concurrent.ScheduledExecutorService;
 import java.util.concurrent.ScheduledFuture;
 import java.util.concurrent.TimeUnit;
@@ -20,11 +19,18 @@ public final class LimitedEvaluator implements Evaluator {
     /** How long a stopped entry may take to stop before {@code stuck} runs. */
     public static final Duration GRACE = Duration.ofSeconds(10);
 
-    private static final ScheduledExecutorService TIMER = Executors.newSingleThreadScheduledExecutor(r -> {
-        Thread t = new Thread(r, "ampturn-entry-limit");
-        t.setDaemon(true);
+    private static final ScheduledExecutorService TIMER = timer();
+
+    /** One daemon thread; a cancelled limit leaves the queue at once rather than after the limit (a long session enters thousands). */
+    private static ScheduledExecutorService timer() {
+        var t = new java.util.concurrent.ScheduledThreadPoolExecutor(1, r -> {
+            Thread th = new Thread(r, "ampturn-entry-limit");
+            th.setDaemon(true);
+            return th;
+        });
+        t.setRemoveOnCancelPolicy(true);
         return t;
-    });
+    }
 
     private final Evaluator inner;
     private final Duration limit;
