@@ -194,8 +194,10 @@ public final class WorstCase {
 
         public boolean allPass() { return corners.stream().allMatch(Corner::passes); }
 
-        /** One line per corner, the deciding one marked with ◀. */
-        public String table() {
+        /** The table: one line per corner, the deciding one marked with ◀ (its {@code toString()} is the text). */
+        public Text table() { return new Text(tableText()); }
+
+        String tableText() {
             StringBuilder sb = new StringBuilder("worst-case corners, supply " + supply + "\n");
             for (int i = 0; i < corners.size(); i++) {
                 Corner c = corners.get(i);
@@ -214,6 +216,11 @@ public final class WorstCase {
             return "worst case " + supply + ": " + corners.size() + " corners, " + (failing == 0 ? "all pass" : failing + " FAIL") + "; deciding: "
                     + d.name() + " " + d.valueText() + " " + d.limit() + " (" + String.format(Locale.ROOT, "%+.1f %%", 100 * d.margin()) + ")";
         }
+    }
+
+    /** A block of text that the console prints as it is (a table of lines). */
+    public record Text(String text) {
+        @Override public String toString() { return text; }
     }
 
     @Override
