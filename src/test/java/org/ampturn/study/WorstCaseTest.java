@@ -36,8 +36,8 @@ class WorstCaseTest {
         double least = Double.POSITIVE_INFINITY;
         for (WorstCase.Corner c : r.corners()) least = Math.min(least, c.margin());
         assertEquals(least, r.deciding().margin());
-        assertTrue(r.table().text().lines().filter(l -> l.endsWith("◀ deciding")).count() == 1, r.table());
-        assertTrue(r.table().text().lines().anyMatch(l -> l.startsWith("  " + r.deciding().name()) && l.endsWith("◀ deciding")), r.table());
+        assertTrue(r.table().text().lines().filter(l -> l.endsWith("◀ deciding")).count() == 1, r.table().text());
+        assertTrue(r.table().text().lines().anyMatch(l -> l.startsWith("  " + r.deciding().name()) && l.endsWith("◀ deciding")), r.table().text());
     }
 
     @Test
@@ -48,7 +48,7 @@ class WorstCaseTest {
         assertFalse(r.allPass());
         assertEquals("pick-up", r.deciding().name());
         assertTrue(r.toString().contains("1 FAIL; deciding: pick-up"), r.toString());
-        assertTrue(r.table().text().contains("FAIL"), r.table());
+        assertTrue(r.table().text().contains("FAIL"), r.table().text());
     }
 
     @Test
