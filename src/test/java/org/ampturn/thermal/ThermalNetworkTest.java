@@ -148,4 +148,16 @@ class ThermalNetworkTest {
         assertTrue(c.warnings().stream().anyMatch(s -> s.startsWith("caution") && s.contains("licensed practice")));
         assertTrue(c.toString().contains("OVER class 130 (B)"), c.toString());
     }
+
+    @Test
+    void marginsReadInKelvinAndTemperaturesInCelsius() {
+        // a 0.66 K margin reads "0.6600 K", not "660.0 mK" (temperature differences in K, absolute ones in °C)
+        assertEquals("0.6600 K", HotCoil.kelvin(0.66).toString());
+        assertEquals("0.6600 K", Quantity.parse(HotCoil.kelvin(0.66).toString()).toString());
+        ThermalNetwork n = ThermalNetwork.oneBody(q("50 J/K"), q("20 K/W"));
+        // 4.7 W: steady 119.0 °C, the class B winding limit is 120 °C: margin 1 K less a little
+        HeatingCurve c = n.heat(q("4.7 W"), q("100000 s"));
+        assertEquals(120 - 25 - 94, c.margin().si(), 1e-6);
+        assertTrue(c.toString().contains("1.000 K below class 130 (B)"), c.toString());
+    }
 }
