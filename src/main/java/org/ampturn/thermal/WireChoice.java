@@ -38,9 +38,11 @@ public final class WireChoice {
     private final double hot, cold;
     private final InsulationClass insulation;
     private final Cooling cooling;
+    private final double duty;
 
     private WireChoice(Bobbin bobbin, WireSeries series, double volts, double vtol, double minNI, double minI, double maxP, double maxRise,
-            double fill, double bulge, double tape, double rtol, double hot, double cold, InsulationClass insulation, Cooling cooling) {
+            double fill, double bulge, double tape, double rtol, double hot, double cold, InsulationClass insulation, Cooling cooling, double duty) {
+        this.duty = duty;
         this.bobbin = bobbin;
         this.series = series;
         this.volts = volts;
@@ -67,12 +69,12 @@ public final class WireChoice {
     public static WireChoice forBobbin(Bobbin bobbin) {
         Require.present("bobbin", bobbin);
         return new WireChoice(bobbin, WireSeries.metric().and(WireSeries.awg()), Double.NaN, 0, 0, 0, Double.POSITIVE_INFINITY,
-                Double.POSITIVE_INFINITY, 1, 1, 0, Double.NaN, 298.15, 293.15, InsulationClass.B, Cooling.handbookRule());
+                Double.POSITIVE_INFINITY, 1, 1, 0, Double.NaN, 298.15, 293.15, InsulationClass.B, Cooling.handbookRule(), 1);
     }
 
     private WireChoice copy(WireSeries s, double v, double vt, double ni, double i, double p, double r, double f, double b, double t, double rt,
             double h, double c, InsulationClass ic, Cooling co) {
-        return new WireChoice(bobbin, s, v, vt, ni, i, p, r, f, b, t, rt, h, c, ic, co);
+        return new WireChoice(bobbin, s, v, vt, ni, i, p, r, f, b, t, rt, h, c, ic, co, duty);
     }
 
     /** The supply and its tolerance in percent (±), e.g. {@code withSupply(V(24), 10)}. */
@@ -166,6 +168,18 @@ public final class WireChoice {
         return copy(series, volts, vtol, minNI, minI, maxP, maxRise, fill, bulge, tape, percent / 100, hot, cold, insulation, cooling);
     }
 
+    /**
+     * Intermittent duty (on-time / period, in percent): the temperature is then the steady state at
+     * the mean loss, duty × V²/R. That is the mean of the cyclic steady state; for periods much shorter
+     * than the winding's thermal time constant the peak is close to it; check the peak with
+     * {@link ThermalNetwork#duty}. The power corner stays the loss while on.
+     */
+    public WireChoice withDuty(double percent) {
+        if (!(percent > 0 && percent <= 100)) throw Require.fail("duty (" + Require.show(percent) + " %) must be above 0 % and at most 100 %");
+        return new WireChoice(bobbin, series, volts, vtol, minNI, minI, maxP, maxRise, fill, bulge, tape, rtol, hot, cold, insulation, cooling,
+                percent / 100);
+    }
+
     /** Runs every wire of the series; fails only when no supply was given. */
     public WireChoices choose() {
         if (Double.isNaN(volts)) throw Require.fail("the wire choice needs the supply: withSupply(V(24), 10) for 24 V ±10 %");
@@ -205,7 +219,7 @@ public final class WireChoice {
         try {
             hs = Heating.of(Quantity.of(r20 * (1 - tol), Dimension.RESISTANCE), cu, Quantity.of(area, Dimension.AREA))
                     .withCooling(cooling).withInsulationClass(insulation).withAmbient(Quantity.temperatureKelvin(hot))
-                    .atVoltage(Quantity.of(vmax, Dimension.VOLTAGE));
+                    .atVoltage(Quantity.of(vmax * Math.sqrt(duty), Dimension.VOLTAGE)); // mean loss duty·V²/R
         } catch (IllegalStateException | IllegalArgumentException e) {
             double p = vmax * vmax / (r20 * (1 - tol) * cu.resistanceRatioAt(cold));
             return new WireCandidate(w, n, layers, r20, Double.NaN, p, Double.NaN, Double.NaN, Double.NaN, mlt, area, tol,
@@ -260,6 +274,7 @@ public final class WireChoice {
         if (minI > 0) sb.append(", ≥ ").append(Quantity.of(minI, Dimension.CURRENT)).append(" hot");
         if (maxP < Double.POSITIVE_INFINITY) sb.append(", ≤ ").append(Quantity.of(maxP, Dimension.POWER));
         if (maxRise < Double.POSITIVE_INFINITY) sb.append(", rise ≤ ").append(HotCoil.kelvin(maxRise));
+        if (duty < 1) sb.append(", duty ").append(Require.show(100 * duty)).append(" %");
         sb.append(", ambient ").append(Quantity.temperatureKelvin(cold)).append(" to ").append(Quantity.temperatureKelvin(hot));
         sb.append(", ").append(insulation);
         return sb.toString();

@@ -130,4 +130,24 @@ class WireChoiceTest {
         e = assertThrows(IllegalArgumentException.class, () -> c.withBuildFactor(0.9));
         assertTrue(e.getMessage().contains("build factor"), e.getMessage());
     }
+
+    @Test
+    void dutyHeatsAtTheMeanLoss() {
+        // 25 % duty: the steady rise at the mean loss 0.25·V²/R, with constant h the positive root of
+        // θ·(k0 + αθ) = 0.25·V²/(0.95·R20·h·A) (the worked example's Ø0.400 mm wire, which fails continuously)
+        double bare = 0.40e-3, overall = 0.44e-3, w = 40e-3, di = 20e-3, depth = 15e-3;
+        int n = (int) Math.floor(w / overall + 1e-9) * (int) Math.floor(depth / overall + 1e-9);
+        double build = Math.floor(depth / overall + 1e-9) * overall;
+        double r20 = RHO20 * n * Math.PI * (di + build) / (Math.PI / 4 * bare * bare);
+        double area = Math.PI * (di + 2 * build) * w + 2 * Math.PI * (di + build) * build;
+        double k0 = 1 + ALPHA * 20, v = 26.4;
+        double theta = (-k0 + Math.sqrt(k0 * k0 + 4 * ALPHA * 0.25 * v * v / (r20 * 0.95 * 12 * area))) / (2 * ALPHA);
+        WireChoices r = WireChoice.forBobbin(Bobbin.of(q("40 mm"), q("20 mm"), q("15 mm")))
+                .withSeries(WireSeries.of("one", List.of(wire(0.40, 0.44)))).withSupply(q("24 V"), 10).withResistanceTolerance(5)
+                .withMinAmpereTurns(q("450 A")).withMaxRise(q("50 K")).withAmbient(q("40 degC")).withDuty(25)
+                .withCooling(Cooling.surfaceCoefficient(q("12 W/(m^2*K)"))).choose();
+        assertEquals(313.15 + theta, r.best().hotTemperature().si(), 1e-6);
+        assertTrue(theta < 50, "meets the rise at 25 % duty: " + theta);
+        assertThrows(IllegalArgumentException.class, () -> WireChoice.forBobbin(Bobbin.of(q("40 mm"), q("20 mm"), q("15 mm"))).withDuty(120));
+    }
 }
