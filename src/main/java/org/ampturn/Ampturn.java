@@ -219,6 +219,18 @@ public final class Ampturn {
     /** The figures made so far with their files, one a line. */
     public static String figures() { return org.ampturn.chart.Figures.listing(); }
 
+    // ---- thermal ----
+    /** A heat capacity in J/K: {@code ThermalNetwork.oneBody(JperK(50), KperW(20))}. */
+    public static Quantity JperK(double x) { return Quantity.of(x, "J/K"); }
+
+    /** A thermal resistance in K/W. */
+    public static Quantity KperW(double x) { return Quantity.of(x, "K/W"); }
+
+    /** The wire choice for a bobbin over the IEC 60317 metric and AWG series: {@code chooseWire(b).withSupply(V(24), 10)...choose()}. */
+    public static org.ampturn.thermal.WireChoice chooseWire(org.ampturn.wire.Bobbin bobbin) {
+        return org.ampturn.thermal.WireChoice.forBobbin(bobbin);
+    }
+
     // ---- wire ----
     /** An AWG copper magnet wire, heavy build (ASTM B258): {@code awg(24)}, {@code awg(24.5)}. */
     public static org.ampturn.wire.Wire awg(double gauge) { return org.ampturn.wire.Wire.awg(gauge); }

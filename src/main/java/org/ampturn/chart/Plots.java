@@ -46,6 +46,9 @@ public final class Plots {
         if (x instanceof org.ampturn.drive.Signal s) return Typed.of(s);
         if (x instanceof org.ampturn.study.Table t) return Typed.of(t);
         if (x instanceof org.ampturn.study.MonteCarlo mc) return Typed.of(mc);
+        if (x instanceof org.ampturn.thermal.HeatingCurve c) return ThermalFigures.of(c);
+        if (x instanceof org.ampturn.thermal.DutyCycle d) return ThermalFigures.of(d);
+        if (x instanceof org.ampturn.thermal.ElectroThermalRun r) return ThermalFigures.of(r);
         if (x instanceof double[] v) {
             double[] i = new double[v.length];
             Arrays.setAll(i, k -> k);
@@ -59,7 +62,7 @@ public final class Plots {
             return Adapt.tableData(x, cols.get(0), List.of());
         }
         throw new IllegalArgumentException("cannot plot " + Adapt.describe(x)
-                + "; plot takes a transient, a table, a magnetic material, a double[] or figure data");
+                + "; plot takes a transient, a table, a magnetic material, a heating curve, duty cycle or electro-thermal run, a double[] or figure data");
     }
 
     static String defaultName(Object x) {
@@ -70,6 +73,8 @@ public final class Plots {
         if (x instanceof org.ampturn.drive.Signal s) return s.name();
         if (x instanceof org.ampturn.study.Table t) return t.parameterNames().size() == 2 ? "map" : "sweep";
         if (x instanceof org.ampturn.study.MonteCarlo) return "histogram";
+        if (x instanceof org.ampturn.thermal.HeatingCurve || x instanceof org.ampturn.thermal.DutyCycle
+                || x instanceof org.ampturn.thermal.ElectroThermalRun) return "heating";
         if (x instanceof double[]) return "values";
         if (Adapt.isTransient(x)) return "transient";
         if (Adapt.isTable(x)) return "sweep";

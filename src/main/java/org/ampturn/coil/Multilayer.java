@@ -154,11 +154,33 @@ public final class Multilayer implements AirCoil {
     public Comparison compare() {
         double exact = filaments().selfInductance();
         Comparison.Builder b = Comparison.builder("multilayer coil, " + turns() + " turns", "filament sum (Maxwell, exact)", exact);
-        b.row("Wheeler 1928 multilayer", wheeler1928At(turns(), length, (inner + outer) / 4, (outer - inner) / 2), "about 1 % when 6a, 9b, 10c are alike");
+        b.row("Wheeler 1928 multilayer", wheeler1928At(turns(), length, (inner + outer) / 4, (outer - inner) / 2),
+                rangeNotes().isEmpty() ? "about 1 % when 6a, 9b, 10c are alike" : "OUTSIDE its range (6a, 9b, 10c within 3×): rough");
         if (isBrooks()) b.row("Brooks 1931", brooksAt(turns(), (inner + outer) / 4), "Brooks proportions only");
         double d = (inner + outer) / 2;
         b.row("current sheet at mean diameter", Solenoid.inductanceAt(turns(), length, d), "thin build only");
         return b.build();
+    }
+
+    /**
+     * Wheeler's multilayer formula is "about 1 %" when the three terms 6a, 9b and 10c of its
+     * denominator are of the same order (Wheeler 1928); the range taken here is the largest at most
+     * this many times the smallest (an interpretation, from memory, not a figure of Wheeler's).
+     */
+    public static final double WHEELER_1928_MAX_TERM_RATIO = 3;
+
+    /**
+     * A note when Wheeler's multilayer formula is used outside its range (its terms 6a, 9b, 10c more
+     * than 3× apart); empty when inside. {@link #inductance()} is the filament sum and needs none.
+     */
+    public java.util.List<String> rangeNotes() {
+        double a = (inner + outer) / 4, c = (outer - inner) / 2;
+        double t1 = 6 * a, t2 = 9 * length, t3 = 10 * c;
+        double ratio = Math.max(t1, Math.max(t2, t3)) / Math.min(t1, Math.min(t2, t3));
+        if (ratio <= WHEELER_1928_MAX_TERM_RATIO) return java.util.List.of();
+        return java.util.List.of("Wheeler's 1928 multilayer formula is used outside its range: its terms 6a, 9b, 10c are "
+                + Quantity.number(ratio) + "× apart, taken to hold (about 1 %) within " + Require.show(WHEELER_1928_MAX_TERM_RATIO)
+                + "×: treat wheeler1928() as a rough estimate; inductance() does not use it");
     }
 
     Filaments filaments() {

@@ -130,13 +130,54 @@ public final class Solenoid implements AirCoil {
         double exact = inductanceAt(turns, length, diameter);
         double ratio = diameter / length;
         Comparison.Builder b = Comparison.builder("single-layer solenoid, D/l = " + Quantity.number(ratio), "current sheet (Nagaoka, exact)", exact);
-        b.row("Wheeler 1928 long-coil", wheeler1928At(turns, length, diameter), "within 1 % for l/D > 0.4");
+        String w28 = wheeler1928Note(length, diameter);
+        b.row("Wheeler 1928 long-coil", wheeler1928At(turns, length, diameter), w28 == null ? "within 1 % for l/D > 0.4" : "OUTSIDE its range (l/D > 0.4): rough");
         b.row("Wheeler 1982 continuous", wheeler1982At(turns, length, diameter), "about 0.1 %, any l/D");
         if (hasWire()) {
-            b.row("sheet less Rosa's correction", exact - roundWireCorrectionAt(turns, length, diameter, wire), "pitch ≪ radius");
+            b.row("sheet less Rosa's correction", exact - roundWireCorrectionAt(turns, length, diameter, wire),
+                    rosaNote(turns, length, diameter) == null ? "pitch ≪ radius" : "OUTSIDE its range (pitch ≤ D/10): rough");
             b.row("filament sum (Maxwell)", filaments().selfInductance(), "round wire, DC");
         }
         return b.build();
+    }
+
+    /** Wheeler's 1928 long-coil formula holds (within 1 %) for l/D above this (Wheeler 1928). */
+    public static final double WHEELER_1928_MIN_LENGTH_OVER_DIAMETER = 0.4;
+    /**
+     * Rosa's round-wire correction treats each turn as a ring in a field that varies slowly over the
+     * pitch; the range taken here is a pitch of at most a tenth of the diameter (common practice for
+     * "pitch ≪ radius", not a figure of Rosa's).
+     */
+    public static final double ROSA_MAX_PITCH_OVER_DIAMETER = 0.1;
+
+    /**
+     * A note for each approximate formula of this coil that is used outside the range its source
+     * states (Wheeler 1928 for l/D ≤ 0.4; Rosa's correction, when the wire is known, for a pitch
+     * over D/10); empty when every one is inside. The exact current-sheet value needs none.
+     */
+    public java.util.List<String> rangeNotes() {
+        java.util.List<String> notes = new java.util.ArrayList<>();
+        String w = wheeler1928Note(length, diameter);
+        if (w != null) notes.add(w);
+        if (hasWire()) {
+            String r = rosaNote(turns, length, diameter);
+            if (r != null) notes.add(r);
+        }
+        return java.util.List.copyOf(notes);
+    }
+
+    static String wheeler1928Note(double length, double diameter) {
+        double r = length / diameter;
+        if (r > WHEELER_1928_MIN_LENGTH_OVER_DIAMETER) return null;
+        return "Wheeler's 1928 long-coil formula is used outside its range: l/D = " + Quantity.number(r) + ", stated within 1 % for l/D > "
+                + WHEELER_1928_MIN_LENGTH_OVER_DIAMETER + " (Wheeler 1928): treat it as a rough estimate; inductance() does not use it";
+    }
+
+    static String rosaNote(int turns, double length, double diameter) {
+        double r = length / turns / diameter;
+        if (r <= ROSA_MAX_PITCH_OVER_DIAMETER) return null;
+        return "Rosa's round-wire correction is used outside its range: pitch/D = " + Quantity.number(r) + ", taken to hold for pitch/D ≤ "
+                + ROSA_MAX_PITCH_OVER_DIAMETER + " (pitch ≪ radius): treat inductance() as a rough estimate";
     }
 
     Filaments filaments() {

@@ -43,7 +43,9 @@ public interface Cooling {
     /**
      * The rule printed in ferrite-core catalogues for cores in still air: ΔT = (P/A)^0.833 °C with P in
      * mW and A in cm² (from memory). It gives rises about a third lower than {@link #handbookRule()} at
-     * 0.05 W/cm²; use whichever your parts were measured against.
+     * 0.05 W/cm²; use whichever your parts were measured against. The catalogues state no range; the
+     * range taken is that of rises of 5 to 100 K (0.0069 to 0.25 W/cm²; assumed), outside which the
+     * result's warnings say so.
      */
     static Cooling ferriteCatalogueRule() {
         return PowerLawCooling.FERRITE;

@@ -118,7 +118,7 @@ public final class Units {
         display(Dimension.MASS, "kg", "g", "mg", "µg");
         display(Dimension.TIME, "s", "ms", "µs", "ns", "ps");
         display(Dimension.CURRENT, "kA", "A", "mA", "µA", "nA", "pA");
-        display(Dimension.TEMPERATURE, "K", "mK");
+        display(Dimension.TEMPERATURE, "K"); // a temperature difference reads in K (0.66 K, not 657.1 mK); absolute ones print in °C
         display(Dimension.AREA, "m²", "cm²", "mm²", "µm²");
         display(Dimension.VOLUME, "m³", "cm³", "mm³");
         display(Dimension.FREQUENCY, "GHz", "MHz", "kHz", "Hz", "mHz");

@@ -46,12 +46,37 @@ public final class Insulation {
     /** IEC 60317 grade 3, taken as {@link #TRIPLE} (common practice). */
     public static final Insulation GRADE_3 = new Insulation("grade 3", TRIPLE_INC, 0);
 
+    // IEC 60317-0-1 (Table 1) maximum overall diameters of enamelled round copper wire, grades 1, 2, 3 (mm), at
+    // these nominal bare diameters; FROM MEMORY except 0.100 mm grade 1 (0.117 mm, seen in a published
+    // manufacturer's note quoting the standard). Stored as increases (overall − bare).
+    private static final double[] IEC_D = {0.050, 0.100, 0.200, 0.500, 1.000, 2.000, 5.000};
+    private static final double[] IEC_G1 = {0.060 - 0.050, 0.117 - 0.100, 0.226 - 0.200, 0.544 - 0.500, 1.062 - 1.000, 2.074 - 2.000, 5.093 - 5.000};
+    private static final double[] IEC_G2 = {0.065 - 0.050, 0.125 - 0.100, 0.239 - 0.200, 0.566 - 0.500, 1.093 - 1.000, 2.112 - 2.000, 5.135 - 5.000};
+    private static final double[] IEC_G3 = {0.069 - 0.050, 0.132 - 0.100, 0.252 - 0.200, 0.587 - 0.500, 1.124 - 1.000, 2.150 - 2.000, 5.177 - 5.000};
+
+    /**
+     * IEC 60317-0-1 grade 1, at its <em>maximum</em> overall diameter (the figure to lay out a bobbin
+     * with): interpolated log-log between table points at 0.05 to 5 mm. The table is from memory
+     * except the point 0.100 mm → 0.117 mm; check it against the standard before relying on a tight fit.
+     */
+    public static final Insulation IEC_GRADE_1_MAX = new Insulation("grade 1 max", IEC_D, IEC_G1, 0);
+    /** IEC 60317-0-1 grade 2 at its maximum overall diameter (from memory; see {@link #IEC_GRADE_1_MAX}). */
+    public static final Insulation IEC_GRADE_2_MAX = new Insulation("grade 2 max", IEC_D, IEC_G2, 0);
+    /** IEC 60317-0-1 grade 3 at its maximum overall diameter (from memory; see {@link #IEC_GRADE_1_MAX}). */
+    public static final Insulation IEC_GRADE_3_MAX = new Insulation("grade 3 max", IEC_D, IEC_G3, 0);
+
     private final String name;
+    private final double[] dia;
     private final double[] table;
     private final double fixed;
 
     private Insulation(String name, double[] table, double fixed) {
+        this(name, D, table, fixed);
+    }
+
+    private Insulation(String name, double[] dia, double[] table, double fixed) {
         this.name = name;
+        this.dia = dia;
         this.table = table;
         this.fixed = fixed;
     }
@@ -74,6 +99,7 @@ public final class Insulation {
         Require.finite("bare metres", bareMetres);
         if (table == null) return Require.result("increase", fixed);
         double dmm = bareMetres * 1e3;
+        double[] D = dia;
         if (dmm <= D[0]) return Require.result("increase", table[0] * 1e-3);
         int n = D.length;
         if (dmm >= D[n - 1]) return Require.result("increase", table[n - 1] * 1e-3);
