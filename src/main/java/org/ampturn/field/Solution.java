@@ -36,7 +36,8 @@ public final class Solution {
         this.converged = converged;
         br = new double[model.ne];
         bz = new double[model.ne];
-        double w = 0;
+        double[] bq = new double[3 * model.ne];
+        double peak = 0;
         for (int e = 0; e < model.ne; e++) {
             int o = 3 * e;
             double p0 = psi[model.tri[o]], p1 = psi[model.tri[o + 1]], p2 = psi[model.tri[o + 2]];
@@ -46,23 +47,44 @@ public final class Solution {
                 double bzq = model.gq[g + 3] * p0 + model.gq[g + 4] * p1 + model.gq[g + 5] * p2;
                 br[e] += brq / 3;
                 bz[e] += bzq / 3;
-                double bq = Math.hypot(brq, bzq);
-                w += model.wq[3 * e + q] * (model.mat[e] == null ? 0.5 * model.nu0[e] * bq * bq : energyDensity(model.mat[e], bq));
+                bq[3 * e + q] = Math.hypot(brq, bzq);
+                if (model.mat[e] != null) peak = Math.max(peak, bq[3 * e + q]);
+            }
+        }
+        java.util.Map<MagneticMaterial, double[]> tables = new java.util.IdentityHashMap<>();
+        final double top = peak;
+        double w = 0;
+        for (int e = 0; e < model.ne; e++) {
+            for (int q = 0; q < 3; q++) {
+                double b = bq[3 * e + q];
+                double dens;
+                if (model.mat[e] == null) dens = 0.5 * model.nu0[e] * b * b;
+                else dens = lookup(tables.computeIfAbsent(model.mat[e], m -> energyTable(m, top)), top, b);
+                w += model.wq[3 * e + q] * dens;
             }
         }
         energy = w;
     }
 
-    /** ∫₀^B H dB (J/m³) by Simpson's rule on 16 intervals. */
-    static double energyDensity(MagneticMaterial m, double b) {
-        if (b == 0) return 0;
-        int n = 16;
-        double s = 0;
-        for (int k = 0; k <= n; k++) {
-            double h = m.fieldAt(b * k / n);
-            s += h * (k == 0 || k == n ? 1 : k % 2 == 1 ? 4 : 2);
+    static final int TABLE = 4096;
+
+    /** ∫₀^B H dB (J/m³) on TABLE steps from 0 to {@code peak} (trapezoid rule on the material's H(B)). */
+    static double[] energyTable(MagneticMaterial m, double peak) {
+        double[] t = new double[TABLE + 1];
+        double step = peak / TABLE, prev = 0;
+        for (int k = 1; k <= TABLE; k++) {
+            double h = m.fieldAt(k * step);
+            t[k] = t[k - 1] + 0.5 * (prev + h) * step;
+            prev = h;
         }
-        return s * b / n / 3;
+        return t;
+    }
+
+    private static double lookup(double[] t, double peak, double b) {
+        if (peak == 0) return 0;
+        double u = b / peak * TABLE;
+        int k = Math.min(TABLE - 1, (int) u);
+        return t[k] + (u - k) * (t[k + 1] - t[k]);
     }
 
     public Mesh mesh() { return model.mesh; }
