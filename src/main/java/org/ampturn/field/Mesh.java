@@ -198,6 +198,10 @@ public final class Mesh {
     }
 
     public Geometry geometry() { return geometry; }
+    /** Radii of the grid lines (m), rising from the axis. */
+    public double[] radii() { return r.clone(); }
+    /** Heights of the grid lines (m), rising. */
+    public double[] heights() { return z.clone(); }
     public int nodes() { return r.length * z.length; }
     public int triangles() { return region.length; }
     /** How many times {@link #refined()} was applied. */

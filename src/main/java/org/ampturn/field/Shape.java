@@ -144,8 +144,10 @@ public final class Shape {
         return true;
     }
 
-    double[] rs() { return r.clone(); }
-    double[] zs() { return z.clone(); }
+    /** Radii of the corners (m), in order. */
+    public double[] rs() { return r.clone(); }
+    /** Heights of the corners (m), in order. */
+    public double[] zs() { return z.clone(); }
     int corners() { return r.length; }
     double rAt(int i) { return r[i]; }
     double zAt(int i) { return z[i]; }

@@ -163,7 +163,7 @@ public final class Solution {
     }
 
     /** Flux density (|B|, B_r, B_z in T) at (r, z) in metres. */
-    double[] fluxDensityAt(double r, double z) {
+    public double[] fluxDensityAt(double r, double z) {
         double[] gr = model.mesh.r, gz = model.mesh.z;
         Require.between("r (m)", r, 0, gr[gr.length - 1]);
         Require.between("z (m)", z, gz[0], gz[gz.length - 1]);
@@ -266,8 +266,8 @@ public final class Solution {
         return f;
     }
 
-    /** The flux function r·A_φ at every node, row by row in z (flux lines are its contours). */
-    double[] fluxFunction() {
+    /** The flux function r·A_φ (Wb/rad) at every node, row by row in z (flux lines are its contours). */
+    public double[] fluxFunction() {
         double[] out = new double[psi.length];
         for (int n = 0; n < psi.length; n++) out[n] = model.mesh.r[n % model.nr] * psi[n];
         return out;
