@@ -58,7 +58,8 @@ public final class FieldFigures {
             ox.add(Double.NaN);
             oy.add(Double.NaN);
         }
-        Trace lines = Trace.of("flux lines", unbox(xs), unbox(ys));
+        double[][] chained = chain(unbox(xs), unbox(ys), 1e-9 * (view[1] - view[0] + view[3] - view[2]), Build.SAMPLING_ABOVE - 10);
+        Trace lines = Trace.of("flux lines", chained[0], chained[1]);
         Trace outlines = Trace.of("regions", unbox(ox), unbox(oy));
         return new FigureData.Lines("flux lines, " + s.mesh().nodes() + " nodes", "r", Dimension.LENGTH,
                 List.of(new Panel("z", Dimension.LENGTH, List.of(outlines, lines))), List.of());
@@ -137,6 +138,74 @@ public final class FieldFigures {
         ys.add(pz[1]);
         xs.add(Double.NaN);
         ys.add(Double.NaN);
+    }
+
+    /**
+     * Joins segments (pairs of points between NaN breaks) into polylines by their shared ends, then
+     * keeps every k-th inner point so that at most {@code most} points remain (the line renderer
+     * draws a trace of up to that many points as given).
+     */
+    static double[][] chain(double[] x, double[] y, double tol, int most) {
+        int segs = x.length / 3;
+        java.util.Map<String, List<Integer>> ends = new java.util.HashMap<>();
+        for (int k = 0; k < segs; k++) {
+            for (int e = 0; e < 2; e++) ends.computeIfAbsent(key(x[3 * k + e], y[3 * k + e], tol), q -> new ArrayList<>()).add(k);
+        }
+        boolean[] used = new boolean[segs];
+        List<double[]> polylines = new ArrayList<>();
+        int points = 0;
+        for (int k = 0; k < segs; k++) {
+            if (used[k]) continue;
+            used[k] = true;
+            java.util.ArrayDeque<double[]> line = new java.util.ArrayDeque<>();
+            line.add(new double[] {x[3 * k], y[3 * k]});
+            line.add(new double[] {x[3 * k + 1], y[3 * k + 1]});
+            for (int side = 0; side < 2; side++) {
+                while (true) {
+                    double[] end = side == 0 ? line.peekLast() : line.peekFirst();
+                    int next = -1;
+                    for (int c : ends.getOrDefault(key(end[0], end[1], tol), List.of())) if (!used[c]) { next = c; break; }
+                    if (next < 0) break;
+                    used[next] = true;
+                    boolean firstMatches = key(x[3 * next], y[3 * next], tol).equals(key(end[0], end[1], tol));
+                    double[] other = firstMatches ? new double[] {x[3 * next + 1], y[3 * next + 1]} : new double[] {x[3 * next], y[3 * next]};
+                    if (side == 0) line.addLast(other); else line.addFirst(other);
+                }
+            }
+            double[] flat = new double[2 * line.size()];
+            int i = 0;
+            for (double[] p : line) { flat[i++] = p[0]; flat[i++] = p[1]; }
+            polylines.add(flat);
+            points += line.size() + 1;
+        }
+        int step = 1;
+        while (thinned(polylines, step) > most) step++;
+        List<Double> ox = new ArrayList<>(), oy = new ArrayList<>();
+        for (double[] p : polylines) {
+            int n = p.length / 2;
+            for (int i = 0; i < n; i++) {
+                if (i != 0 && i != n - 1 && i % step != 0) continue;
+                ox.add(p[2 * i]);
+                oy.add(p[2 * i + 1]);
+            }
+            ox.add(Double.NaN);
+            oy.add(Double.NaN);
+        }
+        if (ox.isEmpty()) { ox.add(Double.NaN); oy.add(Double.NaN); }
+        return new double[][] {unbox(ox), unbox(oy)};
+    }
+
+    private static int thinned(List<double[]> polylines, int step) {
+        int count = 0;
+        for (double[] p : polylines) {
+            int n = p.length / 2;
+            count += Math.min(n, 2 + Math.max(0, (n - 3) / step + 1)) + 1;
+        }
+        return count;
+    }
+
+    private static String key(double x, double y, double tol) {
+        return Math.round(x / tol) + ":" + Math.round(y / tol);
     }
 
     private static double[] unbox(List<Double> v) {
