@@ -199,6 +199,6 @@ public final class Geometry {
     public String toString() {
         List<String> names = new ArrayList<>();
         for (Region g : regions) names.add(g.name());
-        return "geometry of " + regions.size() + " regions " + names + ", domain factor " + Require.show(factor) + ", " + cells + " cells across";
+        return "geometry of " + regions.size() + (regions.size() == 1 ? " region " : " regions ") + names + ", domain factor " + Require.show(factor) + ", " + cells + " cells across";
     }
 }
