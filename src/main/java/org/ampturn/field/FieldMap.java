@@ -107,6 +107,12 @@ public final class FieldMap {
         } catch (InterruptedException e) {
             stopped = true;
             pool.shutdownNow();
+            // let the workers see the stop and finish storing a position already solved
+            try {
+                pool.awaitTermination(30, java.util.concurrent.TimeUnit.SECONDS);
+            } catch (InterruptedException again) {
+                // stopped twice: keep what is stored now
+            }
             Thread.currentThread().interrupt();
         } catch (ExecutionException e) {
             pool.shutdownNow();
