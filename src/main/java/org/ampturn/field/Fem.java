@@ -268,11 +268,16 @@ final class Fem {
         }
 
         Solution run() {
+            return run(null);
+        }
+
+        /** Solve from {@code start} (a nearby solution, e.g. at a lower current, scaled), or from zero when null. */
+        Solution run(double[] start) {
             double[] f = load();
             double fnorm = 0;
             for (int n = 0; n < f.length; n++) if (eq[n] >= 0) fnorm += f[n] * f[n];
             fnorm = Math.sqrt(fnorm);
-            double[] psi = new double[nr * nzl];
+            double[] psi = start == null ? new double[nr * nzl] : start.clone();
             double[] res = new double[neq];
             LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> chol = LinearSolverFactory_DSCC.cholesky(FillReducing.NONE);
             DMatrixRMaj rhs = new DMatrixRMaj(neq, 1), dx = new DMatrixRMaj(neq, 1);
@@ -282,7 +287,7 @@ final class Fem {
             double norm = assemble(psi, f, res, true);
             if (fnorm == 0) {
                 if (!chol.setA(k)) throw Require.fail("field solve: the stiffness matrix is not positive definite");
-                return new Solution(this, psi, 0, 0, chol, true);
+                return new Solution(this, new double[nr * nzl], 0, 0, chol, true);
             }
             while (true) {
                 Require.notInterrupted("field solve");

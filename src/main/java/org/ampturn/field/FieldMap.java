@@ -80,12 +80,21 @@ public final class FieldMap {
             final int kk = k;
             futures.add(pool.submit(() -> {
                 Geometry g = geometry.movedAt(part, Math.signum(t) * x[kk]);
-                Mesh mesh = g.mesh();
+                Fem.Model model = new Fem.Model(g.mesh());
                 double[] l = new double[amps.length], f = new double[amps.length];
                 int most = 0;
+                double[] last = null;
                 for (int j = 0; j < amps.length; j++) {
                     if (Thread.interrupted()) throw new CancellationException("field map stopped");
-                    Solution s = Mesh.onGrid(g.withAmps(winding, amps[j]), mesh.r, mesh.z).solve();
+                    // one mesh and model per position; each current starts from the last solution scaled
+                    model.amps[wind] = amps[j];
+                    double[] start = null;
+                    if (last != null && amps[j - 1] > 0) {
+                        start = last.clone();
+                        for (int n = 0; n < start.length; n++) start[n] *= amps[j] / amps[j - 1];
+                    }
+                    Solution s = model.run(start);
+                    last = s.potential();
                     l[j] = s.fluxLinkageAt(wind);
                     f[j] = Math.signum(t) * s.maxwellForceAt(part0);
                     most = Math.max(most, s.iterations());

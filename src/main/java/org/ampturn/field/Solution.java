@@ -26,6 +26,7 @@ public final class Solution {
     private final boolean converged;
     private final LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> factor;
     private final double energy;
+    private final double[] amps; // winding currents of this solve (the model may be reused at other currents)
 
     Solution(Fem.Model model, double[] psi, int iterations, double residual, LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> factor, boolean converged) {
         this.model = model;
@@ -34,6 +35,7 @@ public final class Solution {
         this.residual = residual;
         this.factor = factor;
         this.converged = converged;
+        this.amps = model.amps.clone();
         br = new double[model.ne];
         bz = new double[model.ne];
         double[] bq = new double[3 * model.ne];
@@ -123,8 +125,8 @@ public final class Solution {
     /** Secant inductance λ/I of winding {@code name} (all currents as given). */
     public Quantity inductance(String name) {
         int w = winding(name);
-        if (model.amps[w] == 0) return incrementalInductance(name);
-        return Quantity.of(fluxLinkageAt(w) / model.amps[w], Dimension.INDUCTANCE);
+        if (amps[w] == 0) return incrementalInductance(name);
+        return Quantity.of(fluxLinkageAt(w) / amps[w], Dimension.INDUCTANCE);
     }
 
     public Quantity inductance() { return inductance(onlyWinding()); }
@@ -158,7 +160,7 @@ public final class Solution {
 
     double coEnergyJ() {
         double s = 0;
-        for (int w = 0; w < model.windings.length; w++) s += fluxLinkageAt(w) * model.amps[w];
+        for (int w = 0; w < model.windings.length; w++) s += fluxLinkageAt(w) * amps[w];
         return s - energy;
     }
 
@@ -265,6 +267,9 @@ public final class Solution {
         }
         return f;
     }
+
+    /** A_φ at every node (a copy). */
+    double[] potential() { return psi.clone(); }
 
     /** The flux function r·A_φ (Wb/rad) at every node, row by row in z (flux lines are its contours). */
     public double[] fluxFunction() {

@@ -23,7 +23,7 @@ class FieldMapTest {
     void saturationLowersTheIncrementalInductanceAndNewtonConverges() {
         Geometry closed = ValveFixture.geometry(6).moved("plunger", ValveFixture.mm(-2));
         double last = Double.POSITIVE_INFINITY;
-        for (double i : new double[] {0.2, 1, 3, 6}) {
+        for (double i : new double[] {0.2, 2, 6}) {
             Geometry g = closed.withCurrent("coil", Quantity.of(i, "A"));
             Solution s = g.solve();
             assertTrue(s.converged() && s.iterations() <= 20 && s.residual() < 1e-7, "Newton at " + i + " A: " + s);
