@@ -45,6 +45,12 @@ public final class Region {
         return new Region(name, shape, Materials.AIR, turns, checkCurrent(name, i));
     }
 
+    /** A winding region with the turns of a designed {@code Winding} (its section is the outline given). */
+    public static Region winding(String name, Shape shape, org.ampturn.wire.Winding winding, Quantity current) {
+        Require.present("winding of region " + Require.quote(name), winding);
+        return winding(name, shape, winding.turns(), current);
+    }
+
     private static double checkCurrent(String name, double i) {
         return Require.between("current of winding " + Require.quote(name) + " (A)", i, -1e6, 1e6);
     }

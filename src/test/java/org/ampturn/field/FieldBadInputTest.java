@@ -38,6 +38,12 @@ class FieldBadInputTest {
     }
 
     @Test
+    void missingWindingIsNamed() {
+        fails(() -> Region.winding("coil", Shape.rectAt(0.005, 0, 0.008, 0.02), (org.ampturn.wire.Winding) null, Quantity.of(1, "A")), "winding of region", "\"coil\"");
+        fails(() -> Region.winding("coil", Shape.rectAt(0.005, 0, 0.008, 0.02), 100, Quantity.of(2e6, "A")), "\"coil\"");
+    }
+
+    @Test
     void negativeRadius() {
         fails(() -> base.with("ring", Shape.rectAt(-0.001, 0.03, 0.002, 0.04), Materials.AIR), "\"ring\"", "r = ", "zero or more");
     }
