@@ -299,10 +299,14 @@ final class Fem {
                 double[] trial = psi.clone();
                 double step = 1;
                 double newNorm = norm;
+                boolean tangentAtTrial = false;
                 for (int ls = 0; ls < 12; ls++) {
                     for (int n = 0; n < psi.length; n++) if (eq[n] >= 0) trial[n] = psi[n] + step * dx.data[eq[n]];
-                    newNorm = nonlinear ? assemble(trial, f, res, false) : 0;
-                    if (!nonlinear || newNorm < norm || ls == 11) break;
+                    if (!nonlinear) break;
+                    // the full step is usually taken: assemble its tangent with its residual at once
+                    tangentAtTrial = ls == 0;
+                    newNorm = assemble(trial, f, res, tangentAtTrial);
+                    if (newNorm < norm || ls == 11) break;
                     step /= 2;
                 }
                 psi = trial;
@@ -311,7 +315,7 @@ final class Fem {
                     rel = norm / fnorm;
                     break;
                 }
-                norm = assemble(psi, f, res, true);
+                norm = tangentAtTrial ? newNorm : assemble(psi, f, res, true);
                 rel = norm / fnorm;
                 if (rel < NEWTON_TOL) break;
                 if (it >= MAX_NEWTON) {
