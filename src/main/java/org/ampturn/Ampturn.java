@@ -253,4 +253,60 @@ public final class Ampturn {
     public static org.ampturn.coil.AirGap gap(Quantity length, Quantity area) {
         return org.ampturn.coil.AirGap.of(length, area);
     }
+
+    // ---- field ----
+    // Axisymmetric field solutions (org.ampturn.field): geometry in the r-z half plane, solve,
+    // force both ways, force-stroke-current maps a drive integrates, flux plots.
+
+    /** A rectangle in the r-z half plane with corners (r0, z0) and (r1, z1): {@code rect(mm(0), mm(0), mm(4), mm(20))}. */
+    public static org.ampturn.field.Shape rect(Quantity r0, Quantity z0, Quantity r1, Quantity z1) {
+        return org.ampturn.field.Shape.rect(r0, z0, r1, z1);
+    }
+
+    /** A polygon in the r-z half plane through corners given as (r, z) pairs: {@code polygon(mm(0), mm(0), mm(4), mm(0), mm(3), mm(2))}. */
+    public static org.ampturn.field.Shape polygon(Quantity... rz) {
+        return org.ampturn.field.Shape.polygon(rz);
+    }
+
+    /** An empty field geometry: add regions with {@code .with(name, shape, material)} and {@code .withWinding(name, shape, turns, current)}. */
+    public static org.ampturn.field.Geometry geometry() {
+        return org.ampturn.field.Geometry.of();
+    }
+
+    /**
+     * A force-stroke-current map of {@code part} moved over {@code travel} (signed: the direction in
+     * which it closes) in {@code positions} steps, at the given currents (A) of {@code winding}, on
+     * every core, with the console's progress bar; Ctrl-C keeps the positions done.
+     */
+    public static org.ampturn.field.FieldMap fieldMap(org.ampturn.field.Geometry geometry, String part, String winding, Quantity travel,
+                                                      int positions, double... currentsAmps) {
+        org.ampturn.study.Progress bar = org.ampturn.study.Progress.installed();
+        long start = System.nanoTime();
+        String task = "field map of " + part;
+        org.ampturn.field.FieldMap m = org.ampturn.field.FieldMap.of(geometry, part, winding, travel, positions, currentsAmps,
+                Runtime.getRuntime().availableProcessors(), (done, total) -> {
+                    java.time.Duration spent = java.time.Duration.ofNanos(System.nanoTime() - start);
+                    java.time.Duration left = done == 0 ? null : spent.multipliedBy(total - done).dividedBy(done);
+                    bar.update(new org.ampturn.study.Progress.Status(task, done, total, spent, left, done == total, false));
+                });
+        if (!m.isComplete()) {
+            bar.update(new org.ampturn.study.Progress.Status(task, m.positionsDone(), positions, java.time.Duration.ofNanos(System.nanoTime() - start), null, true, true));
+        }
+        return m;
+    }
+
+    /** Flux lines (contours of r·A) of a field solution with its regions outlined. */
+    public static org.ampturn.chart.Figure plotFlux(org.ampturn.field.Solution solution) {
+        return org.ampturn.chart.Figures.show(org.ampturn.chart.Figure.of("flux", org.ampturn.chart.FieldFigures.fluxLines(solution)));
+    }
+
+    /** The flux density |B| of a field solution as a colour map. */
+    public static org.ampturn.chart.Figure plotFluxDensity(org.ampturn.field.Solution solution) {
+        return org.ampturn.chart.Figures.show(org.ampturn.chart.Figure.of("flux-density", org.ampturn.chart.FieldFigures.fluxDensity(solution)));
+    }
+
+    /** Force against stroke at each current of a field map. */
+    public static org.ampturn.chart.Figure plotForce(org.ampturn.field.FieldMap map) {
+        return org.ampturn.chart.Figures.show(org.ampturn.chart.Figure.of("force-stroke", org.ampturn.chart.FieldFigures.forceStroke(map)));
+    }
 }

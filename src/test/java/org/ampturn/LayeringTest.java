@@ -20,7 +20,7 @@ import org.junit.jupiter.api.Test;
  */
 class LayeringTest {
     private static final Path SRC = Path.of("src/main/java/org/ampturn");
-    private static final List<String> DOMAIN = List.of("units", "material", "wire", "coil", "drive", "actuator", "thermal");
+    private static final List<String> DOMAIN = List.of("units", "material", "wire", "coil", "drive", "actuator", "thermal", "field");
     private static final Pattern IMPORT = Pattern.compile("^\\s*import\\s+(?:static\\s+)?([\\w.]+)", Pattern.MULTILINE);
     /** A fully qualified name in code: a package path of lower-case segments, then more. */
     private static final Pattern QUALIFIED = Pattern.compile("(?<![\\w.])((?:org|jdk|java|javax)\\.[a-z]\\w*(?:\\.[a-z]\\w*)*)\\.(?=[A-Za-z])");
