@@ -24,6 +24,9 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     /** Derivative evaluations allowed for one run before it is declared too stiff to finish. */
     static final int MAX_EVALUATIONS = 4_000_000;
 
+    /** Longest step, in local time constants (dλ/di)/R at the final current. */
+    static final double MAX_STEP_PER_TIME_CONSTANT = 2.0;
+
     private final Solver sv;
     private final double rtol;
     private final AdaptiveStepsizeIntegrator integrator;
@@ -40,7 +43,11 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         double[] scale = new double[DIM];
         double iRef = Double.isFinite(sv.finalCurrent) ? sv.finalCurrent : sv.vs * sv.tEnd / sv.load.inductance();
         if (sv.drive.scheme == Drive.Scheme.PEAK_AND_HOLD) iRef = Math.max(sv.drive.peakAmps, Math.min(iRef, 10 * sv.drive.peakAmps));
-        double lamRef = Math.max(sv.load.inductance() * iRef, 1e-12);
+        // the error control on λ must hold the current to rtol·iRef: δi = δλ/(dλ/di), and in a saturated core
+        // dλ/di at the final current is far below the small-signal L, so L·iRef alone let the current
+        // overshoot V/R by many times rtol
+        double lInc = Math.min(sv.load.inductance(), sv.load.incrementalInductanceAt(iRef));
+        double lamRef = Math.max(lInc * iRef, 1e-12);
         double eRef = Math.max(sv.vs * iRef * sv.tEnd, 1e-15);
         scale[LAM] = lamRef;
         scale[VC] = sv.vs + Math.max(sv.v0, 0);
@@ -56,7 +63,13 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
             rel[k] = rtol;
         }
         this.minStep = 1e-14 * sv.tEnd;
-        this.integrator = new DormandPrince853Integrator(minStep, sv.tEnd, abs, rel);
+        // near the steady state of a saturated coil the local time constant is dλ/di / R, far shorter than
+        // the small-signal L/R: with longer steps an explicit method sits on its stability limit and its
+        // dense output wanders around V/R (above it too, which a first-order circuit cannot do)
+        double rOn = sv.rs + sv.ron + sv.rc;
+        double tauInc = rOn > 0 ? lInc / rOn : Double.POSITIVE_INFINITY;
+        double maxStep = Math.min(sv.tEnd, MAX_STEP_PER_TIME_CONSTANT * tauInc);
+        this.integrator = new DormandPrince853Integrator(minStep, Math.max(maxStep, 1e3 * minStep), abs, rel);
     }
 
     private int mode() { return sv.elec.ordinal(); }
@@ -170,6 +183,11 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         @Override
         public Action eventOccurred(double t, double[] y, boolean increasing) {
             if (increasing != (ev.direction > 0)) return Action.CONTINUE;
+            if (ev.act == Ev.Act.PROBE) {
+                // located exactly and noted; the step goes on, so the solution is the same as without it
+                if (Double.isNaN(sv.probeTime)) sv.probeTime = t;
+                return Action.CONTINUE;
+            }
             fired = true;
             return Action.STOP;
         }

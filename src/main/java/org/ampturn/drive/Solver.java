@@ -49,6 +49,9 @@ final class Solver {
     final double vs, rs, ron, rc, v0, rcl, cap, tEnd, offAt;
     final boolean snub, acrossCoil, moves, closedForm;
     final double finalCurrent;
+    /** A current level whose first rising crossing is wanted (NaN: none), and the time it is reached. */
+    final double probe;
+    double probeTime = Double.NaN;
     final int n;
     final double dt;
 
@@ -87,7 +90,12 @@ final class Solver {
     long steps;
 
     Solver(Circuit c, double tEnd) {
+        this(c, tEnd, Double.NaN);
+    }
+
+    Solver(Circuit c, double tEnd, double probeAmps) {
         this.circuit = c;
+        this.probe = probeAmps;
         this.drive = c.drive;
         this.load = c.coil != null ? Load.of(c.coil) : Load.of(c.armature);
         this.clamp = c.clamp;
@@ -470,6 +478,9 @@ final class Solver {
                 ev.add(new Ev(Ev.Kind.CURRENT, 0.01 * offCurrent, -1, Ev.Act.DECAY_1PCT));
             }
         }
+        if (!Double.isNaN(probe) && Double.isNaN(probeTime) && elec != Elec.IDLE) {
+            ev.add(new Ev(Ev.Kind.CURRENT, probe, 1, Ev.Act.PROBE));
+        }
         if (moves) {
             switch (mech) {
                 case FREE:
@@ -540,6 +551,9 @@ final class Solver {
             case REC_99:
                 t99 = t;
                 markers.add(new Marker("99 %", tq(t), iq, "current"));
+                break;
+            case PROBE:
+                probeTime = t;
                 break;
             case HIT_OPEN:
                 y[X] = 0;
