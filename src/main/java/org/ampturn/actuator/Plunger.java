@@ -1,6 +1,7 @@
 package org.ampturn.actuator;
 
 import org.ampturn.drive.Armature;
+import org.ampturn.drive.EddyLadder;
 import org.ampturn.material.MagneticMaterial;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
@@ -45,10 +46,31 @@ public final class Plunger implements Armature {
     private final double damping;
     private final double r20;
     private final double kelvin;
+    private final Extras ex;
+
+    /** Eddy currents and stops: the parts of the model beyond the magnetic circuit and the spring. */
+    private record Extras(Eddy eddy, double restitution) {
+        static final Extras NONE = new Extras(null, 0);
+    }
+
+    /**
+     * Where eddy currents flow: a loop of fixed resistance, a copper slug (resistance follows the
+     * copper's temperature), or the solid iron of the plunger (shells of a rod). SI.
+     */
+    private record Eddy(String kind, double loopOhms, double slugFactor, double radius, double length, double resistivity,
+                        int sections, double leakage) {}
 
     private Plunger(int turns, double area, double stroke, double residual, double parasitic, double parasiticArea,
                     double ironLength, MagneticMaterial iron, double mass, double stiffness, double preload, double load,
                     double damping, double r20, double kelvin) {
+        this(turns, area, stroke, residual, parasitic, parasiticArea, ironLength, iron, mass, stiffness, preload, load, damping,
+                r20, kelvin, Extras.NONE);
+    }
+
+    private Plunger(int turns, double area, double stroke, double residual, double parasitic, double parasiticArea,
+                    double ironLength, MagneticMaterial iron, double mass, double stiffness, double preload, double load,
+                    double damping, double r20, double kelvin, Extras ex) {
+        this.ex = ex;
         this.turns = turns;
         this.area = area;
         this.stroke = stroke;
@@ -81,7 +103,113 @@ public final class Plunger implements Armature {
     private Plunger copy(double residual, double parasitic, double parasiticArea, double ironLength, MagneticMaterial iron,
                          double mass, double stiffness, double preload, double load, double damping, double r20, double kelvin) {
         return new Plunger(turns, area, stroke, residual, parasitic, parasiticArea, ironLength, iron, mass, stiffness, preload,
-                load, damping, r20, kelvin);
+                load, damping, r20, kelvin, ex);
+    }
+
+    private Plunger with(Extras e) {
+        return new Plunger(turns, area, stroke, residual, parasitic, parasiticArea, ironLength, iron, mass, stiffness, preload,
+                load, damping, r20, kelvin, e);
+    }
+
+    // ---------------------------------------------------------------- eddy currents and stops
+
+    /**
+     * A shorted turn coupled to the coil: one loop of {@code loopResistance}, with {@code leakage}
+     * the inductance (seen from the coil) of the flux that links the coil but not the loop. The
+     * loop acts as a transformer's shorted secondary (see {@link EddyLadder}); it slows the rise and
+     * the decay of the flux (a time-delay relay). Replaces any other eddy-current model.
+     */
+    public Plunger withShortedTurn(Quantity loopResistance, Quantity leakage) {
+        double r = Require.positive("shorted-turn resistance", loopResistance, Dimension.RESISTANCE);
+        double l = Require.positive("leakage inductance", leakage, Dimension.INDUCTANCE);
+        return with(new Extras(new Eddy("shorted turn", r, 0, 0, 0, 0, 1, l), ex.restitution()));
+    }
+
+    /**
+     * A copper slug (a tube around the flux path): one turn of mean diameter D, radial thickness t and
+     * axial length l, resistance {@code ρ·π·D/(l·t)} with annealed copper's ρ at the plunger's
+     * temperature (IEC 60028); {@code radialSpace} is the room it sits in, which the thickness may not
+     * exceed. {@code leakage} as in {@link #withShortedTurn}.
+     */
+    public Plunger withCopperSlug(Quantity meanDiameter, Quantity thickness, Quantity length, Quantity radialSpace, Quantity leakage) {
+        double d = Require.length("slug mean diameter", meanDiameter);
+        double t = Require.length("slug thickness", thickness);
+        double l = Require.length("slug length", length);
+        double space = Require.length("radial space for the slug", radialSpace);
+        if (!(t <= space)) {
+            throw Require.fail("slug thickness (" + thickness + ") must not exceed the radial space it sits in (" + radialSpace + ")");
+        }
+        if (!(t < d)) throw Require.fail("slug thickness (" + thickness + ") must be less than its mean diameter (" + meanDiameter + ")");
+        double lk = Require.positive("leakage inductance", leakage, Dimension.INDUCTANCE);
+        return with(new Extras(new Eddy("copper slug", 0, Math.PI * d / (l * t), 0, 0, 0, 1, lk), ex.restitution()));
+    }
+
+    /**
+     * Eddy currents in the solid iron of a round plunger of {@code diameter} over {@code length}, of
+     * the iron's {@code resistivity} (Ω·m; low-carbon steel is near 1.5e-7 Ω·m, common practice),
+     * as a ladder of {@code sections} concentric shells of equal thickness (1 to 16; see
+     * {@link EddyLadder}). Shell k, between radii a_(k+1) and a_k, is a loop of resistance
+     * {@code 8πρ·a_k⁴/(l·(a_k⁴ − a_(k+1)⁴))}: under a uniform dB/dt it dissipates exactly its part of
+     * the rod's loss {@code (dB/dt)²·π·l·a⁴/(8ρ)} (E = (r/2)·dB/dt inside a rod; Lammeraner and Štafl,
+     * Eddy Currents, 1966, ch. 3, from memory), so one section is the rod's low-frequency equivalent
+     * shorted turn {@code 8πρ/l}. Each shell's flux tube has its area share of the pole. More
+     * sections follow the diffusion of flux into the rod from its surface, which is what delays the
+     * pull of a solid plunger; the lumped tubes hold while the plunger's cross-section carries the
+     * pole's flux. {@code leakage} as in {@link #withShortedTurn}.
+     */
+    public Plunger withSolidIron(Quantity diameter, Quantity length, Quantity resistivity, int sections, Quantity leakage) {
+        double dia = Require.length("plunger diameter", diameter);
+        double l = Require.length("eddy-current path length", length);
+        double rho = Require.positive("iron resistivity", resistivity, Dimension.RESISTIVITY);
+        Require.between("sections", sections, 1, EddyLadder.MAX_SECTIONS);
+        double lk = Require.positive("leakage inductance", leakage, Dimension.INDUCTANCE);
+        return with(new Extras(new Eddy("solid iron", 0, 0, dia / 2, l, rho, sections, lk), ex.restitution()));
+    }
+
+    /** No eddy currents and no shorted turn (the default). */
+    public Plunger withoutEddyCurrents() {
+        return with(new Extras(null, ex.restitution()));
+    }
+
+    /**
+     * Coefficient of restitution e at both stops, from 0 (the plunger stops dead, the default) to 1:
+     * the plunger rebounds at e times its impact speed (Newton's law of impact); the run counts the
+     * bounces and reports the impact speed.
+     */
+    public Plunger withRestitution(double coefficient) {
+        Require.between("coefficient of restitution", coefficient, 0, 1);
+        return with(new Extras(ex.eddy(), coefficient));
+    }
+
+    @Override
+    public double restitution() { return ex.restitution(); }
+
+    @Override
+    public EddyLadder eddyLadder() {
+        Eddy e = ex.eddy();
+        if (e == null) return EddyLadder.NONE;
+        double n2 = (double) turns * turns;
+        switch (e.kind()) {
+            case "shorted turn":
+                return EddyLadder.ofSI(e.leakage(), new double[] {n2 * e.loopOhms()}, new double[] {1});
+            case "copper slug":
+                return EddyLadder.ofSI(e.leakage(),
+                        new double[] {n2 * org.ampturn.material.Conductor.COPPER.resistivityAt(kelvin) * e.slugFactor()}, new double[] {1});
+            default: {
+                int m = e.sections();
+                double[] shunt = new double[m], share = new double[m];
+                double sum = 0;
+                for (int k = 0; k < m; k++) {
+                    double outer = (double) (m - k) / m, inner = (double) (m - k - 1) / m; // radii over a
+                    double o4 = Math.pow(outer, 4), i4 = Math.pow(inner, 4);
+                    shunt[k] = n2 * 8 * Math.PI * e.resistivity() * o4 / (e.length() * (o4 - i4));
+                    share[k] = outer * outer - inner * inner;
+                    sum += share[k];
+                }
+                share[m - 1] += 1 - sum; // rounding
+                return EddyLadder.ofSI(e.leakage(), shunt, share);
+            }
+        }
     }
 
     /** Gap left when closed (a non-magnetic stop or plating), in series with the working gap. */
@@ -258,7 +386,9 @@ public final class Plunger implements Armature {
         return "plunger " + turns + " turns, pole " + Quantity.of(area, Dimension.AREA) + ", stroke " + Quantity.of(stroke, Dimension.LENGTH)
                 + ", L " + inductanceOpen() + " open to " + inductanceClosed() + " closed, " + Quantity.of(resistanceOhms(), Dimension.RESISTANCE)
                 + ", mass " + Quantity.of(mass, Dimension.MASS) + ", spring " + Quantity.of(preload, Dimension.FORCE) + " + "
-                + Quantity.of(stiffness, Dimension.STIFFNESS) + (load > 0 ? ", load " + Quantity.of(load, Dimension.FORCE) : "");
+                + Quantity.of(stiffness, Dimension.STIFFNESS) + (load > 0 ? ", load " + Quantity.of(load, Dimension.FORCE) : "")
+                + (ex.eddy() != null ? ", " + ex.eddy().kind() + (ex.eddy().sections() > 1 ? " (" + ex.eddy().sections() + " shells)" : "") : "")
+                + (ex.restitution() > 0 ? ", restitution " + String.format(java.util.Locale.ROOT, "%.3g", ex.restitution()) : "");
     }
 
     @Override

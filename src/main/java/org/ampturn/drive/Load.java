@@ -60,6 +60,12 @@ abstract class Load {
 
     abstract boolean moves();
 
+    /** Eddy currents and shorted turns coupled to the coil. */
+    EddyLadder ladder() { return EddyLadder.NONE; }
+
+    /** Coefficient of restitution at the stops (0: plastic). */
+    double restitution() { return 0; }
+
     /** λ proportional to i and no motion: closed forms apply. */
     abstract boolean linear();
 
@@ -173,6 +179,11 @@ abstract class Load {
         @Override double resistance() { return r; }
         @Override double inductance() { return a.inductanceAt(0); }
         @Override boolean moves() { return true; }
+        @Override EddyLadder ladder() { return a.eddyLadder() == null ? EddyLadder.NONE : a.eddyLadder(); }
+        @Override double restitution() {
+            double e = a.restitution();
+            return e >= 0 && e <= 1 ? e : 0;
+        }
         @Override boolean linear() { return false; }
         @Override String describe() { return a.describe(); }
     }

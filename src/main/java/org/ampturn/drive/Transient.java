@@ -66,7 +66,8 @@ public final class Transient {
 
         double[] y = sv.y;
         double stored = sv.storedAt(y) - sv.initialStored;
-        energy = new EnergyLedger(y[Solver.ESUP], y[Solver.ECOIL], y[Solver.EDRV], y[Solver.ECL], stored, y[Solver.EMECH]);
+        energy = new EnergyLedger(y[Solver.ESUP], y[Solver.ECOIL], y[Solver.EDRV], y[Solver.ECL], stored, y[Solver.EMECH],
+                sv.loops > 0 ? y[Solver.EEDDY] : 0);
 
         double tau = sv.load.linear() && !sv.moves ? sv.load.inductance() / (sv.rs + sv.ron + sv.rc) : sv.t63;
         metrics = new Metrics(tq(tau), tq(sv.t63), tq(sv.t90), tq(sv.t99),
@@ -75,7 +76,8 @@ public final class Transient {
                 Quantity.of(y[Solver.ECL], Dimension.ENERGY),
                 tq(Double.isNaN(sv.decayZero) ? sv.decay1pct : sv.decayZero),
                 Quantity.of(sv.lastRipple, Dimension.CURRENT), Quantity.of(sv.lastMean, Dimension.CURRENT),
-                tq(sv.peakReached), tq(sv.pullIn), tq(sv.dropOut));
+                tq(sv.peakReached), tq(sv.pullIn), tq(sv.dropOut),
+                Quantity.of(sv.firstImpactSpeed, Dimension.VELOCITY), sv.bounces);
 
         List<Marker> mk = new ArrayList<>(sv.markers);
         if (sv.peakSw > Double.NEGATIVE_INFINITY) {
@@ -182,6 +184,10 @@ public final class Transient {
     public Quantity cycleMean() { return metrics.cycleMean(); }
     public Quantity pullInTime() { return metrics.pullInTime(); }
     public Quantity dropOutTime() { return metrics.dropOutTime(); }
+    /** Speed of the armature as it first reaches the closed stop (NaN if it never does). */
+    public Quantity impactSpeed() { return metrics.impactSpeed(); }
+    /** Rebounds at the stops over the run (0 with a restitution of 0). */
+    public int bounceCount() { return metrics.bounces(); }
 
     /**
      * Time at which the current first reaches {@code fraction} of the final current V/R. 0.63 (taken as
