@@ -1,6 +1,10 @@
 package org.ampturn.actuator;
 
+import org.ampturn.coil.MagneticCircuit;
 import org.ampturn.drive.Armature;
+import org.ampturn.drive.Drive;
+import org.ampturn.material.Conductor;
+import org.ampturn.wire.Winding;
 import org.ampturn.drive.EddyLadder;
 import org.ampturn.material.MagneticMaterial;
 import org.ampturn.units.Dimension;
@@ -49,12 +53,14 @@ public final class Plunger implements Armature {
     private final Extras ex;
 
     /** Eddy currents and stops: the parts of the model beyond the magnetic circuit and the spring. */
-    private record Extras(Eddy eddy, double restitution, Pole pole, double fringe) {
-        static final Extras NONE = new Extras(null, 0, Pole.FLAT, Double.NaN);
-        Extras eddy(Eddy e) { return new Extras(e, restitution, pole, fringe); }
-        Extras restitution(double e) { return new Extras(eddy, e, pole, fringe); }
-        Extras pole(Pole p) { return new Extras(eddy, restitution, p, fringe); }
-        Extras fringe(double t) { return new Extras(eddy, restitution, pole, t); }
+    private record Extras(Eddy eddy, double restitution, Pole pole, double fringe, MagneticCircuit path, Conductor conductor) {
+        static final Extras NONE = new Extras(null, 0, Pole.FLAT, Double.NaN, null, Conductor.COPPER);
+        Extras eddy(Eddy e) { return new Extras(e, restitution, pole, fringe, path, conductor); }
+        Extras restitution(double e) { return new Extras(eddy, e, pole, fringe, path, conductor); }
+        Extras pole(Pole p) { return new Extras(eddy, restitution, p, fringe, path, conductor); }
+        Extras fringe(double t) { return new Extras(eddy, restitution, pole, t, path, conductor); }
+        Extras path(MagneticCircuit c) { return new Extras(eddy, restitution, pole, fringe, c, conductor); }
+        Extras conductor(Conductor c) { return new Extras(eddy, restitution, pole, fringe, path, c); }
     }
 
     /**
@@ -111,6 +117,30 @@ public final class Plunger implements Armature {
         double a = Require.positive("pole area", poleArea, Dimension.AREA);
         double s = Require.length("stroke", stroke);
         return new Plunger(turns, a, s, 0.05e-3, 0.1e-3, a, 0, null, 0.010, 0, 0, 0, 0, 10, T20);
+    }
+
+    /**
+     * A plunger whose coil is a {@link Winding}: its turns, and its resistance at 20 °C with its
+     * conductor's temperature coefficient, come from the winding. The other defaults are those of
+     * {@link #of(int, Quantity, Quantity)}.
+     */
+    public static Plunger of(Winding winding, Quantity poleArea, Quantity stroke) {
+        if (winding == null) throw Require.fail("winding is missing (null)");
+        Plunger p = of(winding.turns(), poleArea, stroke);
+        Plunger q = p.copy(p.residual, p.parasitic, p.parasiticArea, p.ironLength, p.iron, p.mass, p.stiffness, p.preload, p.load,
+                p.damping, winding.resistance().si(), p.kelvin);
+        return q.with(q.ex.conductor(winding.conductor()));
+    }
+
+    /**
+     * The iron path (frame, pole pieces, any fixed gaps of it) as a {@link MagneticCircuit} in
+     * series with the working and parasitic gaps: its MMF at the gap's flux, {@code mmfAt(φ)}, adds
+     * to the coil's, so a saturating frame limits the pull. Adds to {@link #withIron}'s path if
+     * both are given.
+     */
+    public Plunger withIronPath(MagneticCircuit path) {
+        if (path == null) throw Require.fail("iron path is missing (null)");
+        return with(ex.path(path));
     }
 
     private Plunger copy(double residual, double parasitic, double parasiticArea, double ironLength, MagneticMaterial iron,
@@ -381,7 +411,8 @@ public final class Plunger implements Armature {
         Require.finite("flux linkage (Wb)", weberTurns);
         Require.finite("position (m)", metres);
         double phi = weberTurns / turns;
-        return Require.result("current", (phi * gapReluctance(metres) + ironLength * ironField(phi / area)) / turns);
+        double pathMmf = ex.path() == null ? 0 : ex.path().mmfAt(phi);
+        return Require.result("current", (phi * gapReluctance(metres) + ironLength * ironField(phi / area) + pathMmf) / turns);
     }
 
     private static final double[] GX = {0, -0.5384693101056831, 0.5384693101056831, -0.9061798459386640, 0.9061798459386640};
@@ -408,6 +439,20 @@ public final class Plunger implements Armature {
                 ironEnergyDensity = sum * 0.5 * h;
             }
             w += area * ironLength * ironEnergyDensity;
+        }
+        if (ex.path() != null) {
+            MagneticCircuit c = ex.path();
+            if (c.isLinear()) {
+                w += 0.5 * phi * phi * c.reluctanceSI();
+            } else {
+                int panels = 8;
+                double h = phi / panels, sum = 0;
+                for (int p = 0; p < panels; p++) {
+                    double mid = (p + 0.5) * h;
+                    for (int k = 0; k < 5; k++) sum += GW[k] * c.mmfAt(mid + 0.5 * h * GX[k]);
+                }
+                w += sum * 0.5 * h;
+            }
         }
         return Require.result("field energy", w);
     }
@@ -441,7 +486,7 @@ public final class Plunger implements Armature {
 
     @Override
     public double resistanceOhms() {
-        return r20 * org.ampturn.material.Conductor.COPPER.resistanceRatioAt(kelvin);
+        return r20 * ex.conductor().resistanceRatioAt(kelvin);
     }
 
     @Override
@@ -449,6 +494,7 @@ public final class Plunger implements Armature {
         Require.finite("position (m)", metres);
         double rel = gapReluctance(metres);
         if (iron != null) rel += ironLength / (MU0 * iron.relativePermeability() * area);
+        if (ex.path() != null) rel += ex.path().reluctanceSI();
         return Require.result("inductance", (double) turns * turns / rel);
     }
 
@@ -504,6 +550,66 @@ public final class Plunger implements Armature {
             X8[k] = rule.getPoint(k);
             W8[k] = rule.getWeight(k);
         }
+    }
+
+    /**
+     * Pick-up voltage: the least DC supply that closes the plunger from rest within {@code within},
+     * with the coil at {@code coilTemperature} (its resistance follows the conductor). Each trial is
+     * a transient run (eddy currents, stops and all); the search brackets the supply from the static
+     * pull-in current up, then bisects to 10⁻⁶ of it. Fails when 10 kV does not close it.
+     */
+    public Quantity pickUpVoltage(Quantity within, Quantity coilTemperature) {
+        double t = Require.positive("time to close", within, Dimension.TIME);
+        Plunger hot = atTemperature(coilTemperature);
+        double r = hot.resistanceOhms();
+        double lo = 0, hi = Math.max(r * hot.staticCurrentAt(0), 1e-3);
+        while (!hot.closesWithin(hi, t)) {
+            lo = hi;
+            hi *= 2;
+            if (hi > 1e4) throw Require.fail("no supply up to 10 kV closes the plunger within " + within);
+        }
+        for (int k = 0; k < 60 && hi - lo > 1e-6 * hi; k++) {
+            Require.notInterrupted("the pick-up voltage search");
+            double mid = 0.5 * (lo + hi);
+            if (hot.closesWithin(mid, t)) hi = mid;
+            else lo = mid;
+        }
+        return Quantity.of(hi, Dimension.VOLTAGE);
+    }
+
+    private boolean closesWithin(double volts, double seconds) {
+        var run = Drive.dc(Quantity.of(volts, Dimension.VOLTAGE)).into(this).simulate(Quantity.of(seconds, Dimension.TIME));
+        return run.pullInTime().si() <= seconds;
+    }
+
+    /**
+     * Drop-out voltage: the DC supply below which the closed plunger releases, with the coil at
+     * {@code coilTemperature}: the steady current V/R at which the magnetic force at the closed stop
+     * equals the spring, preload and load there (static; no remanence in this model, so the flux
+     * and the force follow the current down to zero).
+     */
+    public Quantity dropOutVoltage(Quantity coilTemperature) {
+        Plunger hot = atTemperature(coilTemperature);
+        return Quantity.of(hot.staticCurrentAt(stroke) * hot.resistanceOhms(), Dimension.VOLTAGE);
+    }
+
+    /** The current (A) at which the pull at x equals the restoring force there at rest, by bisection. */
+    double staticCurrentAt(double x) {
+        double need = restoringForceAt(x, 0);
+        if (!(need > 0)) return 0;
+        double lo = 0, hi = 1e-3;
+        for (int k = 0; forceAt(fluxLinkageAt(hi, x), x) < need; k++) {
+            if (k > 80) throw Require.fail("no current up to " + Quantity.of(hi, Dimension.CURRENT) + " holds the plunger against "
+                    + Quantity.of(need, Dimension.FORCE) + " at " + Quantity.of(x, Dimension.LENGTH) + " (the iron saturates)");
+            lo = hi;
+            hi *= 2;
+        }
+        for (int k = 0; k < 100 && hi - lo > 1e-12 * hi; k++) {
+            double mid = 0.5 * (lo + hi);
+            if (forceAt(fluxLinkageAt(mid, x), x) < need) lo = mid;
+            else hi = mid;
+        }
+        return 0.5 * (lo + hi);
     }
 
     /** λ at current i and position x: inverse of {@link #currentAt} by bisection (the current rises with λ). */

@@ -27,6 +27,9 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     /** Longest step, in local time constants (dλ/di)/R at the final current. */
     static final double MAX_STEP_PER_TIME_CONSTANT = 2.0;
 
+    /** An eddy ladder's fastest mode may take this many of its time constants per step (stability holds there). */
+    static final double LADDER_STEPS = 2;
+
     private final Solver sv;
     private final double rtol;
     private final AdaptiveStepsizeIntegrator integrator;
@@ -53,11 +56,12 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
             // the ladder's fast modes: L0/(R + R1) and each tube's share of dλ/di over the loops either side of it;
             // the step must resolve them for the dense output between steps to hold them
             EddyLadder lad = sv.ladder;
-            tauInc = Math.min(tauInc, lad.leakage / (rOn + lad.shunt[0]));
+            double fast = lad.leakage / (rOn + lad.shunt[0]);
             for (int k = 0; k < sv.loops; k++) {
                 double rr = lad.shunt[k] + (k + 1 < sv.loops ? lad.shunt[k + 1] : 0);
-                tauInc = Math.min(tauInc, lad.share[k] * lInc / rr);
+                fast = Math.min(fast, lad.share[k] * lInc / rr);
             }
+            tauInc = Math.min(tauInc, LADDER_STEPS * fast);
             // the coil current is (λ − λ1)/L0: the leakage sets how finely λ must be held
             lInc = Math.min(lInc, lad.leakage);
         }
