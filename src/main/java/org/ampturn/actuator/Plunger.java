@@ -553,6 +553,28 @@ public final class Plunger implements Armature {
     }
 
     /**
+     * Force-stroke curves at the given steady currents over {@code points} evenly spaced positions
+     * from the open to the closed stop, with the spring, preload and load line (see
+     * {@link ForceStroke}).
+     */
+    public ForceStroke forceStroke(int points, Quantity... currents) {
+        Require.between("points", points, 2, 10_000);
+        Require.present("currents", currents);
+        if (currents.length == 0) throw Require.fail("give at least one current for the force-stroke curves");
+        double[] xs = new double[points], mech = new double[points], is = new double[currents.length];
+        double[][] pull = new double[currents.length][points];
+        for (int j = 0; j < points; j++) {
+            xs[j] = j == points - 1 ? stroke : stroke * j / (points - 1);
+            mech[j] = restoringForceAt(xs[j], 0);
+        }
+        for (int k = 0; k < currents.length; k++) {
+            is[k] = Require.si("current", currents[k], Dimension.CURRENT);
+            for (int j = 0; j < points; j++) pull[k][j] = forceAt(fluxLinkageAt(is[k], xs[j]), xs[j]);
+        }
+        return new ForceStroke("plunger " + turns + " turns, stroke " + Quantity.of(stroke, Dimension.LENGTH), xs, is, pull, mech);
+    }
+
+    /**
      * Pick-up voltage: the least DC supply that closes the plunger from rest within {@code within},
      * with the coil at {@code coilTemperature} (its resistance follows the conductor). Each trial is
      * a transient run (eddy currents, stops and all); the search brackets the supply from the static
