@@ -578,10 +578,11 @@ public final class Plunger implements Armature {
      * Pick-up voltage: the least DC supply that closes the plunger from rest within {@code within},
      * with the coil at {@code coilTemperature} (its resistance follows the conductor). Each trial is
      * a transient run (eddy currents, stops and all); the search brackets the supply from the static
-     * pull-in current up, then bisects to 10⁻⁶ of it. Fails when 10 kV does not close it.
+     * pull-in current up, then bisects to 10⁻⁶ of it. Fails when 10 kV does not close it; the time
+     * may be at most 10 s.
      */
     public Quantity pickUpVoltage(Quantity within, Quantity coilTemperature) {
-        double t = Require.positive("time to close", within, Dimension.TIME);
+        double t = Require.positive("time to close", within, Dimension.TIME, MAX_PICK_UP_TIME);
         Plunger hot = atTemperature(coilTemperature);
         double r = hot.resistanceOhms();
         double lo = 0, hi = Math.max(r * hot.staticCurrentAt(0), 1e-3);
@@ -598,6 +599,9 @@ public final class Plunger implements Armature {
         }
         return Quantity.of(hi, Dimension.VOLTAGE);
     }
+
+    /** Longest time to close a pick-up search accepts (s): each of its trials is a transient run that long. */
+    public static final double MAX_PICK_UP_TIME = 10;
 
     private boolean closesWithin(double volts, double seconds) {
         var run = Drive.dc(Quantity.of(volts, Dimension.VOLTAGE)).into(this).simulate(Quantity.of(seconds, Dimension.TIME));

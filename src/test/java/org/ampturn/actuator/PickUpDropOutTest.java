@@ -50,6 +50,8 @@ class PickUpDropOutTest {
         assertTrue(vpu > staticV, vpu + " V vs static " + staticV + " V");
         // a hot coil needs more supply
         assertTrue(VALVE.pickUpVoltage(within, degC(100)).si() > vpu * 1.2);
+        IllegalArgumentException e = assertThrows(IllegalArgumentException.class, () -> VALVE.pickUpVoltage(s(60), degC(20)));
+        assertTrue(e.getMessage().contains("time to close"), e.getMessage());
     }
 
     @Test
