@@ -53,14 +53,16 @@ public final class Plunger implements Armature {
     private final Extras ex;
 
     /** Eddy currents and stops: the parts of the model beyond the magnetic circuit and the spring. */
-    private record Extras(Eddy eddy, double restitution, Pole pole, double fringe, MagneticCircuit path, Conductor conductor) {
-        static final Extras NONE = new Extras(null, 0, Pole.FLAT, Double.NaN, null, Conductor.COPPER);
-        Extras eddy(Eddy e) { return new Extras(e, restitution, pole, fringe, path, conductor); }
-        Extras restitution(double e) { return new Extras(eddy, e, pole, fringe, path, conductor); }
-        Extras pole(Pole p) { return new Extras(eddy, restitution, p, fringe, path, conductor); }
-        Extras fringe(double t) { return new Extras(eddy, restitution, pole, t, path, conductor); }
-        Extras path(MagneticCircuit c) { return new Extras(eddy, restitution, pole, fringe, c, conductor); }
-        Extras conductor(Conductor c) { return new Extras(eddy, restitution, pole, fringe, path, c); }
+    private record Extras(Eddy eddy, double restitution, Pole pole, double fringe, MagneticCircuit path, Conductor conductor,
+                          double coercivity) {
+        static final Extras NONE = new Extras(null, 0, Pole.FLAT, Double.NaN, null, Conductor.COPPER, 0);
+        Extras eddy(Eddy e) { return new Extras(e, restitution, pole, fringe, path, conductor, coercivity); }
+        Extras restitution(double e) { return new Extras(eddy, e, pole, fringe, path, conductor, coercivity); }
+        Extras pole(Pole p) { return new Extras(eddy, restitution, p, fringe, path, conductor, coercivity); }
+        Extras fringe(double t) { return new Extras(eddy, restitution, pole, t, path, conductor, coercivity); }
+        Extras path(MagneticCircuit c) { return new Extras(eddy, restitution, pole, fringe, c, conductor, coercivity); }
+        Extras conductor(Conductor c) { return new Extras(eddy, restitution, pole, fringe, path, c, coercivity); }
+        Extras coercivity(double hc) { return new Extras(eddy, restitution, pole, fringe, path, conductor, hc); }
     }
 
     /**
@@ -552,6 +554,96 @@ public final class Plunger implements Armature {
         }
     }
 
+    // ---------------------------------------------------------------- remanence (static)
+
+    /**
+     * Remanence of the iron path by the recoil-line model: once magnetised, the iron of
+     * {@link #withIron} acts as an MMF source Hc·l_fe (its coercive field times its length) behind
+     * its own reluctance l_fe/(μ0·μr·A), μr the material's initial relative permeability taken as
+     * the recoil permeability (the load-line method of permanent-magnet circuits; e.g. Parker,
+     * Advances in Permanent Magnetism, Wiley 1990, ch. 4, from memory). Soft iron's Hc is of the
+     * order of 50 to 200 A/m (common practice). A static model: it gives the residual flux and
+     * pull after switch-off, the drop-out current and voltage and the residual shim that ensures
+     * release; the transient run does not carry the remanence (it starts and ends unmagnetised).
+     */
+    public Plunger withCoercivity(Quantity coerciveField) {
+        if (iron == null) throw Require.fail("remanence needs the iron path's length and material: give withIron(..) first");
+        double hc = Require.nonNegative("coercive field", coerciveField, Dimension.CURRENT.div(Dimension.LENGTH));
+        return with(ex.coercivity(hc));
+    }
+
+    private double closedReluctance(double residualGap) {
+        double rel = (residualGap > 0 ? (idealGap() ? residualGap / (MU0 * area) : 1 / gapPermeance(residualGap, null)) : 0)
+                + parasitic / (MU0 * parasiticArea);
+        if (iron != null) rel += ironLength / (MU0 * iron.relativePermeability() * area);
+        if (ex.path() != null) rel += ex.path().reluctanceSI();
+        return rel;
+    }
+
+    private double residualFluxAt(double residualGap) {
+        return ex.coercivity() * ironLength / closedReluctance(residualGap);
+    }
+
+    /** Flux (Wb) left in the closed magnet at zero current, by the recoil-line model of {@link #withCoercivity}. */
+    public Quantity residualFlux() {
+        return Quantity.of(residualFluxAt(residual), Dimension.FLUX);
+    }
+
+    /** Pull (N) of the residual flux on the closed plunger at zero current. */
+    public Quantity residualForce() {
+        return Quantity.of(forceAt(turns * residualFluxAt(residual), stroke), Dimension.FORCE);
+    }
+
+    /** True when spring, preload and load overcome the residual pull, so that the plunger releases at zero current. */
+    public boolean releasesAtZeroCurrent() {
+        return residualForce().si() < restoringForceAt(stroke, 0);
+    }
+
+    /** Gap flux (Wb) at which the pull at the closed stop meets the spring, preload and load; by bisection. */
+    private double holdingFlux() {
+        double need = restoringForceAt(stroke, 0);
+        double lo = 0, hi = Math.sqrt(2 * MU0 * area * Math.max(need, 1e-12));
+        while (forceAt(turns * hi, stroke) < need) {
+            lo = hi;
+            hi *= 2;
+            if (!(hi < 1e3)) throw Require.fail("no flux holds the plunger against " + Quantity.of(need, Dimension.FORCE));
+        }
+        for (int k = 0; k < 200 && hi - lo > 1e-15 * hi; k++) {
+            double mid = 0.5 * (lo + hi);
+            if (forceAt(turns * mid, stroke) < need) lo = mid;
+            else hi = mid;
+        }
+        return 0.5 * (lo + hi);
+    }
+
+    /**
+     * Drop-out current with remanence: the coil current at which the closed plunger releases,
+     * {@code (φ_hold·R − Hc·l_fe)/N} on the recoil line (negative: it needs a reverse current to
+     * release; zero coercivity gives the plain static value).
+     */
+    public Quantity dropOutCurrent() {
+        double r = closedReluctance(residual);
+        return Quantity.of((holdingFlux() * r - ex.coercivity() * ironLength) / turns, Dimension.CURRENT);
+    }
+
+    /** The least non-magnetic residual gap (shim) at which the residual pull no longer holds the plunger (zero if none is needed). */
+    public Quantity residualShimForRelease() {
+        double need = holdingFlux();
+        if (residualFluxAt(0) <= need) return Quantity.of(0, Dimension.LENGTH);
+        double lo = 0, hi = Math.max(residual, 1e-6);
+        while (residualFluxAt(hi) > need) {
+            lo = hi;
+            hi *= 2;
+            if (!(hi < 1)) throw Require.fail("no shim up to 1 m releases the plunger");
+        }
+        for (int k = 0; k < 200 && hi - lo > 1e-12 * hi; k++) {
+            double mid = 0.5 * (lo + hi);
+            if (residualFluxAt(mid) > need) lo = mid;
+            else hi = mid;
+        }
+        return Quantity.of(hi, Dimension.LENGTH);
+    }
+
     /**
      * Force-stroke curves at the given steady currents over {@code points} evenly spaced positions
      * from the open to the closed stop, with the spring, preload and load line (see
@@ -611,12 +703,14 @@ public final class Plunger implements Armature {
     /**
      * Drop-out voltage: the DC supply below which the closed plunger releases, with the coil at
      * {@code coilTemperature}: the steady current V/R at which the magnetic force at the closed stop
-     * equals the spring, preload and load there (static; no remanence in this model, so the flux
-     * and the force follow the current down to zero).
+     * equals the spring, preload and load there (static). Without {@link #withCoercivity} the flux
+     * follows the current to zero; with it, the drop-out current of the recoil-line model (negative
+     * when the remanence alone holds the plunger).
      */
     public Quantity dropOutVoltage(Quantity coilTemperature) {
         Plunger hot = atTemperature(coilTemperature);
-        return Quantity.of(hot.staticCurrentAt(stroke) * hot.resistanceOhms(), Dimension.VOLTAGE);
+        double amps = ex.coercivity() > 0 ? hot.dropOutCurrent().si() : hot.staticCurrentAt(stroke);
+        return Quantity.of(amps * hot.resistanceOhms(), Dimension.VOLTAGE);
     }
 
     /** The current (A) at which the pull at x equals the restoring force there at rest, by bisection. */
@@ -669,6 +763,7 @@ public final class Plunger implements Armature {
                 + (ex.pole() != Pole.FLAT ? ", " + ex.pole().kind() + " pole" + (ex.pole().kind().equals("conical")
                         ? " " + Require.show(ex.pole().angle()) + "°" : "") : "")
                 + (!Double.isNaN(ex.fringe()) ? ", fringing over " + Quantity.of(ex.fringe(), Dimension.LENGTH) : "")
+                + (ex.coercivity() > 0 ? ", coercive field " + Quantity.of(ex.coercivity(), Dimension.CURRENT.div(Dimension.LENGTH)) : "")
                 + (ex.restitution() > 0 ? ", restitution " + String.format(java.util.Locale.ROOT, "%.3g", ex.restitution()) : "");
     }
 

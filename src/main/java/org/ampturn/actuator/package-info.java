@@ -5,7 +5,7 @@
  * lumped reluctances of the working gap (flat, conical or stepped pole; Roters' fringing
  * permeances, {@link org.ampturn.actuator.Permeance}), a parasitic gap and an iron path; eddy
  * currents, shorted turns and copper slugs as a {@link org.ampturn.drive.EddyLadder}; stops with
- * restitution; pick-up and drop-out voltage; force-stroke curves ({@link org.ampturn.actuator.ForceStroke}).
+ * restitution; remanence by the recoil-line model (static); pick-up and drop-out voltage; force-stroke curves ({@link org.ampturn.actuator.ForceStroke}).
  *
  * <p>Conventions: SI doubles in the kernels ({@code ...At} methods: weber-turns, metres, amperes,
  * newtons, joules), {@code Quantity} on the surface; immutable values, {@code of…} factories and
