@@ -231,6 +231,17 @@ public final class Ampturn {
         return org.ampturn.thermal.WireChoice.forBobbin(bobbin);
     }
 
+    // ---- actuator ----
+
+    /**
+     * Force-stroke curves of a plunger at the given currents (41 positions over the stroke), with the
+     * spring and load line on the same axes; the figure shows the margin at each current.
+     */
+    public static org.ampturn.chart.Figure plotForceStroke(org.ampturn.actuator.Plunger plunger, Quantity... currents) {
+        if (plunger == null) throw new IllegalArgumentException("no plunger to draw (null)");
+        return org.ampturn.chart.Plots.forceStroke(plunger.forceStroke(41, currents));
+    }
+
     // ---- wire ----
     /** An AWG copper magnet wire, heavy build (ASTM B258): {@code awg(24)}, {@code awg(24.5)}. */
     public static org.ampturn.wire.Wire awg(double gauge) { return org.ampturn.wire.Wire.awg(gauge); }

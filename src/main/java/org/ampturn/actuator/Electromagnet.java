@@ -19,8 +19,10 @@ import org.ampturn.units.Require;
  *     (Woodson and Melcher, Electromechanical Dynamics, 1968, ch. 3), by a central difference in x;
  *     for a linear circuit W′ = ½·L(x)·i², F = −½·i²·dL/dx.</li>
  * </ul>
- * The attraction (closing the gap) is reported positive. Fringing and leakage are not modelled, so
- * the force is an upper estimate for larger gaps; valid for gaps small against the pole's width.
+ * The attraction (closing the gap) is reported positive. Fringing and leakage are not modelled;
+ * valid for gaps small against the pole's width. At larger gaps the value is no bound either way: at
+ * a given flux it overstates the pull, at a given current a fringing permeance that grows with the
+ * gap raises dL/dx and with it the pull.
  */
 public final class Electromagnet {
     private final int turns;

@@ -126,6 +126,12 @@ public final class Plots {
         return Figures.show(Figure.of("B-H", Adapt.bhData(m, operatingPoint)));
     }
 
+    /** Force-stroke curves with the spring and load line (see {@code Plunger.forceStroke}). */
+    public static Figure forceStroke(org.ampturn.actuator.ForceStroke fs) {
+        if (fs == null) throw new IllegalArgumentException("no force-stroke curves to draw (null)");
+        return Figures.show(Figure.of("force-stroke", ActuatorFigures.of(fs)));
+    }
+
     /** Several curves given directly: name, x and y arrays in SI, all of one x and one y dimension. */
     public static FigureData lines(String xQuantity, Dimension xd, String yQuantity, Dimension yd, List<Trace> traces) {
         return new FigureData.Lines("", xQuantity, xd, List.of(new Panel(yQuantity, yd, new ArrayList<>(traces))), List.of());

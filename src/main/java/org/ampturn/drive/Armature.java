@@ -45,4 +45,17 @@ public interface Armature {
 
     /** One line describing the actuator. */
     String describe();
+
+    /**
+     * Eddy currents and shorted turns coupled to the coil (a copper slug, solid iron), as a ladder
+     * the drive integrates; {@link EddyLadder#NONE} unless the actuator models them. The current
+     * and force methods above then describe the magnetising branch at the ladder's end.
+     */
+    default EddyLadder eddyLadder() { return EddyLadder.NONE; }
+
+    /**
+     * Coefficient of restitution at the stops, from 0 (the armature stops dead, the default) to 1
+     * (it rebounds at its impact speed): rebound speed = e × impact speed (Newton's law of impact).
+     */
+    default double restitution() { return 0; }
 }

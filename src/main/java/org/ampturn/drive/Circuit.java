@@ -101,6 +101,16 @@ public final class Circuit {
         return new Solver(this, end).run();
     }
 
+    /**
+     * The time (s) at which the current first rises through {@code amps} in a run of {@code duration}
+     * seconds, located by the solver's event search (NaN when not reached).
+     */
+    double timeToCurrent(double amps, double duration) {
+        Solver s = new Solver(new Circuit(drive, coil, armature, clamp, offAt, 2, relTol, numeric), duration, amps);
+        s.run();
+        return s.probeTime;
+    }
+
     /** One line: drive, load, clamp, off time. */
     @Override
     public String toString() {

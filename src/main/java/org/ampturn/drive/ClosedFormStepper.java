@@ -14,13 +14,14 @@ import java.util.List;
 final class ClosedFormStepper implements Solver.Stepper {
     private final Solver sv;
     private final double l;
-    private final double[] tmp = new double[DIM];
+    private final double[] tmp;
     // coefficients of the current mode
     private double a, b, s1, d2, c1, c2, i0, iInf, tau, k;
 
     ClosedFormStepper(Solver sv) {
         this.sv = sv;
         this.l = sv.load.inductance();
+        this.tmp = new double[sv.dim];
     }
 
     private void coefficients() {
@@ -64,7 +65,7 @@ final class ClosedFormStepper implements Solver.Stepper {
 
     /** State {@code s} seconds into the segment, from the segment's start state {@code y0}. */
     private void stateAt(double s, double[] y0, double[] out) {
-        System.arraycopy(y0, 0, out, 0, DIM);
+        System.arraycopy(y0, 0, out, 0, out.length);
         if (sv.elec == Solver.Elec.IDLE) return;
         double i, ii, ii2;
         if (b > 0) {

@@ -8,7 +8,7 @@ final class Ev {
     /** What happens when it fires. */
     enum Act {
         PEAK_REACHED, PEAK_LOW, HOLD_HIGH, HOLD_LOW, HOLD_PWM_OFF, CLAMP_ZERO, SNUBBER_ZERO, DECAY_1PCT,
-        REC_63, REC_90, REC_99, HIT_OPEN, HIT_CLOSED, RELEASE_OPEN, RELEASE_CLOSED
+        REC_63, REC_90, REC_99, PROBE, HIT_OPEN, HIT_CLOSED, RELEASE_OPEN, RELEASE_CLOSED
     }
 
     final Kind kind;

@@ -25,7 +25,46 @@ abstract class Load {
     /** Small-signal inductance at the start position. */
     abstract double inductance();
 
+    /**
+     * The smallest incremental inductance dλ/di (H) at the current {@code amps}, over the
+     * positions 0 and the stroke: a flux linkage error δλ is a current error δλ/(dλ/di), so the
+     * integrator's error control on λ uses it. A saturated core's dλ/di is far below its
+     * small-signal inductance. Found from {@link #currentAt} by bisection; the small-signal
+     * inductance where the model gives no answer.
+     */
+    double incrementalInductanceAt(double amps) {
+        double a = Math.abs(amps);
+        if (!(a > 0) || !Double.isFinite(a)) return inductance();
+        double best = Double.POSITIVE_INFINITY;
+        for (double x : moves() ? new double[] {0, stroke()} : new double[] {0}) {
+            double hi = fluxAt(a, x), lo = fluxAt(0.99 * a, x);
+            if (hi > lo) best = Math.min(best, (hi - lo) / (0.01 * a));
+        }
+        return Double.isFinite(best) ? best : inductance();
+    }
+
+    /** λ ≥ 0 at which {@link #currentAt} gives {@code amps} at x, by bisection; NaN if none is found. */
+    private double fluxAt(double amps, double x) {
+        double lo = 0, hi = Math.max(inductance() * amps, 1e-15);
+        for (int k = 0; !(currentAt(hi, x) >= amps); k++) {
+            if (k > 200 || !Double.isFinite(currentAt(hi, x))) return Double.NaN;
+            hi *= 2;
+        }
+        for (int k = 0; k < 80 && hi - lo > 1e-14 * hi; k++) {
+            double mid = 0.5 * (lo + hi);
+            if (currentAt(mid, x) < amps) lo = mid;
+            else hi = mid;
+        }
+        return 0.5 * (lo + hi);
+    }
+
     abstract boolean moves();
+
+    /** Eddy currents and shorted turns coupled to the coil. */
+    EddyLadder ladder() { return EddyLadder.NONE; }
+
+    /** Coefficient of restitution at the stops (0: plastic). */
+    double restitution() { return 0; }
 
     /** λ proportional to i and no motion: closed forms apply. */
     abstract boolean linear();
@@ -98,6 +137,15 @@ abstract class Load {
         @Override double stroke() { return 0; }
         @Override double resistance() { return r; }
         @Override double inductance() { return l; }
+        @Override double incrementalInductanceAt(double amps) {
+            if (linear) return l;
+            try {
+                double li = coil.incrementalInductanceAt(amps);
+                return li > 0 && Double.isFinite(li) ? Math.min(li, l) : super.incrementalInductanceAt(amps);
+            } catch (IllegalArgumentException outsideTheModel) {
+                return super.incrementalInductanceAt(amps);
+            }
+        }
         @Override boolean moves() { return false; }
         @Override boolean linear() { return linear; }
         @Override String describe() { return coil.describe(); }
@@ -131,6 +179,11 @@ abstract class Load {
         @Override double resistance() { return r; }
         @Override double inductance() { return a.inductanceAt(0); }
         @Override boolean moves() { return true; }
+        @Override EddyLadder ladder() { return a.eddyLadder() == null ? EddyLadder.NONE : a.eddyLadder(); }
+        @Override double restitution() {
+            double e = a.restitution();
+            return e >= 0 && e <= 1 ? e : 0;
+        }
         @Override boolean linear() { return false; }
         @Override String describe() { return a.describe(); }
     }

@@ -10,11 +10,14 @@ import org.ampturn.units.Quantity;
  * measured in the first on-interval; the final current is the steady on-state current
  * {@code V/(Rs + Ron + R)}; ripple and cycle mean are those of the last complete switching cycle
  * (PWM period or hold cycle) before the switch opened for good, from the exact switching instants.
+ * The impact speed is the armature's speed as it first reaches the closed stop; bounces count the
+ * rebounds at both stops (none with a restitution of 0).
  */
 public record Metrics(Quantity timeConstant, Quantity timeTo63, Quantity timeTo90, Quantity timeTo99,
                       Quantity finalCurrent, Quantity peakCurrent, Quantity peakSwitchVoltage, Quantity peakStoredEnergy,
                       Quantity clampEnergy, Quantity decayTime, Quantity ripple, Quantity cycleMean,
-                      Quantity pullInCurrentTime, Quantity pullInTime, Quantity dropOutTime) {
+                      Quantity pullInCurrentTime, Quantity pullInTime, Quantity dropOutTime,
+                      Quantity impactSpeed, int bounces) {
 
     private static void add(List<String> out, String label, Quantity q) {
         if (!Double.isNaN(q.si())) out.add(label + " " + q);
@@ -34,6 +37,10 @@ public record Metrics(Quantity timeConstant, Quantity timeTo63, Quantity timeTo9
         add(s, "cycle mean", cycleMean);
         add(s, "pull-in", pullInTime);
         add(s, "drop-out", dropOutTime);
+        if (bounces > 0) {
+            add(s, "impact", impactSpeed);
+            s.add(bounces + (bounces == 1 ? " bounce" : " bounces"));
+        }
         return String.join(", ", s);
     }
 }

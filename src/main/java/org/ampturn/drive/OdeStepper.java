@@ -24,6 +24,12 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     /** Derivative evaluations allowed for one run before it is declared too stiff to finish. */
     static final int MAX_EVALUATIONS = 4_000_000;
 
+    /** Longest step, in local time constants (dλ/di)/R at the final current. */
+    static final double MAX_STEP_PER_TIME_CONSTANT = 2.0;
+
+    /** An eddy ladder's fastest mode may take this many of its time constants per step (stability holds there). */
+    static final double LADDER_STEPS = 2;
+
     private final Solver sv;
     private final double rtol;
     private final AdaptiveStepsizeIntegrator integrator;
@@ -37,10 +43,29 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     OdeStepper(Solver sv, double rtol) {
         this.sv = sv;
         this.rtol = rtol;
-        double[] scale = new double[DIM];
+        double[] scale = new double[sv.dim];
         double iRef = Double.isFinite(sv.finalCurrent) ? sv.finalCurrent : sv.vs * sv.tEnd / sv.load.inductance();
         if (sv.drive.scheme == Drive.Scheme.PEAK_AND_HOLD) iRef = Math.max(sv.drive.peakAmps, Math.min(iRef, 10 * sv.drive.peakAmps));
-        double lamRef = Math.max(sv.load.inductance() * iRef, 1e-12);
+        // the error control on λ must hold the current to rtol·iRef: δi = δλ/(dλ/di), and in a saturated core
+        // dλ/di at the final current is far below the small-signal L, so L·iRef alone let the current
+        // overshoot V/R by many times rtol
+        double lInc = Math.min(sv.load.inductance(), sv.load.incrementalInductanceAt(iRef));
+        double rOn = sv.rs + sv.ron + sv.rc;
+        double tauInc = rOn > 0 ? lInc / rOn : Double.POSITIVE_INFINITY;
+        if (sv.loops > 0) {
+            // the ladder's fast modes: L0/(R + R1) and each tube's share of dλ/di over the loops either side of it;
+            // the step must resolve them for the dense output between steps to hold them
+            EddyLadder lad = sv.ladder;
+            double fast = lad.leakage / (rOn + lad.shunt[0]);
+            for (int k = 0; k < sv.loops; k++) {
+                double rr = lad.shunt[k] + (k + 1 < sv.loops ? lad.shunt[k + 1] : 0);
+                fast = Math.min(fast, lad.share[k] * lInc / rr);
+            }
+            tauInc = Math.min(tauInc, LADDER_STEPS * fast);
+            // the coil current is (λ − λ1)/L0: the leakage sets how finely λ must be held
+            lInc = Math.min(lInc, lad.leakage);
+        }
+        double lamRef = Math.max(lInc * iRef, 1e-12);
         double eRef = Math.max(sv.vs * iRef * sv.tEnd, 1e-15);
         scale[LAM] = lamRef;
         scale[VC] = sv.vs + Math.max(sv.v0, 0);
@@ -49,14 +74,22 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         // the energy integrals start at zero and grow; a loose absolute floor would let their error pass unseen
         for (int k = ESUP; k <= EMECH; k++) scale[k] = 1e-6 * eRef;
         scale[Q] = iRef * sv.tEnd;
-        double[] abs = new double[DIM];
-        double[] rel = new double[DIM];
-        for (int k = 0; k < DIM; k++) {
+        if (sv.loops > 0) {
+            scale[EEDDY] = 1e-6 * eRef;
+            for (int k = 0; k < sv.loops; k++) scale[LAD + k] = lamRef;
+        }
+        double[] abs = new double[sv.dim];
+        double[] rel = new double[sv.dim];
+        for (int k = 0; k < sv.dim; k++) {
             abs[k] = rtol * scale[k];
             rel[k] = rtol;
         }
         this.minStep = 1e-14 * sv.tEnd;
-        this.integrator = new DormandPrince853Integrator(minStep, sv.tEnd, abs, rel);
+        // near the steady state of a saturated coil the local time constant is dλ/di / R, far shorter than
+        // the small-signal L/R: with longer steps an explicit method sits on its stability limit and its
+        // dense output wanders around V/R (above it too, which a first-order circuit cannot do)
+        double maxStep = Math.min(sv.tEnd, MAX_STEP_PER_TIME_CONSTANT * tauInc);
+        this.integrator = new DormandPrince853Integrator(minStep, Math.max(maxStep, 1e3 * minStep), abs, rel);
     }
 
     private int mode() { return sv.elec.ordinal(); }
@@ -71,7 +104,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
 
     @Override
     public int getDimension() {
-        return DIM;
+        return sv.dim;
     }
 
     @Override
@@ -87,7 +120,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     @Override
     public double advance(double t0, double t1, double[] y, List<Ev> evs, int[] fired) {
         fired[0] = -1;
-        boolean still = sv.elec == Elec.IDLE && sv.mech != Mech.FREE;
+        boolean still = sv.elec == Elec.IDLE && sv.mech != Mech.FREE && sv.loops == 0;
         if (still || t1 - t0 <= 1e-12 * Math.max(Math.abs(t1), sv.tEnd)) {
             for (int k = sv.nextSample(); k < sv.n && sv.sampleTime(k) <= t1; k++) sv.record(k, y);
             return t1;
@@ -116,7 +149,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         } catch (NumberIsTooSmallException ex) {
             if (!Double.isNaN(sv.nonFiniteLambda)) throw new TransientException(sv.noCurrentMessage(), ex);
             throw new TransientException("the step size fell below " + Quantity.of(minStep, Dimension.TIME) + " near t = "
-                    + Quantity.of(sv.t, Dimension.TIME) + " (current " + Quantity.of(sv.load.currentAt(y[LAM], y[X]), Dimension.CURRENT)
+                    + Quantity.of(sv.t, Dimension.TIME) + " (current " + Quantity.of(sv.coilCurrent(y), Dimension.CURRENT)
                     + "): the circuit is stiff or the solution diverges", ex);
         } finally {
             evaluations += integrator.getEvaluations();
@@ -170,6 +203,11 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         @Override
         public Action eventOccurred(double t, double[] y, boolean increasing) {
             if (increasing != (ev.direction > 0)) return Action.CONTINUE;
+            if (ev.act == Ev.Act.PROBE) {
+                // located exactly and noted; the step goes on, so the solution is the same as without it
+                if (Double.isNaN(sv.probeTime)) sv.probeTime = t;
+                return Action.CONTINUE;
+            }
             fired = true;
             return Action.STOP;
         }

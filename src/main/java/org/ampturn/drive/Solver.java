@@ -17,6 +17,8 @@ import org.ampturn.units.Quantity;
  */
 final class Solver {
     static final int LAM = 0, VC = 1, X = 2, V = 3, ESUP = 4, ECOIL = 5, EDRV = 6, ECL = 7, EMECH = 8, Q = 9, DIM = 10;
+    /** With an eddy ladder: the eddy-current loss integral, then the flux linkage λ_k of each loop. */
+    static final int EEDDY = 10, LAD = 11;
 
     /** Electrical mode: switch closed, switch open with the clamp (or snubber) conducting, or nothing conducting. */
     enum Elec { ON, CLAMP, IDLE }
@@ -26,7 +28,7 @@ final class Solver {
 
     // outputs of eval()
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
-            O_F = 8, O_DVC = 9, O_ACC = 10, O_N = 11;
+            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_N = 12;
 
     /** Most switching segments (each PWM edge, comparator edge or event starts one) a run may take. */
     static final long MAX_SEGMENTS = 20_000_000L;
@@ -49,12 +51,20 @@ final class Solver {
     final double vs, rs, ron, rc, v0, rcl, cap, tEnd, offAt;
     final boolean snub, acrossCoil, moves, closedForm;
     final double finalCurrent;
+    /** A current level whose first rising crossing is wanted (NaN: none), and the time it is reached. */
+    final double probe;
+    double probeTime = Double.NaN;
     final int n;
     final double dt;
 
     // run state
     double t;
-    final double[] y = new double[DIM];
+    final EddyLadder ladder;
+    final int loops;   // loops of the ladder
+    final int dim;     // state size
+    final double restitution;
+    final double[] y;
+    final double[] ladRate;
     Elec elec = Elec.ON;
     Mech mech = Mech.OPEN;
     boolean switchOn = true;
@@ -79,6 +89,8 @@ final class Solver {
     double peakReached = Double.NaN;
     double initialStored;
     boolean everClosed;
+    double firstImpactSpeed = Double.NaN, maxImpactSpeed;
+    int bounces;
     // switching cycles (PWM periods, hold cycles)
     boolean cycleOpen;
     double cycStartT, cycStartQ, cycMin, cycMax;
@@ -87,7 +99,12 @@ final class Solver {
     long steps;
 
     Solver(Circuit c, double tEnd) {
+        this(c, tEnd, Double.NaN);
+    }
+
+    Solver(Circuit c, double tEnd, double probeAmps) {
         this.circuit = c;
+        this.probe = probeAmps;
         this.drive = c.drive;
         this.load = c.coil != null ? Load.of(c.coil) : Load.of(c.armature);
         this.clamp = c.clamp;
@@ -105,7 +122,13 @@ final class Solver {
         this.rcl = clamp != null ? clamp.seriesOhms() : 0;
         this.cap = clamp != null ? clamp.capacitanceFarads() : 0;
         this.moves = load.moves();
-        this.closedForm = load.linear() && !moves && !snub && !c.numeric;
+        this.ladder = load.ladder();
+        this.loops = ladder.sections();
+        this.dim = loops > 0 ? LAD + loops : DIM;
+        this.y = new double[dim];
+        this.ladRate = new double[loops];
+        this.restitution = load.restitution();
+        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0;
         double rTot = rs + ron + rc;
         this.finalCurrent = rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
         validate();
@@ -163,7 +186,8 @@ final class Solver {
     /** Current, switch voltage, dλ/dt, powers, force and acceleration in a mode. */
     void eval(Elec e, Mech m, double[] s, double[] o) {
         double lam = s[LAM], x = s[X], v = s[V];
-        double i = e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
+        double i = loops > 0 ? (e == Elec.IDLE ? 0 : (lam - s[LAD]) / ladder.leakage)
+                : e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
         if (!Double.isFinite(i)) {
             // a trial stage beyond the core model's range: a huge current makes the integrator reject the step
             nonFiniteLambda = lam;
@@ -217,7 +241,9 @@ final class Solver {
                 vsw = vs;
                 i = 0;
         }
-        double f = moves ? load.forceAt(lam, x) : 0;
+        double pEddy = loops > 0 ? ladderRates(s, i, ladRate) : 0;
+        if (loops > 0 && e == Elec.IDLE) dl = ladRate[0]; // the open coil carries no current: λ follows the first loop
+        double f = moves ? magnetForce(s) : 0;
         double acc = 0, pm = 0;
         if (m == Mech.FREE) {
             acc = (f - load.restoringForceAt(x, v)) / load.mass();
@@ -234,6 +260,57 @@ final class Solver {
         o[O_F] = f;
         o[O_DVC] = dvc;
         o[O_ACC] = acc;
+        o[O_PEDDY] = pEddy;
+    }
+
+    /** The pull of the magnet: the actuator's, or the sum over the ladder's flux tubes. */
+    double magnetForce(double[] s) {
+        if (loops == 0) return load.forceAt(s[LAM], s[X]);
+        double f = 0;
+        for (int k = 0; k < loops; k++) {
+            double fk = ladder.share[k];
+            f += fk * load.forceAt(tubeLambda(s, k) / fk, s[X]);
+        }
+        return f;
+    }
+
+    /** Flux linkage of tube k: λ_k − λ_(k+1), the innermost λ_m. */
+    private double tubeLambda(double[] s, int k) {
+        return k < loops - 1 ? s[LAD + k] - s[LAD + k + 1] : s[LAD + k];
+    }
+
+    /** Sign of the flux: the coil's, or the outermost loop's. */
+    private double fluxSign(double[] s) {
+        return loops > 0 ? s[LAD] : s[LAM];
+    }
+
+    /** The coil current of a state (zero with the coil open and idle). */
+    double coilCurrent(double[] s) {
+        if (loops > 0) return elec == Elec.IDLE ? 0 : (s[LAM] - s[LAD]) / ladder.leakage;
+        if (elec == Elec.IDLE && !moves) return 0;
+        return load.currentAt(s[LAM], s[X]);
+    }
+
+    /**
+     * dλ_k/dt of each loop into {@code rate} for coil current i; returns the eddy-current loss (W).
+     * Branch currents j_k = (λ_k − λ_{k+1})/L_k, j_0 = i, j_m = i(λ_m, x); dλ_k/dt = R_k·(j_{k−1} − j_k).
+     */
+    private double ladderRates(double[] s, double i, double[] rate) {
+        double prev = i, loss = 0;
+        for (int k = 0; k < loops; k++) {
+            double fk = ladder.share[k];
+            double lamTube = tubeLambda(s, k);
+            double next = load.currentAt(lamTube / fk, s[X]);
+            if (!Double.isFinite(next)) {
+                nonFiniteLambda = lamTube;
+                next = Math.copySign(1e150, lamTube);
+            }
+            double eddy = prev - next;
+            rate[k] = ladder.shunt[k] * eddy;
+            loss += ladder.shunt[k] * eddy * eddy;
+            prev = next;
+        }
+        return loss;
     }
 
     /** dy/dt in the current mode. */
@@ -249,10 +326,24 @@ final class Solver {
         d[ECL] = scratch[O_PCL];
         d[EMECH] = scratch[O_PMECH];
         d[Q] = scratch[O_I];
+        if (loops > 0) {
+            d[EEDDY] = scratch[O_PEDDY];
+            System.arraycopy(ladRate, 0, d, LAD, loops);
+        }
     }
 
     double storedAt(double[] s) {
-        double w = load.fieldEnergyAt(s[LAM], s[X]);
+        double w;
+        if (loops == 0) {
+            w = load.fieldEnergyAt(s[LAM], s[X]);
+        } else {
+            double i = elec == Elec.IDLE ? 0 : (s[LAM] - s[LAD]) / ladder.leakage;
+            w = 0.5 * ladder.leakage * i * i;
+            for (int k = 0; k < loops; k++) {
+                double fk = ladder.share[k];
+                w += fk * load.fieldEnergyAt(tubeLambda(s, k) / fk, s[X]);
+            }
+        }
         if (snub) w += 0.5 * cap * s[VC] * s[VC];
         return w;
     }
@@ -260,14 +351,14 @@ final class Solver {
     /** The crossing function of an event: zero at the level. */
     double g(Ev ev, double[] s) {
         switch (ev.kind) {
-            case CURRENT: return load.currentAt(s[LAM], s[X]) - ev.level;
+            case CURRENT: return coilCurrent(s) - ev.level;
             case POSITION: return s[X] - ev.level;
             default:
                 // the magnetic force grows as λ², so F − Fr can dip below zero and back within one step as λ
                 // swings through zero; ±√F − √Fr changes sign once, where F − Fr does
-                double f = load.forceAt(s[LAM], s[X]), fr = load.restoringForceAt(s[X], 0);
+                double f = magnetForce(s), fr = load.restoringForceAt(s[X], 0);
                 if (fr < 0 || f < 0) return f - fr;
-                return Math.copySign(Math.sqrt(f), s[LAM]) - Math.sqrt(fr);
+                return Math.copySign(Math.sqrt(f), fluxSign(s)) - Math.sqrt(fr);
         }
     }
 
@@ -319,7 +410,7 @@ final class Solver {
 
     /** A new switching cycle starts now: the previous one's ripple and mean become the latest complete cycle. */
     private void startCycle() {
-        double i = load.currentAt(y[LAM], y[X]);
+        double i = coilCurrent(y);
         if (cycleOpen && t > cycStartT) {
             cycMin = Math.min(cycMin, i);
             cycMax = Math.max(cycMax, i);
@@ -422,8 +513,7 @@ final class Solver {
     }
 
     private double currentNow() {
-        if (elec == Elec.IDLE && !moves) return 0;
-        return load.currentAt(y[LAM], y[X]);
+        return coilCurrent(y);
     }
 
     private void setSwitch(boolean on) {
@@ -435,7 +525,7 @@ final class Solver {
             elec = Elec.CLAMP;
         } else {
             elec = currentNow() > 0 ? Elec.CLAMP : Elec.IDLE;
-            if (elec == Elec.IDLE) y[LAM] = 0;
+            if (elec == Elec.IDLE) y[LAM] = loops > 0 ? y[LAD] : 0;
         }
     }
 
@@ -469,6 +559,9 @@ final class Solver {
             if (finalOff && elec != Elec.IDLE && Double.isNaN(decay1pct) && offCurrent > 0) {
                 ev.add(new Ev(Ev.Kind.CURRENT, 0.01 * offCurrent, -1, Ev.Act.DECAY_1PCT));
             }
+        }
+        if (!Double.isNaN(probe) && Double.isNaN(probeTime) && elec != Elec.IDLE) {
+            ev.add(new Ev(Ev.Kind.CURRENT, probe, 1, Ev.Act.PROBE));
         }
         if (moves) {
             switch (mech) {
@@ -516,7 +609,7 @@ final class Solver {
                 break;
             case CLAMP_ZERO:
                 elec = Elec.IDLE;
-                y[LAM] = 0;
+                y[LAM] = loops > 0 ? y[LAD] : 0;
                 if (finalOff && Double.isNaN(decayZero)) {
                     decayZero = t - offAt;
                     markers.add(new Marker("current zero", tq(t), Quantity.of(0, Dimension.CURRENT), "current"));
@@ -541,7 +634,12 @@ final class Solver {
                 t99 = t;
                 markers.add(new Marker("99 %", tq(t), iq, "current"));
                 break;
-            case HIT_OPEN:
+            case PROBE:
+                probeTime = t;
+                break;
+            case HIT_OPEN: {
+                double impact = Math.abs(y[V]);
+                maxImpactSpeed = Math.max(maxImpactSpeed, impact);
                 y[X] = 0;
                 y[V] = 0;
                 mech = Mech.OPEN;
@@ -549,22 +647,37 @@ final class Solver {
                     dropOut = t - offAt;
                     markers.add(new Marker("drop-out", tq(t), Quantity.of(0, Dimension.LENGTH), "position"));
                 }
+                if (rebounds(impact)) {
+                    y[V] = restitution * impact;
+                    mech = Mech.FREE;
+                    break;
+                }
                 if (netForce() > 0) mech = Mech.FREE;
                 break;
-            case HIT_CLOSED:
+            }
+            case HIT_CLOSED: {
+                double impact = Math.abs(y[V]);
+                maxImpactSpeed = Math.max(maxImpactSpeed, impact);
                 y[X] = load.stroke();
                 y[V] = 0;
                 mech = Mech.CLOSED;
                 if (!everClosed) {
                     everClosed = true;
                     pullIn = t;
+                    firstImpactSpeed = impact;
                     markers.add(new Marker("pull-in", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
+                }
+                if (rebounds(impact)) {
+                    y[V] = -restitution * impact;
+                    mech = Mech.FREE;
+                    break;
                 }
                 if (netForce() < 0) {
                     mech = Mech.FREE;
                     markers.add(new Marker("release", tq(t), Quantity.of(load.stroke(), Dimension.LENGTH), "position"));
                 }
                 break;
+            }
             case RELEASE_OPEN:
                 mech = Mech.FREE;
                 if (Double.isNaN(startsMoving)) {
@@ -581,8 +694,23 @@ final class Solver {
         }
     }
 
+    /**
+     * Rebound speeds below this share of the largest impact speed of the run end the bouncing: the
+     * armature comes to rest on the stop (the series of ever shorter bounces is cut off there).
+     */
+    static final double REST_FRACTION = 1e-3;
+
+    /** True when an impact at this speed rebounds (restitution e > 0 and e·v above the rest threshold); counts the bounce. */
+    private boolean rebounds(double impact) {
+        if (!(restitution > 0)) return false;
+        if (!(restitution * impact > REST_FRACTION * maxImpactSpeed)) return false;
+        bounces++;
+        markers.add(new Marker("bounce", tq(t), Quantity.of(y[X], Dimension.LENGTH), "position"));
+        return true;
+    }
+
     private double netForce() {
-        return load.forceAt(y[LAM], y[X]) - load.restoringForceAt(y[X], 0);
+        return magnetForce(y) - load.restoringForceAt(y[X], 0);
     }
 
     // ---------------------------------------------------------------- the run

@@ -7,6 +7,7 @@ import java.util.List;
 import java.util.Locale;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
+import org.ampturn.units.Require;
 
 /**
  * The solved transient of a drive, a coil and a clamp: sampled signals on a common time axis, the
@@ -24,6 +25,7 @@ public final class Transient {
     public static final double CAUTION_JOULES = 1;
 
     private final String circuit;
+    private final Circuit source;
     private final List<Signal> signals;
     private final Signal current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp, pMech,
             eSup, eDiss, eClamp, eStored, eMech, position, speed, force, capV;
@@ -38,6 +40,7 @@ public final class Transient {
         Recorder r = sv.rec;
         double[] t = r.time;
         this.circuit = sv.circuit.toString();
+        this.source = sv.circuit;
         this.duration = sv.tEnd;
         List<Signal> all = new ArrayList<>();
         current = add(all, "current", Dimension.CURRENT, t, r.current);
@@ -63,7 +66,8 @@ public final class Transient {
 
         double[] y = sv.y;
         double stored = sv.storedAt(y) - sv.initialStored;
-        energy = new EnergyLedger(y[Solver.ESUP], y[Solver.ECOIL], y[Solver.EDRV], y[Solver.ECL], stored, y[Solver.EMECH]);
+        energy = new EnergyLedger(y[Solver.ESUP], y[Solver.ECOIL], y[Solver.EDRV], y[Solver.ECL], stored, y[Solver.EMECH],
+                sv.loops > 0 ? y[Solver.EEDDY] : 0);
 
         double tau = sv.load.linear() && !sv.moves ? sv.load.inductance() / (sv.rs + sv.ron + sv.rc) : sv.t63;
         metrics = new Metrics(tq(tau), tq(sv.t63), tq(sv.t90), tq(sv.t99),
@@ -72,7 +76,8 @@ public final class Transient {
                 Quantity.of(y[Solver.ECL], Dimension.ENERGY),
                 tq(Double.isNaN(sv.decayZero) ? sv.decay1pct : sv.decayZero),
                 Quantity.of(sv.lastRipple, Dimension.CURRENT), Quantity.of(sv.lastMean, Dimension.CURRENT),
-                tq(sv.peakReached), tq(sv.pullIn), tq(sv.dropOut));
+                tq(sv.peakReached), tq(sv.pullIn), tq(sv.dropOut),
+                Quantity.of(sv.firstImpactSpeed, Dimension.VELOCITY), sv.bounces);
 
         List<Marker> mk = new ArrayList<>(sv.markers);
         if (sv.peakSw > Double.NEGATIVE_INFINITY) {
@@ -179,11 +184,15 @@ public final class Transient {
     public Quantity cycleMean() { return metrics.cycleMean(); }
     public Quantity pullInTime() { return metrics.pullInTime(); }
     public Quantity dropOutTime() { return metrics.dropOutTime(); }
+    /** Speed of the armature as it first reaches the closed stop (NaN if it never does). */
+    public Quantity impactSpeed() { return metrics.impactSpeed(); }
+    /** Rebounds at the stops over the run (0 with a restitution of 0). */
+    public int bounceCount() { return metrics.bounces(); }
 
     /**
-     * Time at which the current first reaches {@code fraction} of the final current. 0.63 (taken as
-     * 1 − 1/e), 0.9 and 0.99 are located exactly by the solver; other fractions are interpolated
-     * from the samples. NaN when not reached.
+     * Time at which the current first reaches {@code fraction} of the final current V/R. 0.63 (taken as
+     * 1 − 1/e), 0.9 and 0.99 are the run's own metrics; any other fraction is located as
+     * {@link #timeTo(Quantity)} does. NaN when not reached.
      */
     public Quantity timeTo(double fraction) {
         if (!(fraction > 0 && fraction < 1)) throw new IllegalArgumentException("fraction (" + fraction + ") must be between 0 and 1");
@@ -191,13 +200,20 @@ public final class Transient {
         if (fraction == 0.9) return metrics.timeTo90();
         if (fraction == 0.99) return metrics.timeTo99();
         double level = fraction * metrics.finalCurrent().si();
-        double[] ts = current.times(), is = current.values();
-        for (int k = 1; k < is.length; k++) {
-            if (is[k - 1] < level && is[k] >= level) {
-                return tq(ts[k - 1] + (level - is[k - 1]) / (is[k] - is[k - 1]) * (ts[k] - ts[k - 1]));
-            }
-        }
-        return tq(Double.NaN);
+        if (!Double.isFinite(level)) return tq(Double.NaN);
+        return tq(source.timeToCurrent(level, duration));
+    }
+
+    /**
+     * Time at which the current first rises through {@code level} (any current above zero), exact
+     * to the solver's tolerance: the same circuit is solved again with the level as one of the
+     * solver's events, located by root finding on the integrator's dense output (or solved in
+     * closed form for a linear coil), not read from the samples. NaN when the current never
+     * reaches the level in the run.
+     */
+    public Quantity timeTo(Quantity level) {
+        double amps = Require.positive("current level", level, Dimension.CURRENT);
+        return tq(source.timeToCurrent(amps, duration));
     }
 
     /**

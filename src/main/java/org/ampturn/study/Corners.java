@@ -42,19 +42,50 @@ public final class Corners {
         return table.row(0).get(output);
     }
 
-    /** The smallest value of an output over all rows. */
+    /**
+     * The smallest value of an output over all rows. A design with no value of the output (it
+     * failed, or the result does not exist, such as a pull-in that never happens) counts as the
+     * worst case: +∞, or −∞ when the limits bound the output only from below.
+     */
     public Quantity min(String output) {
-        return table.min(output).get(output);
+        return extreme(output, false);
     }
 
-    /** The largest value of an output over all rows. */
+    /** The largest value of an output over all rows, a design with no value counted as {@link #min} says. */
     public Quantity max(String output) {
-        return table.max(output).get(output);
+        return extreme(output, true);
     }
 
-    /** The row where an output is largest ({@code max}) or smallest. */
+    private Quantity extreme(String output, boolean max) {
+        double[] v = Worst.filled(table, output, limits);
+        double best = Double.NaN;
+        for (double x : v) {
+            if (Double.isNaN(x)) continue;
+            if (Double.isNaN(best) || (max ? x > best : x < best)) best = x;
+        }
+        if (Double.isNaN(best)) throw new IllegalStateException("no design has a value of " + output);
+        return Quantity.of(best, table.dimension(output));
+    }
+
+    /** How many designs have no value of an output (each counted as the worst case). */
+    public int missing(String output) {
+        return Worst.count(table, output);
+    }
+
+    /**
+     * The row where an output is largest ({@code max}) or smallest; a design with no value of the
+     * output, when that counts as the worst case on this side.
+     */
     public Row worst(String output, boolean max) {
+        int at = missingRow(output);
+        if (at >= 0 && max != Worst.lowIsWorst(output, limits)) return table.row(at);
         return table.best(output, max);
+    }
+
+    private int missingRow(String output) {
+        double[] v = table.values(output);
+        for (int i = 0; i < v.length; i++) if (Double.isNaN(v[i]) && Worst.computed(table, i)) return i;
+        return -1;
     }
 
     public List<Limit> limits() {
@@ -121,6 +152,8 @@ public final class Corners {
             if (!table.isNumeric(o)) continue;
             try {
                 sb.append("  ").append(o).append(": nominal ").append(nominal(o)).append(", from ").append(min(o)).append(" to ").append(max(o));
+                int none = missing(o);
+                if (none > 0) sb.append(" (").append(none).append(none == 1 ? " design has" : " designs have").append(" no value, counted as the worst case)");
                 List<Sensitivity> s = sensitivity(o);
                 if (!s.isEmpty() && !Double.isNaN(s.get(0).share())) {
                     sb.append("; most sensitive to ");
@@ -139,8 +172,8 @@ public final class Corners {
             sb.append("  ").append(l).append(": ");
             if (bad == 0) sb.append("met by every design");
             else {
-                Row w = table.best(l.output(), !l.isLowerBound());
-                sb.append(bad).append(" of ").append(table.size()).append(" designs fail; worst ").append(w.get(l.output()));
+                Quantity w = l.isLowerBound() ? min(l.output()) : max(l.output());
+                sb.append(bad).append(" of ").append(table.size()).append(" designs fail; worst ").append(w);
             }
             sb.append('\n');
         }

@@ -74,24 +74,38 @@ public final class MonteCarlo {
         return table.dimension(output);
     }
 
+    /** The mean over the runs that have a value of the output ({@link #missing} says how many do not). */
     public Quantity mean(String output) {
         return q(output, Stats.mean(values(output)));
     }
 
-    /** Sample standard deviation (n − 1). */
+    /** Sample standard deviation (n − 1) over the runs that have a value of the output. */
     public Quantity standardDeviation(String output) {
         return q(output, Stats.standardDeviation(values(output)));
     }
 
-    /** The p-th percentile, p from 0 to 100 (Hyndman and Fan 1996, definition 7). */
+    /**
+     * The p-th percentile, p from 0 to 100 (Hyndman and Fan 1996, definition 7). A run with no value
+     * of the output (it failed, or the result does not exist, such as a pull-in that never happens)
+     * counts as the worst case: +∞, or −∞ when the study's limits bound the output only from below.
+     */
     public Quantity percentile(String output, double p) {
-        return q(output, Stats.percentile(values(output), p));
+        requireOutput(output);
+        return q(output, Stats.percentile(Worst.filled(table, output, limits), p));
     }
 
+    /** How many computed runs have no value of an output (each counted as the worst case). */
+    public int missing(String output) {
+        requireOutput(output);
+        return Worst.count(table, output);
+    }
+
+    /** The smallest value; −∞ when a run without a value counts as low (see {@link #percentile}). */
     public Quantity min(String output) {
         return percentile(output, 0);
     }
 
+    /** The largest value; +∞ when a run without a value counts as high (see {@link #percentile}). */
     public Quantity max(String output) {
         return percentile(output, 100);
     }
@@ -219,7 +233,13 @@ public final class MonteCarlo {
         for (Varied v : varied) sb.append("  ").append(v).append('\n');
         for (String o : outputNames()) {
             if (!table.isNumeric(o)) continue;
-            sb.append("  ").append(o).append(": mean ").append(mean(o)).append(", σ ").append(standardDeviation(o))
+            int none = missing(o);
+            sb.append("  ").append(o).append(": ");
+            if (none > 0) {
+                sb.append(none).append(none == 1 ? " run has" : " runs have").append(" no value, counted as ")
+                        .append(Quantity.of(Worst.missing(o, limits), table.dimension(o))).append("; ");
+            }
+            sb.append("mean ").append(mean(o)).append(", σ ").append(standardDeviation(o))
                     .append("; 0.1 % ").append(percentile(o, 0.1)).append(", 50 % ").append(percentile(o, 50))
                     .append(", 99.9 % ").append(percentile(o, 99.9));
             List<Sensitivity> s = sensitivity(o);

@@ -45,6 +45,11 @@ final class Stats {
         double pos = (f.length - 1) * p / 100;
         int i = (int) Math.floor(pos);
         if (i >= f.length - 1) return f[f.length - 1];
-        return f[i] + (pos - i) * (f[i + 1] - f[i]);
+        double frac = pos - i;
+        // ±∞ stand for missing results counted as the worst case: between two of them, or past a finite one, no ∞ − ∞
+        if (frac == 0 || f[i] == f[i + 1]) return f[i];
+        if (Double.isInfinite(f[i + 1])) return f[i + 1];
+        if (Double.isInfinite(f[i])) return f[i];
+        return f[i] + frac * (f[i + 1] - f[i]);
     }
 }

@@ -11,10 +11,14 @@ import org.ampturn.units.Quantity;
  * {@link #normal(double)} says otherwise (common practice for component tolerances).
  *
  * <p>Variance of the input (GUM, JCGM 100:2008, 4.3.7 and 4.3.4): uniform over ±a gives a²/3,
- * normal with the band at ±kσ gives (a/k)².
+ * normal with the band at ±kσ gives (a/k)². A truncated normal ({@link #truncatedNormal(double)}) is
+ * the normal with the band at ±kσ, cut at the band: no draw falls outside it (parts screened at
+ * the band). Its variance is σ²·(1 − 2k·φ(k)/(2Φ(k) − 1)), φ and Φ the standard normal density and
+ * distribution (Johnson, Kotz and Balakrishnan, Continuous Univariate Distributions, vol. 1, 2nd ed.,
+ * 1994, §13.10, from memory); draws by rejection of the normal draws outside the band.
  */
 public final class Varied {
-    enum Shape { UNIFORM, NORMAL }
+    enum Shape { UNIFORM, NORMAL, TRUNCATED_NORMAL }
 
     final String name;
     final Quantity nominal;
@@ -82,6 +86,20 @@ public final class Varied {
         return new Varied(name, nominal, plainNumber, half, Shape.NORMAL, sigmas, band);
     }
 
+    /** The same band, spread normally with the band at ±3σ and cut at the band. */
+    public Varied truncatedNormal() {
+        return truncatedNormal(3);
+    }
+
+    /**
+     * The same band, spread normally with the band at ±{@code sigmas}·σ and cut at the band: every
+     * draw lies inside the band (a part screened at its tolerance).
+     */
+    public Varied truncatedNormal(double sigmas) {
+        Require.between("band in standard deviations (sigmas)", sigmas, 0.1, 10);
+        return new Varied(name, nominal, plainNumber, half, Shape.TRUNCATED_NORMAL, sigmas, band);
+    }
+
     /** The same band, spread uniformly. */
     public Varied uniform() {
         return new Varied(name, nominal, plainNumber, half, Shape.UNIFORM, sigmas, band);
@@ -105,15 +123,23 @@ public final class Varied {
         return at(nominal.si() + half);
     }
 
-    /** Standard deviation of the input, SI: a/√3 for uniform, a/k for normal. */
+    /** Standard deviation of the input, SI: a/√3 for uniform, a/k for normal, less for the truncated normal (see the class). */
     public double standardDeviation() {
-        return shape == Shape.UNIFORM ? half / Math.sqrt(3) : half / sigmas;
+        if (shape == Shape.UNIFORM) return half / Math.sqrt(3);
+        if (shape == Shape.NORMAL) return half / sigmas;
+        double k = sigmas;
+        double phi = Math.exp(-0.5 * k * k) / Math.sqrt(2 * Math.PI);
+        double inside = org.apache.commons.math3.special.Erf.erf(k / Math.sqrt(2)); // 2Φ(k) − 1
+        return half / sigmas * Math.sqrt(1 - 2 * k * phi / inside);
     }
 
     double sample(RandomGenerator r) {
         if (half == 0) return nominal.si();
         if (shape == Shape.UNIFORM) return nominal.si() + half * (2 * r.nextDouble() - 1);
-        return nominal.si() + half / sigmas * r.nextGaussian();
+        double z = r.nextGaussian();
+        // rejection: at k ≥ 0.1 at least 8 % of the draws are kept, so the loop ends
+        if (shape == Shape.TRUNCATED_NORMAL) while (!(Math.abs(z) <= sigmas)) z = r.nextGaussian();
+        return nominal.si() + half / sigmas * z;
     }
 
     Quantity at(double si) {
@@ -144,7 +170,8 @@ public final class Varied {
 
     @Override
     public String toString() {
-        String shapeText = shape == Shape.UNIFORM ? "uniform" : "normal, band = ±" + Column.number(sigmas, 3) + "σ";
+        String shapeText = shape == Shape.UNIFORM ? "uniform"
+                : (shape == Shape.NORMAL ? "normal" : "normal cut at the band") + ", band = ±" + Column.number(sigmas, 3) + "σ";
         return String.format(Locale.ROOT, "%s = %s %s (%s)", name, plainNumber ? Column.number(nominal.si(), Quantity.displayDigits()) : nominal, band, shapeText);
     }
 }
