@@ -34,7 +34,9 @@ import org.ampturn.wire.Winding;
  * the n pole faces; Roters, Electromagnetic Devices, 1941, ch. 5; Fitzgerald, Kingsley and Umans,
  * Electric Machinery, 6th ed., ch. 3). Fringing and leakage are left out, as in
  * {@link Electromagnet}; valid while the gap is short against the pole's width. Remanence is not
- * carried by the run: the flux decays to zero with the current (see lib-docs/force.md).
+ * carried by the run: the flux decays to zero with the current; {@link #withCoercivity} gives the
+ * static recoil-line figures and keeps {@link #release} from reporting a release the residual flux
+ * would prevent (see lib-docs/force.md).
  *
  * <p>Coil resistance follows annealed copper, α20 = 0.00393 /K (IEC 60028:1925), or the winding's
  * conductor.
@@ -53,9 +55,18 @@ public final class HoldingMagnet implements Armature {
     private final double r20;
     private final double kelvin;
     private final Conductor conductor;
+    private final double coercivity;      // A/m, recoil-line remanence (0: none)
+    private final double remanentLength;  // m, iron length that carries it
 
     private HoldingMagnet(Electromagnet magnet, double travel, double residual, double mass, double load, double rate, double preload,
                           double damping, double r20, double kelvin, Conductor conductor) {
+        this(magnet, travel, residual, mass, load, rate, preload, damping, r20, kelvin, conductor, 0, 0);
+    }
+
+    private HoldingMagnet(Electromagnet magnet, double travel, double residual, double mass, double load, double rate, double preload,
+                          double damping, double r20, double kelvin, Conductor conductor, double coercivity, double remanentLength) {
+        this.coercivity = coercivity;
+        this.remanentLength = remanentLength;
         this.magnet = magnet;
         this.travel = travel;
         this.residual = residual;
@@ -104,7 +115,23 @@ public final class HoldingMagnet implements Armature {
     }
 
     private HoldingMagnet copy(double residual, double mass, double load, double rate, double preload, double damping, double kelvin) {
-        return new HoldingMagnet(magnet, travel, residual, mass, load, rate, preload, damping, r20, kelvin, conductor).checked();
+        return new HoldingMagnet(magnet, travel, residual, mass, load, rate, preload, damping, r20, kelvin, conductor, coercivity,
+                remanentLength).checked();
+    }
+
+    /**
+     * Remanence by the recoil-line model, as for {@link Plunger#withCoercivity}: once magnetised, the
+     * iron acts as an MMF source Hc·l behind the iron path's own reluctance (its initial
+     * permeability taken as the recoil permeability; the load-line method of permanent-magnet
+     * circuits, e.g. Parker, Advances in Permanent Magnetism, Wiley 1990, ch. 4, from memory). Soft
+     * iron's Hc is of the order of 50 to 200 A/m (common practice). A static model: it gives the
+     * residual flux and pull and the drop-out current, and {@link #release} refuses a run when the
+     * residual pull alone holds the load. The transient run does not carry it.
+     */
+    public HoldingMagnet withCoercivity(Quantity coerciveField, Quantity ironLength) {
+        double hc = Require.nonNegative("coercive field", coerciveField, Dimension.CURRENT.div(Dimension.LENGTH));
+        double l = Require.length("iron length", ironLength);
+        return new HoldingMagnet(magnet, travel, residual, mass, load, rate, preload, damping, r20, kelvin, conductor, hc, l).checked();
     }
 
     /** Gap left between armature and poles when held (plating, a non-magnetic shim), in each of the magnet's gaps. */
@@ -241,15 +268,45 @@ public final class HoldingMagnet implements Armature {
         return Quantity.of(currentAt(magnet.turns() * releaseFlux(), 0), Dimension.CURRENT);
     }
 
+    /** Flux (Wb) left in the held magnet at zero current: Hc·l over the closed circuit's reluctance (recoil line). */
+    public Quantity residualFlux() {
+        return Quantity.of(coercivity * remanentLength / closedReluctance(), Dimension.FLUX);
+    }
+
+    /** Pull of the residual flux on the held armature at zero current, n·φr²/(2μ0A). */
+    public Quantity residualForce() {
+        return Quantity.of(pullAt(residualFlux().si()), Dimension.FORCE);
+    }
+
+    /** True when load and spring overcome the residual pull, so that the armature is released at zero current. */
+    public boolean releasesAtZeroCurrent() {
+        return residualForce().si() < load + preload;
+    }
+
+    /**
+     * Drop-out current on the recoil line: {@code (φ_release·R_closed − Hc·l)/N}; the
+     * {@link #holdingCurrent()} without remanence, negative when the residual flux alone holds the load.
+     */
+    public Quantity dropOutCurrent() {
+        return Quantity.of(holdingCurrent().si() - coercivity * remanentLength / magnet.turns(), Dimension.CURRENT);
+    }
+
     /**
      * Release times of a run of this magnet whose switch opened at {@code switchOff}: when the
      * armature starts to leave the poles and when it reaches its stop, both after switch-off (NaN
      * for what did not happen within the run). Fails when the current at switch-off was below the
-     * {@link #holdingCurrent()}: the magnet never held the load, so no release time exists.
+     * {@link #holdingCurrent()}: the magnet never held the load, so no release time exists; and,
+     * with {@link #withCoercivity}, when the residual pull alone holds the load. With a remanence
+     * that does release, the start is an early bound: the run leaves the remanence out, and the
+     * residual flux holds the armature down to the lower {@link #dropOutCurrent()}.
      */
     public Release release(Transient run, Quantity switchOff) {
         if (run == null) throw Require.fail("run is missing (null)");
         double off = Require.si("switch-off time", switchOff, Dimension.TIME);
+        if (!releasesAtZeroCurrent()) {
+            throw Require.fail("the residual flux holds the load: its pull (" + residualForce() + ") is not below the release force ("
+                    + releaseForce() + "), so the armature is not released after switch-off; a thicker residual gap releases it");
+        }
         double start = Double.NaN;
         for (Marker m : run.markers()) {
             if (m.label().equals("armature moves")) {
@@ -285,7 +342,8 @@ public final class HoldingMagnet implements Armature {
                 + magnet.poleArea() + ", L " + inductanceHeld() + " held, " + Quantity.of(resistanceOhms(), Dimension.RESISTANCE)
                 + ", release force " + releaseForce() + ", stroke " + Quantity.of(travel, Dimension.LENGTH)
                 + (residual > 0 ? ", residual gap " + Quantity.of(residual, Dimension.LENGTH) : "")
-                + ", mass " + Quantity.of(mass, Dimension.MASS);
+                + ", mass " + Quantity.of(mass, Dimension.MASS)
+                + (coercivity > 0 ? ", coercive field " + Quantity.of(coercivity, Dimension.CURRENT.div(Dimension.LENGTH)) : "");
     }
 
     @Override

@@ -103,6 +103,31 @@ class HoldingMagnetTest {
         assertTrue(e.getMessage().contains("never held"), e.getMessage());
     }
 
+    /**
+     * Recoil line (e.g. Parker, Advances in Permanent Magnetism, 1990, ch. 4, from memory): the iron is an MMF Hc·l
+     * behind the closed circuit's reluctance, φr = Hc·l/R_closed; the pull 2·φr²/(2μ0A) (Maxwell's stress). A magnet
+     * whose residual pull holds the load has no release time; a thicker residual gap (a shim) cures it.
+     */
+    @Test
+    void remanenceThatHoldsTheLoadHasNoReleaseTime() {
+        HoldingMagnet m = magnet().withCoercivity(org.ampturn.units.Quantity.of(150, "A/m"), mm(120));
+        double phi = 150 * 0.120 / closedReluctance(), pull = phi * phi / (MU0 * AREA);
+        assertEquals(phi, m.residualFlux().si(), 1e-12 * phi);
+        assertEquals(pull, m.residualForce().si(), 1e-9 * pull);
+        assertEquals(releaseCurrent() - 150 * 0.120 / TURNS, m.dropOutCurrent().si(), 1e-12);
+        HoldingMagnet sticky = m.withLoad(N(0.5 * pull));
+        assertFalse(sticky.releasesAtZeroCurrent());
+        assertTrue(sticky.dropOutCurrent().si() < 0);
+        Transient run = Drive.dc(V(24)).into(sticky).offAt(ms(50), Clamp.zener(V(33))).simulate(ms(60));
+        var e = assertThrows(IllegalArgumentException.class, () -> sticky.release(run, ms(50)));
+        assertTrue(e.getMessage().contains("residual flux holds the load"), e.getMessage());
+        // a 0.2 mm shim in each gap lowers the residual pull below the load
+        HoldingMagnet shimmed = sticky.withResidualGap(mm(0.2));
+        assertTrue(shimmed.releasesAtZeroCurrent(), shimmed.residualForce().toString());
+        Transient run2 = Drive.dc(V(24)).into(shimmed).offAt(ms(50), Clamp.zener(V(33))).simulate(ms(60));
+        assertTrue(shimmed.release(run2, ms(50)).start().si() > 0);
+    }
+
     @Test
     void badInputNamesTheValue() {
         Electromagnet em = Electromagnet.of(TURNS, PATH, mm2(150), 2);
