@@ -50,6 +50,11 @@ public final class Electromagnet {
     public int gaps() { return gaps; }
     public Quantity poleArea() { return Quantity.of(area, Dimension.AREA); }
 
+    /** The iron path without the gaps. */
+    public MagneticCircuit ironPath() { return iron; }
+
+    double areaSI() { return area; }
+
     /** The whole magnetic circuit with the armature at gap x. */
     public MagneticCircuit circuitAt(Quantity gap) {
         return circuitAt(Require.length("gap", gap));

@@ -24,10 +24,12 @@ import org.ampturn.units.Require;
  * so the current follows explicitly from λ and x, even with a saturating iron B-H curve. Field
  * energy {@code W = ½φ²·(Rg + Rp) + A·l_fe·∫H dB}; force at constant λ
  * {@code F = −∂W/∂x = B²·A/(2·μ0)} (Maxwell's pull on the working gap; Fitzgerald, Kingsley and
- * Umans, Electric Machinery, 6th ed., ch. 3). Valid while the gap is short against the pole's width:
- * fringing and leakage flux are left out (both raise the real inductance at large gaps), and so are
- * eddy currents, friction other than viscous damping, and rebound at the stops (impacts are
- * perfectly plastic). See lib-docs/plunger.md.
+ * Umans, Electric Machinery, 6th ed., ch. 3). By default the gap is ideal, valid while it is short
+ * against the pole's width; {@link #withFringing} adds the fringe at the gap and
+ * {@link #withFrameLeakage} the leakage from plunger to frame across the coil (both raise the
+ * inductance at large gaps; the force then follows from the gap permeance's slope). Friction other
+ * than viscous damping is left out; eddy currents and rebound at the stops are options. See
+ * lib-docs/plunger.md.
  *
  * <p>Resistance follows annealed copper, α20 = 0.00393 /K (IEC 60028:1925).
  */
@@ -54,15 +56,16 @@ public final class Plunger implements Armature {
 
     /** Eddy currents and stops: the parts of the model beyond the magnetic circuit and the spring. */
     private record Extras(Eddy eddy, double restitution, Pole pole, double fringe, MagneticCircuit path, Conductor conductor,
-                          double coercivity) {
-        static final Extras NONE = new Extras(null, 0, Pole.FLAT, Double.NaN, null, Conductor.COPPER, 0);
-        Extras eddy(Eddy e) { return new Extras(e, restitution, pole, fringe, path, conductor, coercivity); }
-        Extras restitution(double e) { return new Extras(eddy, e, pole, fringe, path, conductor, coercivity); }
-        Extras pole(Pole p) { return new Extras(eddy, restitution, p, fringe, path, conductor, coercivity); }
-        Extras fringe(double t) { return new Extras(eddy, restitution, pole, t, path, conductor, coercivity); }
-        Extras path(MagneticCircuit c) { return new Extras(eddy, restitution, pole, fringe, c, conductor, coercivity); }
-        Extras conductor(Conductor c) { return new Extras(eddy, restitution, pole, fringe, path, c, coercivity); }
-        Extras coercivity(double hc) { return new Extras(eddy, restitution, pole, fringe, path, conductor, hc); }
+                          double coercivity, double leakage) {
+        static final Extras NONE = new Extras(null, 0, Pole.FLAT, Double.NaN, null, Conductor.COPPER, 0, 0);
+        Extras eddy(Eddy e) { return new Extras(e, restitution, pole, fringe, path, conductor, coercivity, leakage); }
+        Extras restitution(double e) { return new Extras(eddy, e, pole, fringe, path, conductor, coercivity, leakage); }
+        Extras pole(Pole p) { return new Extras(eddy, restitution, p, fringe, path, conductor, coercivity, leakage); }
+        Extras fringe(double t) { return new Extras(eddy, restitution, pole, t, path, conductor, coercivity, leakage); }
+        Extras path(MagneticCircuit c) { return new Extras(eddy, restitution, pole, fringe, c, conductor, coercivity, leakage); }
+        Extras conductor(Conductor c) { return new Extras(eddy, restitution, pole, fringe, path, c, coercivity, leakage); }
+        Extras coercivity(double hc) { return new Extras(eddy, restitution, pole, fringe, path, conductor, hc, leakage); }
+        Extras leakage(double p) { return new Extras(eddy, restitution, pole, fringe, path, conductor, coercivity, p); }
     }
 
     /**
@@ -276,7 +279,37 @@ public final class Plunger implements Armature {
         return with(ex.fringe(t));
     }
 
-    /** Working-gap permeance (H) at axial gap g (m); {@code slope[0]} gets dP/dg when not null. */
+    /**
+     * Leakage between plunger and frame: the flux that crosses the coil space radially from the
+     * plunger (radius r1) to the frame's shell (inner radius r2) over the coil's {@code length}
+     * instead of the working gap. The coaxial-cylinder permeance 2π·μ0·l/ln(r2/r1)
+     * ({@link Permeance#coaxialAt}) sees the gap's MMF rising linearly along the coil, so one third
+     * of it counts for the stored energy and the flux linkage (Roters, Electromagnetic Devices,
+     * 1941, ch. 7, from memory); that third shunts the working gap. It does not change with the
+     * stroke, so it adds to the inductance (most at large gaps, where the gap's own permeance is
+     * small) and leaves the pull at a given gap MMF alone; at a given coil current the pull falls
+     * a little where the parasitic gap or the iron takes part of the MMF.
+     */
+    public Plunger withFrameLeakage(Quantity coilLength, Quantity plungerRadius, Quantity frameInnerRadius) {
+        double l = Require.length("coil length", coilLength);
+        double r1 = Require.length("plunger radius", plungerRadius), r2 = Require.length("frame inner radius", frameInnerRadius);
+        if (!(r2 > r1)) {
+            throw Require.fail("frame inner radius (" + frameInnerRadius + ") must be greater than the plunger radius (" + plungerRadius + ")");
+        }
+        return with(ex.leakage(Permeance.coaxialAt(l, r1, r2) / 3));
+    }
+
+    /** No plunger-to-frame leakage (the default). */
+    public Plunger withoutFrameLeakage() {
+        return with(ex.leakage(0));
+    }
+
+    /** The leakage permeance that shunts the working gap (H): a third of the coaxial one, zero without {@link #withFrameLeakage}. */
+    public Quantity frameLeakagePermeance() {
+        return Quantity.of(ex.leakage(), Dimension.INDUCTANCE);
+    }
+
+    /** Working-gap permeance (H) at axial gap g (m), with the frame leakage across it; {@code slope[0]} gets dP/dg when not null. */
     private double gapPermeance(double g, double[] slope) {
         Pole p = ex.pole();
         double a1 = area * p.innerShare(), a2 = area - a1;
@@ -295,15 +328,16 @@ public final class Plunger implements Armature {
             perm += Permeance.halfCylinderAt(perimeter) + Permeance.halfAnnulusAt(perimeter, edge, t);
             d += Permeance.halfAnnulusSlopeAt(perimeter, edge, t);
         }
+        perm += ex.leakage();
         if (slope != null) slope[0] = d;
         return perm;
     }
 
     private boolean idealGap() {
-        return ex.pole() == Pole.FLAT && Double.isNaN(ex.fringe());
+        return ex.pole() == Pole.FLAT && Double.isNaN(ex.fringe()) && ex.leakage() == 0;
     }
 
-    /** The working gap's permeance at a position: with fringing and the pole's shape. */
+    /** The working gap's permeance at a position: with fringing, the pole's shape and the frame leakage across it. */
     public Quantity gapPermeance(Quantity position) {
         double x = Require.between("position (m)", Require.distance("position", position), 0, stroke);
         double g = stroke + residual - x;
@@ -763,6 +797,7 @@ public final class Plunger implements Armature {
                 + (ex.pole() != Pole.FLAT ? ", " + ex.pole().kind() + " pole" + (ex.pole().kind().equals("conical")
                         ? " " + Require.show(ex.pole().angle()) + "°" : "") : "")
                 + (!Double.isNaN(ex.fringe()) ? ", fringing over " + Quantity.of(ex.fringe(), Dimension.LENGTH) : "")
+                + (ex.leakage() > 0 ? ", frame leakage " + frameLeakagePermeance() : "")
                 + (ex.coercivity() > 0 ? ", coercive field " + Quantity.of(ex.coercivity(), Dimension.CURRENT.div(Dimension.LENGTH)) : "")
                 + (ex.restitution() > 0 ? ", restitution " + String.format(java.util.Locale.ROOT, "%.3g", ex.restitution()) : "");
     }
