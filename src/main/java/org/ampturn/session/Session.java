@@ -188,7 +188,8 @@ public final class Session implements AutoCloseable {
      * twice. It is refused, and the old session goes on, when the session holds something that could
      * not move unchanged: a class or record declared in it (its statics and its instances belong to
      * the old engine), or a value made by the old engine (a lambda, or one inside an array, collection
-     * or map); and when it holds more than {@value #MAX_MOVED} declarations. After a renewal {@link #undoLast()} reaches back only to it. Under the lock.
+     * or map); and when it holds more than {@value #MAX_MOVED} declarations. Each entry keeps the new
+     * snippets of what it declared, so {@link #undoLast()} works as before. Under the lock.
      *
      * @return true when the session was renewed
      */
@@ -197,16 +198,19 @@ public final class Session implements AutoCloseable {
         // each moved declaration is compiled again (tens of ms): a session of very many names keeps its engine
         if (active.size() - preloaded.size() > MAX_MOVED) return false;
         List<String> replay = new ArrayList<>();
+        List<Snippet> replayed = new ArrayList<>(); // the old snippet of each line of replay
         Map<String, Object> carried = new java.util.HashMap<>();
         for (Snippet sn : active) {
             if (preloaded.contains(sn)) continue; // the session's own imports: added again below
             if (sn instanceof TypeDeclSnippet) return false;
             if (sn instanceof ImportSnippet || sn instanceof MethodSnippet) {
                 replay.add(sn.source());
+                replayed.add(sn);
             } else if (sn instanceof VarSnippet v) {
                 if (v.name().startsWith("$")) continue; // an expression's value, already shown
                 if (failedVariables.contains(v.name())) {
                     replay.add(v.typeName() + " " + v.name() + ";");
+                    replayed.add(sn);
                     continue;
                 }
                 boolean[] sessionMade = new boolean[1];
@@ -214,11 +218,13 @@ public final class Session implements AutoCloseable {
                 if (sessionMade[0]) return false;
                 carried.put(v.name(), o);
                 replay.add(v.typeName() + " " + v.name() + " = (" + v.typeName() + ") org.ampturn.session.Carry.take(\"" + v.name() + "\");");
+                replayed.add(sn);
             }
         }
         SessionEngine freshEngine = new SessionEngine();
         JShell fresh = newShell(freshEngine);
         Set<Snippet> freshImports = new HashSet<>();
+        Map<Snippet, List<Snippet>> moved = new java.util.HashMap<>(); // old snippet → its new ones
         boolean ok = true;
         try {
             for (String line : imports) {
@@ -229,7 +235,9 @@ public final class Session implements AutoCloseable {
             Carry.put(carried);
             for (int i = 0; ok && i < replay.size(); i++) {
                 for (SnippetEvent e : fresh.eval(replay.get(i))) {
-                    if (e.causeSnippet() == null && (!e.status().isDefined() || e.exception() != null)) ok = false;
+                    if (e.causeSnippet() != null) continue;
+                    if (!e.status().isDefined() || e.exception() != null) ok = false;
+                    moved.computeIfAbsent(replayed.get(i), k -> new ArrayList<>()).add(e.snippet());
                 }
             }
         } finally {
@@ -243,7 +251,15 @@ public final class Session implements AutoCloseable {
         engine = freshEngine;
         preloaded.clear();
         preloaded.addAll(freshImports);
+        // each entry now holds the new snippets of what it declared, so #undo still takes it back
+        List<List<Snippet>> renewed = new ArrayList<>();
+        for (List<Snippet> entry : entries) {
+            List<Snippet> now = new ArrayList<>();
+            for (Snippet sn : entry) now.addAll(moved.getOrDefault(sn, List.of()));
+            renewed.add(now);
+        }
         entries.clear();
+        entries.addAll(renewed);
         renewals++;
         old.close();
         return true;

@@ -50,6 +50,14 @@ class SessionRenewalTest {
         assertEquals(List.of("  = 5.000"), eval("f(1)"), "the method reads the variable of the renewed session");
         assertEquals(List.of("  = 8"), eval("count + 1"));
         assertTrue(eval("s.inductance()").get(0).startsWith("  = "), "a library object carried over");
+        // undo still takes back a declaration made before the renewal
+        eval("var late = mm(9);");
+        for (int i = 0; i < 36; i++) eval("gap.times(" + i + ")");
+        assertTrue(session.renewals() >= 2, "renewed again: " + session.renewals());
+        for (int i = 0; i < 36; i++) assertTrue(session.undoLast());
+        assertTrue(session.undoLast(), "the entry that declared late");
+        assertTrue(eval("late").get(0).contains("cannot find symbol"), "late is gone: " + eval("late"));
+        assertEquals(List.of("  = 4.000 mm"), eval("gap.times(2)"));
     }
 
     @Test
