@@ -62,8 +62,8 @@ public final class Session implements AutoCloseable {
     /** Completion candidates: each is the text that replaces {@code code[anchor, cursor)}. */
     public record Completion(int anchor, List<String> candidates) {}
 
-    private final JShell shell;
-    private final SourceCodeAnalysis analysis;
+    private volatile JShell shell;
+    private volatile SourceCodeAnalysis analysis;
     private final SessionImports library;
     /** Import lines that went in (the facade's, then library packages as entries name them). */
     private final List<String> imports = new ArrayList<>();
@@ -79,7 +79,12 @@ public final class Session implements AutoCloseable {
     private volatile boolean stopRequested;
     private volatile long generation;
 
-    private final SessionEngine engine;
+    private volatile SessionEngine engine;
+    /** Past this many snippets the session renews itself (see {@link #renew()}). */
+    private int renewAt = RENEW_AT;
+    /** The snippet count at which renewal was last tried. */
+    private long renewTriedAt;
+    private int renewals;
 
     private Session(JShell shell, SessionImports library, SessionEngine engine) {
         this.engine = engine;
@@ -126,17 +131,138 @@ public final class Session implements AutoCloseable {
     private static Session build() {
         CompilerNoise.install();
         SessionEngine engine = new SessionEngine();
+        Session s = new Session(newShell(engine), SessionImports.ofLibrary(), engine);
+        synchronized (s.lock) {
+            s.addImport(SessionImports.FACADE);
+        }
+        return s;
+    }
+
+    private static JShell newShell(SessionEngine engine) {
         JShell.Builder builder = JShell.builder()
                 .executionEngine(engine, Map.of())
                 .out(System.out)
                 .err(System.err);
         List<File> classPath = SessionClassPath.forEntries();
         if (!classPath.isEmpty()) builder.fileManager(fm -> SessionClassPath.apply(fm, classPath));
-        Session s = new Session(builder.build(), SessionImports.ofLibrary(), engine);
-        synchronized (s.lock) {
-            s.addImport(SessionImports.FACADE);
+        return builder.build();
+    }
+
+    /** Snippets after which a session renews itself: past about a thousand, JShell's cost per entry grows with their number. */
+    static final int RENEW_AT = 1000;
+
+    /** The most declarations a renewal moves (each is compiled again, so a renewal pauses for a few seconds at most). */
+    static final int MAX_MOVED = 150;
+
+    /** Another renewal threshold (tests). */
+    void renewAt(int snippets) {
+        synchronized (lock) {
+            renewAt = snippets;
         }
-        return s;
+    }
+
+    /** How many times the session has renewed itself (tests). */
+    int renewals() {
+        synchronized (lock) {
+            return renewals;
+        }
+    }
+
+    /** Renews the session when it holds enough snippets, and retries a refused renewal only after half as many again. Under the lock. */
+    private void maybeRenew() {
+        long count = shell.snippets().count();
+        if (count < renewAt || count < renewTriedAt + renewAt / 2) return;
+        renewTriedAt = count;
+        try {
+            if (renew()) renewTriedAt = 0;
+        } catch (RuntimeException | LinkageError e) {
+            Carry.clear(); // the old session goes on as it was
+        }
+    }
+
+    /**
+     * Moves the session's state into a new JShell, because JShell's cost per entry grows with the
+     * number of snippets it has ever held (javac lists the class of every earlier snippet at each
+     * compile). The new one gets the imports, the methods (their source again) and every variable
+     * with the very object it held, declared with its type and read from {@link Carry}. Nothing runs
+     * twice. It is refused, and the old session goes on, when the session holds something that could
+     * not move unchanged: a class or record declared in it (its statics and its instances belong to
+     * the old engine), or a value made by the old engine (a lambda, or one inside an array, collection
+     * or map); and when it holds more than {@value #MAX_MOVED} declarations. Each entry keeps the new
+     * snippets of what it declared, so {@link #undoLast()} works as before. Under the lock.
+     *
+     * @return true when the session was renewed
+     */
+    private boolean renew() {
+        List<Snippet> active = shell.snippets().filter(sn -> shell.status(sn).isActive()).collect(Collectors.toList());
+        // each moved declaration is compiled again (tens of ms): a session of very many names keeps its engine
+        if (active.size() - preloaded.size() > MAX_MOVED) return false;
+        List<String> replay = new ArrayList<>();
+        List<Snippet> replayed = new ArrayList<>(); // the old snippet of each line of replay
+        Map<String, Object> carried = new java.util.HashMap<>();
+        for (Snippet sn : active) {
+            if (preloaded.contains(sn)) continue; // the session's own imports: added again below
+            if (sn instanceof TypeDeclSnippet) return false;
+            if (sn instanceof ImportSnippet || sn instanceof MethodSnippet) {
+                replay.add(sn.source());
+                replayed.add(sn);
+            } else if (sn instanceof VarSnippet v) {
+                if (v.name().startsWith("$")) continue; // an expression's value, already shown
+                if (failedVariables.contains(v.name())) {
+                    replay.add(v.typeName() + " " + v.name() + ";");
+                    replayed.add(sn);
+                    continue;
+                }
+                boolean[] sessionMade = new boolean[1];
+                Object o = engine.objectOf(shell, v, sessionMade);
+                if (sessionMade[0]) return false;
+                carried.put(v.name(), o);
+                replay.add(v.typeName() + " " + v.name() + " = (" + v.typeName() + ") org.ampturn.session.Carry.take(\"" + v.name() + "\");");
+                replayed.add(sn);
+            }
+        }
+        SessionEngine freshEngine = new SessionEngine();
+        JShell fresh = newShell(freshEngine);
+        Set<Snippet> freshImports = new HashSet<>();
+        Map<Snippet, List<Snippet>> moved = new java.util.HashMap<>(); // old snippet → its new ones
+        boolean ok = true;
+        try {
+            for (String line : imports) {
+                List<SnippetEvent> ev = fresh.eval(line);
+                if (ev.isEmpty() || ev.get(0).status() != Snippet.Status.VALID) { ok = false; break; }
+                freshImports.add(ev.get(0).snippet());
+            }
+            Carry.put(carried);
+            for (int i = 0; ok && i < replay.size(); i++) {
+                for (SnippetEvent e : fresh.eval(replay.get(i))) {
+                    if (e.causeSnippet() != null) continue;
+                    if (!e.status().isDefined() || e.exception() != null) ok = false;
+                    moved.computeIfAbsent(replayed.get(i), k -> new ArrayList<>()).add(e.snippet());
+                }
+            }
+        } finally {
+            Carry.clear();
+            if (!ok) fresh.close();
+        }
+        if (!ok) return false;
+        JShell old = shell;
+        shell = fresh;
+        analysis = fresh.sourceCodeAnalysis();
+        engine = freshEngine;
+        preloaded.clear();
+        preloaded.addAll(freshImports);
+        // each entry now holds the new snippets of what it declared, so #undo still takes it back
+        List<List<Snippet>> renewed = new ArrayList<>();
+        for (List<Snippet> entry : entries) {
+            List<Snippet> now = new ArrayList<>();
+            for (Snippet sn : entry) now.addAll(moved.getOrDefault(sn, List.of()));
+            renewed.add(now);
+        }
+        entries.clear();
+        entries.addAll(renewed);
+        renewals++;
+        old.close();
+        return true;
     }
 
     /**
@@ -234,6 +360,7 @@ public final class Session implements AutoCloseable {
 
     private Outcome evalGuarded(String entrySource) {
         {
+            maybeRenew();
             importFor(entrySource);
             List<Snippet> added = new ArrayList<>();
             List<Result> results = new ArrayList<>();

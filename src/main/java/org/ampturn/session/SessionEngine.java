@@ -58,9 +58,61 @@ final class SessionEngine implements ExecutionControlProvider {
         return g == null ? null : g.value(variable);
     }
 
+    /**
+     * The object a session variable holds, read from the class the engine keeps it in; null when it
+     * cannot be read. {@code held[0]} says whether the object's class was made by the session itself
+     * (a lambda or an instance of a class an entry declared), which a renewed session could not use.
+     */
+    Object objectOf(jdk.jshell.JShell shell, jdk.jshell.VarSnippet v, boolean[] held) {
+        Guarded g = engine;
+        if (g == null) return null;
+        shell.varValue(v); // the engine learns the class that holds the variable
+        return g.held(v.name(), held);
+    }
+
     /** The local engine with the exit guard applied to every class it loads. */
     static final class Guarded extends LocalExecutionControl {
         private volatile String lastClass;
+        private volatile String lastVarClass;
+
+        @Override
+        public String varValue(String className, String varName) throws RunException, EngineTerminationException, InternalException {
+            lastVarClass = className;
+            return super.varValue(className, varName);
+        }
+
+        /** The object in {@code variable} of the class the last {@link #varValue} read from. */
+        Object held(String variable, boolean[] sessionMade) {
+            String c = lastVarClass;
+            if (c == null) throw new IllegalStateException("no variable was read");
+            try {
+                Class<?> k = findClass(c);
+                java.lang.reflect.Field f = k.getDeclaredField(variable);
+                f.setAccessible(true);
+                Object o = f.get(null);
+                sessionMade[0] = madeBy(o, k.getClassLoader());
+                return o;
+            } catch (ReflectiveOperationException e) {
+                throw new IllegalStateException(e);
+            }
+        }
+
+        /** True when the object, or an element of an array, collection or map it is, has a class the session's loader made. */
+        private static boolean madeBy(Object o, ClassLoader session) {
+            if (o == null) return false;
+            if (o.getClass().getClassLoader() == session) return true;
+            if (o instanceof Object[] a) {
+                for (Object e : a) if (e != null && e.getClass().getClassLoader() == session) return true;
+            } else if (o instanceof java.util.Collection<?> c) {
+                for (Object e : c) if (e != null && e.getClass().getClassLoader() == session) return true;
+            } else if (o instanceof Map<?, ?> m) {
+                for (Map.Entry<?, ?> e : m.entrySet()) {
+                    if (e.getKey() != null && e.getKey().getClass().getClassLoader() == session) return true;
+                    if (e.getValue() != null && e.getValue().getClass().getClassLoader() == session) return true;
+                }
+            }
+            return false;
+        }
 
         @Override
         public String invoke(String className, String methodName) throws RunException, EngineTerminationException, InternalException {
