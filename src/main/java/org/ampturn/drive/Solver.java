@@ -49,7 +49,7 @@ final class Solver {
     final Load load;
     final Clamp clamp;
     final double vs, rs, ron, rc, v0, rcl, cap, tEnd, offAt;
-    final boolean snub, acrossCoil, moves, closedForm;
+    final boolean snub, acrossCoil, moves, closedForm, snubberClosedForm;
     final double finalCurrent;
     /** A current level whose first rising crossing is wanted (NaN: none), and the time it is reached. */
     final double probe;
@@ -129,6 +129,7 @@ final class Solver {
         this.ladRate = new double[loops];
         this.restitution = load.restitution();
         this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0;
+        this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0;
         double rTot = rs + ron + rc;
         this.finalCurrent = rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
         validate();
@@ -723,8 +724,10 @@ final class Solver {
         switchOn = true;
         if (drive.scheme == Drive.Scheme.PWM) startCycle();
         if (!Double.isNaN(offAt) && offAt == 0) scheduledEdge();
-        Stepper stepper = closedForm ? new ClosedFormStepper(this) : new OdeStepper(this, circuit.relTol);
+        Stepper stepper = closedForm ? new ClosedFormStepper(this)
+                : snubberClosedForm ? new SnubberStepper(this) : new OdeStepper(this, circuit.relTol);
         notes.add(closedForm ? "solved in closed form (linear coil, piecewise-linear circuit)"
+                : snubberClosedForm ? "solved in closed form (linear coil and RC snubber: matrix exponential of each linear piece)"
                 : "solved with " + ((OdeStepper) stepper).describe());
         int stuck = 0;
         long segments = 0;
