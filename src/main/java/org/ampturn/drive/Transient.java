@@ -35,7 +35,7 @@ public final class Transient {
     private final List<String> notes;
     private final List<String> cautions;
     private final double duration;
-    private final double acRms, acPeak;
+    private final double acRms, acPeak, coreLoss;
 
     private Transient(Solver sv) {
         Recorder r = sv.rec;
@@ -102,6 +102,12 @@ public final class Transient {
         if (sv.sine && !sv.inLastCycle) nt.add("the run is shorter than one cycle of the supply: no last-cycle RMS and peak current");
         if (sv.sine && sv.inLastCycle && !(rcoil > 0)) nt.add("the coil has no resistance: the last cycle's RMS current is not reported");
         if (sv.sine) nt.add("the last cycle's peak current is the largest of the samples and solver steps in it");
+
+        coreLoss = sv.circuit.coil != null ? CoreLossOfRun.energy(sv.circuit.coil, r.time, r.lambda) : Double.NaN;
+        if (!Double.isNaN(coreLoss)) {
+            nt.add("core loss " + Quantity.of(coreLoss, Dimension.ENERGY) + " by the iGSE of the run's flux density B = λ/(N·A) "
+                    + "(from the output samples); beside the energy ledger, not in it: the coil model has no core-loss path");
+        }
 
         List<String> cs = new ArrayList<>();
         if (sv.sine && sv.vs > Drive.MAINS_CAUTION_RMS) {
@@ -202,6 +208,14 @@ public final class Transient {
      * the coil's i²·R (NaN for other drives, a run shorter than a cycle, or a coil without resistance).
      */
     public Quantity lastCycleRmsCurrent() { return Quantity.of(acRms, Dimension.CURRENT); }
+
+    /**
+     * Core-loss energy of the run (J): the iGSE of each core piece's flux density B(t) = λ(t)/(N·A)
+     * over the output samples, minor loops included, times the piece's volume, for a {@code WoundCoil}
+     * whose core material has a {@code CoreLoss}; NaN otherwise. Reported beside the energy ledger, not
+     * in it (the coil model has no core-loss path, so the ledger balances without it).
+     */
+    public Quantity coreLossEnergy() { return Quantity.of(coreLoss, Dimension.ENERGY); }
 
     /** Sine supply: the largest |i| over the last full cycle of the run, from its samples and solver steps (NaN otherwise). */
     public Quantity lastCyclePeakCurrent() { return Quantity.of(acPeak, Dimension.CURRENT); }
