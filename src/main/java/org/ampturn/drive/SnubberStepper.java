@@ -282,7 +282,7 @@ final class SnubberStepper implements Solver.Stepper {
         // the output samples in the segment
         double[] y0 = y.clone();
         int kk = sv.nextSample();
-        if (kk < sv.n && sv.sampleTime(kk) < tStop) { // a sample at the stop is taken after the switching there
+        if (kk < sv.n && sv.sampleTime(kk) <= tStop) { // a sample at the stop holds the state before the switching there
             double s = sv.sampleTime(kk) - t0;
             double[] p = at(p0, s);
             double[][] step = null;
@@ -290,7 +290,7 @@ final class SnubberStepper implements Solver.Stepper {
                 toState(p, y0, tmp);
                 sv.record(kk, tmp);
                 kk++;
-                if (kk >= sv.n || sv.sampleTime(kk) >= tStop) break;
+                if (kk >= sv.n || sv.sampleTime(kk) > tStop) break;
                 double sk = sv.sampleTime(kk) - t0;
                 if (kk == sv.n - 1) {
                     p = at(p0, sk);
