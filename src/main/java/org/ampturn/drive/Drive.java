@@ -18,7 +18,7 @@ import org.ampturn.units.Require;
  */
 public final class Drive {
     /** How the switch is operated. */
-    public enum Scheme { DC, PWM, PEAK_AND_HOLD }
+    public enum Scheme { DC, PWM, PEAK_AND_HOLD, SINE }
 
     /** How peak-and-hold regulates the hold current. */
     public enum Regulation { HYSTERETIC, PWM }
@@ -50,9 +50,10 @@ public final class Drive {
     final double band;        // hysteresis band, peak to peak
     final Regulation regulation;
     final double peakSeconds; // shortest peak phase; NaN: the hold begins when the current reaches peakAmps
+    final double phaseDegrees; // sine supply: phase of the voltage at switch-on, v(0) = √2·V·sin(phase)
 
     private Drive(Scheme scheme, double volts, double sourceOhms, double switchOhms, double frequency, double duty,
-                  double peakAmps, double holdAmps, double band, Regulation regulation, double peakSeconds) {
+                  double peakAmps, double holdAmps, double band, Regulation regulation, double peakSeconds, double phaseDegrees) {
         this.scheme = scheme;
         this.volts = volts;
         this.sourceOhms = sourceOhms;
@@ -64,12 +65,13 @@ public final class Drive {
         this.band = band;
         this.regulation = regulation;
         this.peakSeconds = peakSeconds;
+        this.phaseDegrees = phaseDegrees;
     }
 
     /** A DC supply switched on at t = 0. */
     public static Drive dc(Quantity supply) {
         double v = Require.inRange("supply voltage", positive(supply), Dimension.VOLTAGE, 1e-6, MAX_VOLTS);
-        return new Drive(Scheme.DC, v, 0, 0, 0, 1, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN);
+        return new Drive(Scheme.DC, v, 0, 0, 0, 1, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN, 0);
     }
 
     /** PWM: the switch is on for {@code duty / frequency} at the start of every period, from t = 0. */
@@ -77,7 +79,7 @@ public final class Drive {
         double v = Require.inRange("supply voltage", positive(supply), Dimension.VOLTAGE, 1e-6, MAX_VOLTS);
         double f = Require.inRange("PWM frequency", frequency, Dimension.FREQUENCY, 1e-3, MAX_HZ);
         Require.between("PWM duty", duty, 1e-4, 1);
-        return new Drive(Scheme.PWM, v, 0, 0, f, duty, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN);
+        return new Drive(Scheme.PWM, v, 0, 0, f, duty, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN, 0);
     }
 
     /**
@@ -90,19 +92,55 @@ public final class Drive {
         double ip = Require.inRange("pull-in current", pullIn, Dimension.CURRENT, 1e-9, MAX_AMPS);
         double ih = Require.inRange("hold current", hold, Dimension.CURRENT, 1e-9, MAX_AMPS);
         if (!(ih < ip)) throw Require.fail("hold current (" + hold + ") must be below the pull-in current (" + pullIn + ")");
-        return new Drive(Scheme.PEAK_AND_HOLD, v, 0, 0, 0, 1, ip, ih, 0.2 * ih, Regulation.HYSTERETIC, Double.NaN);
+        return new Drive(Scheme.PEAK_AND_HOLD, v, 0, 0, 0, 1, ip, ih, 0.2 * ih, Regulation.HYSTERETIC, Double.NaN, 0);
+    }
+
+    /** Highest mains-type frequency accepted for a sine supply (Hz). */
+    public static final double MAX_SINE_HZ = 1e6;
+
+    /** RMS voltage above which a sine supply's results carry a mains caution (common practice, from memory: the usual low-voltage limit). */
+    public static final double MAINS_CAUTION_RMS = 50;
+
+    /**
+     * A sine supply {@code v(t) = √2·V·sin(2π·f·t + φ)} switched on at t = 0 at a zero crossing
+     * (φ = 0°, the worst DC offset for a mostly inductive coil) unless {@link #withSwitchOnPhase}
+     * says otherwise. The switch stays closed; the run shows the transient to the periodic steady
+     * state and reports the RMS and peak current of its last cycle.
+     */
+    public static Drive sine(Quantity rmsVoltage, Quantity frequency) {
+        double v = Require.inRange("RMS supply voltage", positive(rmsVoltage), Dimension.VOLTAGE, 1e-6, MAX_VOLTS);
+        double f = Require.inRange("supply frequency", frequency, Dimension.FREQUENCY, 1e-3, MAX_SINE_HZ);
+        return new Drive(Scheme.SINE, v, 0, 0, f, 1, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN, 0);
+    }
+
+    /** A sine supply switched on at the given phase of its voltage, in degrees: 0 a rising zero crossing, 90 the positive peak. */
+    public Drive withSwitchOnPhase(double degrees) {
+        if (scheme != Scheme.SINE) throw new IllegalStateException("withSwitchOnPhase applies to a sine drive, not to a " + this);
+        if (!(degrees >= 0 && degrees < 360)) {
+            throw Require.fail("switch-on phase must be from 0° up to (not including) 360°, got " + degrees + "°");
+        }
+        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds, degrees);
+    }
+
+    /** The switch-on phase of a sine supply (degrees). */
+    public double switchOnPhase() { return phaseDegrees; }
+
+    /** Supply voltage at time t (s): constant for DC schemes, the sine for a sine supply. */
+    double voltsAt(double t) {
+        if (scheme != Scheme.SINE) return volts;
+        return Math.sqrt(2) * volts * Math.sin(2 * Math.PI * frequency * t + Math.toRadians(phaseDegrees));
     }
 
     /** The same drive with a source (supply and wiring) resistance. */
     public Drive withSourceResistance(Quantity r) {
         double rs = Require.inRange("source resistance", r, Dimension.RESISTANCE, 0, MAX_OHMS);
-        return new Drive(scheme, volts, rs, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds);
+        return new Drive(scheme, volts, rs, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds, phaseDegrees);
     }
 
     /** The same drive with a switch of the given on-resistance. */
     public Drive withSwitchResistance(Quantity r) {
         double ron = Require.inRange("switch on-resistance", r, Dimension.RESISTANCE, 0, MAX_OHMS);
-        return new Drive(scheme, volts, sourceOhms, ron, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds);
+        return new Drive(scheme, volts, sourceOhms, ron, frequency, duty, peakAmps, holdAmps, band, regulation, peakSeconds, phaseDegrees);
     }
 
     /** Peak-and-hold with hysteretic hold regulation: on below hold − band/2, off above hold + band/2. */
@@ -117,7 +155,7 @@ public final class Drive {
             throw Require.fail("hysteresis band (" + band + ") must be below twice the hold current ("
                     + Quantity.of(2 * holdAmps, Dimension.CURRENT) + ")");
         }
-        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, b, Regulation.HYSTERETIC, peakSeconds);
+        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, b, Regulation.HYSTERETIC, peakSeconds, phaseDegrees);
     }
 
     /**
@@ -127,7 +165,7 @@ public final class Drive {
     public Drive withHoldPwm(Quantity frequency) {
         requireScheme(Scheme.PEAK_AND_HOLD, "withHoldPwm");
         double f = Require.inRange("hold PWM frequency", frequency, Dimension.FREQUENCY, 1e-3, MAX_HZ);
-        return new Drive(scheme, volts, sourceOhms, switchOhms, f, duty, peakAmps, holdAmps, band, Regulation.PWM, peakSeconds);
+        return new Drive(scheme, volts, sourceOhms, switchOhms, f, duty, peakAmps, holdAmps, band, Regulation.PWM, peakSeconds, phaseDegrees);
     }
 
     /**
@@ -141,7 +179,7 @@ public final class Drive {
     public Drive withPeakTime(Quantity peakTime) {
         requireScheme(Scheme.PEAK_AND_HOLD, "withPeakTime");
         double tp = Require.inRange("peak time", peakTime, Dimension.TIME, 1e-12, Circuit.MAX_DURATION);
-        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, tp);
+        return new Drive(scheme, volts, sourceOhms, switchOhms, frequency, duty, peakAmps, holdAmps, band, regulation, tp, phaseDegrees);
     }
 
     private void requireScheme(Scheme s, String what) {
@@ -173,6 +211,8 @@ public final class Drive {
         String s;
         switch (scheme) {
             case DC: s = "DC drive " + supply(); break;
+            case SINE: s = "sine drive " + supply() + " RMS, " + Quantity.of(frequency, Dimension.FREQUENCY)
+                    + String.format(java.util.Locale.ROOT, ", switched on at %.4g°", phaseDegrees); break;
             case PWM: s = "PWM drive " + supply() + ", " + Quantity.of(frequency, Dimension.FREQUENCY)
                     + String.format(java.util.Locale.ROOT, ", duty %.3g", duty); break;
             default:

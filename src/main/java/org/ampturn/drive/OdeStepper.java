@@ -89,6 +89,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         // the small-signal L/R: with longer steps an explicit method sits on its stability limit and its
         // dense output wanders around V/R (above it too, which a first-order circuit cannot do)
         double maxStep = Math.min(sv.tEnd, MAX_STEP_PER_TIME_CONSTANT * tauInc);
+        if (sv.sine) maxStep = Math.min(maxStep, 0.125 / sv.drive.frequency); // an eighth of the supply's period
         this.integrator = new DormandPrince853Integrator(minStep, Math.max(maxStep, 1e3 * minStep), abs, rel);
     }
 

@@ -49,7 +49,16 @@ final class Solver {
     final Load load;
     final Clamp clamp;
     final double vs, rs, ron, rc, v0, rcl, cap, tEnd, offAt;
-    final boolean snub, acrossCoil, moves, closedForm;
+    final boolean snub, acrossCoil, moves, closedForm, snubberClosedForm;
+    /** A sine supply: the supply voltage follows the time of the state being evaluated. */
+    final boolean sine;
+    /** Time of the state eval() is given (the supply of a sine drive depends on it). */
+    double evalT;
+    /** Sine supply: start of the last full cycle of the run (NaN if the run is shorter than a cycle), the coil loss and
+     *  charge there, and the largest |i| seen since. */
+    final double lastCycleFrom;
+    double lastCycleECoil = Double.NaN, lastCyclePeak = Double.NaN;
+    boolean inLastCycle;
     final double finalCurrent;
     /** A current level whose first rising crossing is wanted (NaN: none), and the time it is reached. */
     final double probe;
@@ -128,9 +137,14 @@ final class Solver {
         this.y = new double[dim];
         this.ladRate = new double[loops];
         this.restitution = load.restitution();
-        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0;
+        this.sine = drive.scheme == Drive.Scheme.SINE;
+        this.lastCycleFrom = sine && tEnd * drive.frequency >= 1 ? tEnd - 1 / drive.frequency : Double.NaN;
+        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0 && !sine;
+        this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0;
         double rTot = rs + ron + rc;
-        this.finalCurrent = rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
+        // a sine supply: the scale of the current is the inrush bound, twice the peak of the steady current of the small-signal L
+        this.finalCurrent = sine ? 2 * Math.sqrt(2) * vs / Math.hypot(rTot, 2 * Math.PI * drive.frequency * load.inductance())
+                : rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
         validate();
         // the recorder's arrays and the transient's copies of them
         org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0)));
@@ -152,7 +166,11 @@ final class Solver {
             throw Require.fail("off time (" + sec(offAt) + ") is after the end of the run (" + sec(tEnd)
                     + "); simulate for longer or switch off earlier");
         }
-        boolean opens = !Double.isNaN(offAt) || drive.scheme != Drive.Scheme.DC;
+        if (drive.scheme == Drive.Scheme.SINE && (clamp != null || !Double.isNaN(offAt) || moves || loops > 0)) {
+            throw Require.fail("a sine supply drives a fixed coil with the switch closed for the whole run: "
+                    + "switching it off, clamps, moving armatures and eddy ladders are not modelled with it");
+        }
+        boolean opens = !Double.isNaN(offAt) || (drive.scheme != Drive.Scheme.DC && drive.scheme != Drive.Scheme.SINE);
         if (opens && clamp == null) {
             throw Require.fail("the switch opens during this run but no clamp was given: add .clamp(Clamp.diode()), "
                     + "or Clamp.none(V(..)) to let the switch avalanche");
@@ -207,9 +225,10 @@ final class Solver {
                     pdrv = i * i * rs + (ron > 0 ? node * node / ron : 0);
                     pcl = ic * ic * rcl;
                 } else {
+                    double vsup = sine ? drive.voltsAt(evalT) : vs;
                     vsw = i * ron;
-                    dl = vs - i * (rs + ron + rc);
-                    psup = vs * i;
+                    dl = vsup - i * (rs + ron + rc);
+                    psup = vsup * i;
                     pdrv = i * i * (rs + ron);
                 }
                 break;
@@ -315,6 +334,7 @@ final class Solver {
 
     /** dy/dt in the current mode. */
     void derivatives(double[] s, double[] d) {
+        evalT = t;
         eval(elec, mech, s, scratch);
         d[LAM] = scratch[O_DLAM];
         d[VC] = scratch[O_DVC];
@@ -376,6 +396,7 @@ final class Solver {
     void record(int k, double[] s) {
         if (k != nextSample) throw new IllegalStateException("sample " + k + " out of order, expected " + nextSample);
         double tk = sampleTime(k);
+        evalT = tk;
         eval(elec, mech, s, scratch);
         double stored = storedAt(s);
         rec.put(k, tk, s, scratch, stored, rc);
@@ -384,6 +405,7 @@ final class Solver {
     }
 
     void observe(double tt, double[] s) {
+        evalT = tt;
         eval(elec, mech, s, scratch);
         observe(tt, s, scratch, Double.NaN);
     }
@@ -396,6 +418,7 @@ final class Solver {
                     + q(s[LAM], Dimension.FLUX) + "): the solution diverges (check the resistance and the core's saturation)");
         }
         if (vsw > peakSw) { peakSw = vsw; peakSwT = tt; }
+        if (inLastCycle) lastCyclePeak = Math.max(lastCyclePeak, Math.abs(i));
         if (i > peakI) { peakI = i; peakIT = tt; }
         if (stored > peakStored) { peakStored = stored; peakStoredT = tt; }
         if (cycleOpen) {
@@ -435,6 +458,7 @@ final class Solver {
         double next = tEnd;
         if (!Double.isNaN(offAt) && offAt > t && !finalOff) next = Math.min(next, offAt);
         if (finalOff) return next;
+        if (sine && !inLastCycle && lastCycleFrom > t) next = Math.min(next, lastCycleFrom);
         if (timedPeak() && drive.peakSeconds > t) next = Math.min(next, drive.peakSeconds);
         double f = drive.frequency;
         if (drive.scheme == Drive.Scheme.PWM || (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && (holdPhase || peakLimited)
@@ -456,6 +480,11 @@ final class Solver {
     }
 
     private void scheduledEdge() {
+        if (sine && !inLastCycle && Math.abs(t - lastCycleFrom) <= 1e-12 * Math.max(tEnd, 1e-300)) {
+            inLastCycle = true;
+            lastCycleECoil = y[ECOIL];
+            lastCyclePeak = Math.abs(currentNow());
+        }
         if (t >= tEnd) return;
         if (!finalOff && !Double.isNaN(offAt) && Math.abs(t - offAt) <= 1e-12 * Math.max(tEnd, 1e-300)) {
             finalOff = true;
@@ -542,7 +571,7 @@ final class Solver {
                 ev.add(new Ev(Ev.Kind.CURRENT, drive.holdAmps + drive.band / 2, 1, Ev.Act.HOLD_HIGH));
             }
             if (ph && holdPhase && drive.regulation == Drive.Regulation.PWM) ev.add(new Ev(Ev.Kind.CURRENT, drive.holdAmps, 1, Ev.Act.HOLD_PWM_OFF));
-            if (firstOn && Double.isFinite(finalCurrent)) {
+            if (firstOn && Double.isFinite(finalCurrent) && !sine) {
                 if (Double.isNaN(t63)) ev.add(new Ev(Ev.Kind.CURRENT, (1 - Math.exp(-1)) * finalCurrent, 1, Ev.Act.REC_63));
                 else if (Double.isNaN(t90)) ev.add(new Ev(Ev.Kind.CURRENT, 0.9 * finalCurrent, 1, Ev.Act.REC_90));
                 else if (Double.isNaN(t99)) ev.add(new Ev(Ev.Kind.CURRENT, 0.99 * finalCurrent, 1, Ev.Act.REC_99));
@@ -723,8 +752,10 @@ final class Solver {
         switchOn = true;
         if (drive.scheme == Drive.Scheme.PWM) startCycle();
         if (!Double.isNaN(offAt) && offAt == 0) scheduledEdge();
-        Stepper stepper = closedForm ? new ClosedFormStepper(this) : new OdeStepper(this, circuit.relTol);
+        Stepper stepper = closedForm ? new ClosedFormStepper(this)
+                : snubberClosedForm ? new SnubberStepper(this) : new OdeStepper(this, circuit.relTol);
         notes.add(closedForm ? "solved in closed form (linear coil, piecewise-linear circuit)"
+                : snubberClosedForm ? "solved in closed form (linear coil and RC snubber: matrix exponential of each linear piece)"
                 : "solved with " + ((OdeStepper) stepper).describe());
         int stuck = 0;
         long segments = 0;

@@ -35,6 +35,7 @@ public final class Transient {
     private final List<String> notes;
     private final List<String> cautions;
     private final double duration;
+    private final double acRms, acPeak, coreLoss;
 
     private Transient(Solver sv) {
         Recorder r = sv.rec;
@@ -92,9 +93,27 @@ public final class Transient {
                     : "the current only approaches zero; the decay time is the time to 1 % of the turn-off current");
         }
         if (sv.moves && Double.isNaN(sv.pullIn)) nt.add("the armature did not reach the closed stop");
-        notes = Collections.unmodifiableList(nt);
+
+
+        double rcoil = sv.rc;
+        acPeak = sv.inLastCycle ? sv.lastCyclePeak : Double.NaN;
+        acRms = sv.inLastCycle && rcoil > 0 ? Math.sqrt(Math.max(0, y[Solver.ECOIL] - sv.lastCycleECoil) * sv.drive.frequency / rcoil)
+                : Double.NaN;
+        if (sv.sine && !sv.inLastCycle) nt.add("the run is shorter than one cycle of the supply: no last-cycle RMS and peak current");
+        if (sv.sine && sv.inLastCycle && !(rcoil > 0)) nt.add("the coil has no resistance: the last cycle's RMS current is not reported");
+        if (sv.sine) nt.add("the last cycle's peak current is the largest of the samples and solver steps in it");
+
+        coreLoss = sv.circuit.coil != null ? CoreLossOfRun.energy(sv.circuit.coil, r.time, r.lambda) : Double.NaN;
+        if (!Double.isNaN(coreLoss)) {
+            nt.add("core loss " + Quantity.of(coreLoss, Dimension.ENERGY) + " by the iGSE of the run's flux density B = λ/(N·A) "
+                    + "(from the output samples); beside the energy ledger, not in it: the coil model has no core-loss path");
+        }
 
         List<String> cs = new ArrayList<>();
+        if (sv.sine && sv.vs > Drive.MAINS_CAUTION_RMS) {
+            cs.add("the supply is " + Quantity.of(sv.vs, Dimension.VOLTAGE) + " RMS, above 50 V RMS: mains-type voltage can kill; "
+                    + "wiring, fusing, insulation and enclosure must follow local codes and licensed practice");
+        }
         if (sv.peakSw > CAUTION_VOLTS) {
             cs.add("the switch sees " + Quantity.of(sv.peakSw, Dimension.VOLTAGE) + ", above 60 V (a common-practice threshold for "
                     + "touchable low-voltage circuits): the flyback spike can shock and can destroy parts; rate the switch and clamp for it");
@@ -107,6 +126,7 @@ public final class Transient {
             cs.add("the switch absorbs " + Quantity.of(y[Solver.ECL], Dimension.ENERGY) + " in avalanche at each turn-off; "
                     + "check it against the switch's rated avalanche energy");
         }
+        notes = Collections.unmodifiableList(nt);
         if (!cs.isEmpty()) cs.add("these thresholds are common practice, not limits: defer to local codes and licensed practice");
         cautions = Collections.unmodifiableList(cs);
     }
@@ -182,6 +202,23 @@ public final class Transient {
     public Quantity decayTime() { return metrics.decayTime(); }
     public Quantity ripple() { return metrics.ripple(); }
     public Quantity cycleMean() { return metrics.cycleMean(); }
+
+    /**
+     * Sine supply: the RMS coil current over the last full cycle of the run, from the exact integral of
+     * the coil's i²·R (NaN for other drives, a run shorter than a cycle, or a coil without resistance).
+     */
+    public Quantity lastCycleRmsCurrent() { return Quantity.of(acRms, Dimension.CURRENT); }
+
+    /**
+     * Core-loss energy of the run (J): the iGSE of each core piece's flux density B(t) = λ(t)/(N·A)
+     * over the output samples, minor loops included, times the piece's volume, for a {@code WoundCoil}
+     * whose core material has a {@code CoreLoss}; NaN otherwise. Reported beside the energy ledger, not
+     * in it (the coil model has no core-loss path, so the ledger balances without it).
+     */
+    public Quantity coreLossEnergy() { return Quantity.of(coreLoss, Dimension.ENERGY); }
+
+    /** Sine supply: the largest |i| over the last full cycle of the run, from its samples and solver steps (NaN otherwise). */
+    public Quantity lastCyclePeakCurrent() { return Quantity.of(acPeak, Dimension.CURRENT); }
     public Quantity pullInTime() { return metrics.pullInTime(); }
     public Quantity dropOutTime() { return metrics.dropOutTime(); }
     /** Speed of the armature as it first reaches the closed stop (NaN if it never does). */

@@ -72,7 +72,10 @@ class BadInputTest {
     void aStiffSnubberIsReported() {
         // 10 H with a 1 pF snubber: time constants 12 orders apart; the explicit solver gives up with a reason
         Coil big = Coil.lumped(H(10), ohm(1));
-        fails(() -> Drive.dc(V(12)).into(big).offAt(ms(1), Clamp.snubber(ohm(1), pF(1))).simulate(s(10)), "stiff");
+        fails(() -> Drive.dc(V(12)).into(big).offAt(ms(1), Clamp.snubber(ohm(1), pF(1))).numeric().simulate(s(10)), "stiff");
+        // the same linear circuit is solved piece by piece in closed form and finishes
+        Transient run = Drive.dc(V(12)).into(big).offAt(ms(1), Clamp.snubber(ohm(1), pF(1))).simulate(s(10));
+        assertTrue(run.energy().relativeBalanceError() < 1e-6, run.energy().toString());
     }
 
     @Test

@@ -435,7 +435,8 @@ public final class LibraryFuzz {
             return true;
         }
         return c.equals("Transient") && List.of("timeTo", "timeConstant", "timeTo63", "timeTo90", "timeTo99", "decayTime", "ripple", "cycleMean",
-                "pullInCurrentTime", "pullInTime", "dropOutTime", "impactSpeed").contains(m.getName());
+                "pullInCurrentTime", "pullInTime", "dropOutTime", "impactSpeed", "lastCycleRmsCurrent", "lastCyclePeakCurrent",
+                "coreLossEnergy").contains(m.getName());
     }
 
     /**
