@@ -8,6 +8,8 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.SplittableRandom;
 import java.util.function.Function;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
 
 /**
  * Tolerance analysis of a design: parameters with tolerances ({@link Varied}), a function giving
@@ -153,28 +155,35 @@ public final class Tolerance {
     public MonteCarlo monteCarlo(int runs, long seed) {
         requireParameters();
         if (runs < 2) throw Require.fail("runs (" + runs + ") must be at least 2");
-        Axis.checkSize("Monte Carlo runs", runs, Axis.BYTES_PER_POINT + 8 * varied.size());
+        Axis.checkSize("Monte Carlo runs", runs, Axis.BYTES_PER_RUN + 8 * varied.size());
         return Runner.guarded(() -> runMonteCarlo(runs, seed));
     }
 
     private MonteCarlo runMonteCarlo(int runs, long seed) {
         int k = varied.size();
-        Object[][] params = new Object[runs][];
         double[][] inputs = new double[k][runs];
         for (double[] col : inputs) java.util.Arrays.fill(col, Double.NaN);
-        Table t = Sweep.points("Monte Carlo of " + runs + " runs", names(), params, call(), threads, progress, BLOCK, (block, lo, hi) -> {
+        List<Column> paramColumns = new ArrayList<>(k);
+        for (int j = 0; j < k; j++) paramColumns.add(parameterColumn(varied.get(j), inputs[j]));
+        Table t = Sweep.gathered("Monte Carlo of " + runs + " runs", names(), runs, i -> {
+            Object[] row = new Object[k];
+            for (int j = 0; j < k; j++) row[j] = varied.get(j).valueAt(inputs[j][i]);
+            return row;
+        }, null, paramColumns, (j, si) -> varied.get(j).valueAt(si), call(), threads, progress, BLOCK, (block, lo, hi) -> {
             SplittableRandom r = new SplittableRandom(Runner.seedFor(seed, block));
-            for (int i = lo; i < hi; i++) {
-                Object[] row = new Object[k];
-                for (int j = 0; j < k; j++) {
-                    double x = varied.get(j).sample(r);
-                    inputs[j][i] = x;
-                    row[j] = varied.get(j).valueAt(x);
-                }
-                params[i] = row;
-            }
+            for (int i = lo; i < hi; i++) for (int j = 0; j < k; j++) inputs[j][i] = varied.get(j).sample(r);
         }, "Monte Carlo run");
         return new MonteCarlo(t, varied, limits, seed, inputs);
+    }
+
+    /** The column of a drawn parameter over its SI values, of the kind the function receives. */
+    static Column parameterColumn(Varied v, double[] values) {
+        Object probe = v.valueAt(v.nominal.si());
+        if (probe instanceof Quantity) {
+            Quantity q = (Quantity) probe;
+            return Column.numbers(v.name, q.dimension(), q.isAbsoluteTemperature(), values);
+        }
+        return Column.numbers(v.name, Dimension.NONE, false, values);
     }
 
     @Override
