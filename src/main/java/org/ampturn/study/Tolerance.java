@@ -176,6 +176,71 @@ public final class Tolerance {
         return new MonteCarlo(t, varied, limits, seed, inputs);
     }
 
+    /**
+     * {@code runs} random designs drawn from {@code seed}, keeping no run: exact mean, σ, min, max
+     * and fractions failing, and percentiles within a stated error ({@link StreamedMonteCarlo}).
+     * Memory does not grow with the runs, so very long studies fit a small heap.
+     */
+    public StreamedMonteCarlo monteCarloStreamed(int runs, long seed) {
+        requireParameters();
+        if (runs < 2) throw Require.fail("runs (" + runs + ") must be at least 2");
+        return Runner.guarded(() -> runStreamed(runs, seed));
+    }
+
+    private StreamedMonteCarlo runStreamed(int runs, long seed) {
+        int k = varied.size();
+        int block = runs <= (1 << 24) ? BLOCK : 16 * BLOCK;
+        int blocks = (int) ((runs + (long) block - 1) / block);
+        StreamedMonteCarlo.Part[] parts = new StreamedMonteCarlo.Part[blocks];
+        Map<String, StreamedMonteCarlo.Histogram> histograms = new HashMap<>();
+        Function<Object[], Object> fn = call();
+        Runner.Outcome o = Runner.run("Monte Carlo of " + runs + " runs", runs, block, threads, progress, (b, lo, hi, c) -> {
+            SplittableRandom r = new SplittableRandom(Runner.seedFor(seed, b));
+            double[][] drawn = new double[hi - lo][k];
+            for (double[] row : drawn) for (int j = 0; j < k; j++) row[j] = varied.get(j).sample(r);
+            StreamedMonteCarlo.Part part = new StreamedMonteCarlo.Part(limits);
+            int done = hi - lo;
+            for (int i = lo; i < hi; i++) {
+                Object[] row = new Object[k];
+                for (int j = 0; j < k; j++) row[j] = varied.get(j).valueAt(drawn[i - lo][j]);
+                Map<String, Object> out;
+                try {
+                    out = Outputs.from(fn.apply(row), Sweep.RESULT);
+                } catch (RuntimeException e) {
+                    out = null;
+                }
+                if (out == null) part.fail();
+                else part.add(out);
+                if (c.tick(1) && i + 1 < hi) {
+                    done = i + 1 - lo;
+                    break;
+                }
+            }
+            synchronized (histograms) {
+                for (Map.Entry<String, StreamedMonteCarlo.Acc> e : part.outputs.entrySet()) {
+                    StreamedMonteCarlo.Acc a = e.getValue();
+                    histograms.computeIfAbsent(kindKey(e.getKey(), a), x -> new StreamedMonteCarlo.Histogram()).add(a.pending, a.pendingCount);
+                    a.pending = null;
+                }
+            }
+            parts[b] = part;
+            return done;
+        });
+        StreamedMonteCarlo.Part total = new StreamedMonteCarlo.Part(limits);
+        for (StreamedMonteCarlo.Part p : parts) if (p != null) total.merge(p);
+        Map<String, StreamedMonteCarlo.Histogram> chosen = new HashMap<>();
+        for (Map.Entry<String, StreamedMonteCarlo.Acc> e : total.outputs.entrySet()) {
+            StreamedMonteCarlo.Histogram h = histograms.get(kindKey(e.getKey(), e.getValue()));
+            chosen.put(e.getKey(), h);
+        }
+        String note = o.complete() ? null : "stopped after " + o.computed() + " of " + runs + " runs";
+        return new StreamedMonteCarlo(runs, seed, varied, limits, total, chosen, note);
+    }
+
+    private static String kindKey(String output, StreamedMonteCarlo.Acc a) {
+        return output + '\u0000' + a.dimension + '\u0000' + a.absolute;
+    }
+
     /** The column of a drawn parameter over its SI values, of the kind the function receives. */
     static Column parameterColumn(Varied v, double[] values) {
         Object probe = v.valueAt(v.nominal.si());
