@@ -115,6 +115,15 @@ final class Gather {
         }
     }
 
+    /** Records the one output of a row. */
+    void putOne(int row, String name, Object v) {
+        Slot s = slots.get(name);
+        if (s == null) s = create(name, v);
+        long at = (long) row << 16;
+        if (at < s.first) s.seen(at);
+        s.put(row, v);
+    }
+
     private synchronized Slot create(String name, Object v) {
         Slot s = slots.get(name);
         if (s != null) return s;

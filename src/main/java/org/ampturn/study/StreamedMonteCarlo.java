@@ -289,26 +289,35 @@ public final class StreamedMonteCarlo {
         void add(Map<String, Object> m) {
             computed++;
             java.util.Arrays.fill(limitValues, Double.NaN);
-            for (Map.Entry<String, Object> e : m.entrySet()) {
-                Object v = e.getValue();
-                double x;
-                Acc a = outputs.get(e.getKey());
-                if (v instanceof Quantity) {
-                    Quantity q = (Quantity) v;
-                    if (a == null) outputs.put(e.getKey(), a = new Acc(q.dimension(), q.isAbsoluteTemperature()));
-                    if (!a.accepts(q)) continue;
-                    x = q.si();
-                } else if (v instanceof Number) {
-                    if (a == null) outputs.put(e.getKey(), a = new Acc(Dimension.NONE, false));
-                    if (!a.dimension.isNone() || a.absolute) continue;
-                    x = ((Number) v).doubleValue();
-                } else {
-                    continue;
-                }
-                a.add(x);
-                for (int j = 0; j < limits.size(); j++) if (limits.get(j).output().equals(e.getKey())) limitValues[j] = x;
-            }
+            for (Map.Entry<String, Object> e : m.entrySet()) value(e.getKey(), e.getValue());
             countLimits();
+        }
+
+        /** A run that gave one output. */
+        void addOne(String name, Object v) {
+            computed++;
+            java.util.Arrays.fill(limitValues, Double.NaN);
+            value(name, v);
+            countLimits();
+        }
+
+        private void value(String name, Object v) {
+            double x;
+            Acc a = outputs.get(name);
+            if (v instanceof Quantity) {
+                Quantity q = (Quantity) v;
+                if (a == null) outputs.put(name, a = new Acc(q.dimension(), q.isAbsoluteTemperature()));
+                if (!a.accepts(q)) return;
+                x = q.si();
+            } else if (v instanceof Number) {
+                if (a == null) outputs.put(name, a = new Acc(Dimension.NONE, false));
+                if (!a.dimension.isNone() || a.absolute) return;
+                x = ((Number) v).doubleValue();
+            } else {
+                return;
+            }
+            a.add(x);
+            for (int j = 0; j < limits.size(); j++) if (limits.get(j).output().equals(name)) limitValues[j] = x;
         }
 
         /** A run that failed to evaluate: it has no value of any output. */

@@ -194,7 +194,9 @@ public final class Sweep {
             if (start != null) start.prepare(block, lo, hi);
             for (int i = lo; i < hi; i++) {
                 try {
-                    gather.put(i, Outputs.from(f.apply(rowParams.apply(i)), RESULT));
+                    Object r = f.apply(rowParams.apply(i));
+                    if (Outputs.isSingle(r)) gather.putOne(i, RESULT, Outputs.single(r, RESULT));
+                    else gather.put(i, Outputs.from(r, RESULT));
                 } catch (RuntimeException e) {
                     errors[i] = Runner.describe(e);
                 }

@@ -203,14 +203,18 @@ public final class Tolerance {
             for (int i = lo; i < hi; i++) {
                 Object[] row = new Object[k];
                 for (int j = 0; j < k; j++) row[j] = varied.get(j).valueAt(drawn[i - lo][j]);
-                Map<String, Object> out;
+                Object out;
                 try {
-                    out = Outputs.from(fn.apply(row), Sweep.RESULT);
+                    Object result = fn.apply(row);
+                    out = Outputs.isSingle(result) ? Outputs.single(result, Sweep.RESULT) : Outputs.from(result, Sweep.RESULT);
                 } catch (RuntimeException e) {
                     out = null;
                 }
                 if (out == null) part.fail();
-                else part.add(out);
+                else if (out instanceof Map) {
+                    @SuppressWarnings("unchecked") Map<String, Object> m = (Map<String, Object>) out;
+                    part.add(m);
+                } else part.addOne(Sweep.RESULT, out);
                 if (c.tick(1) && i + 1 < hi) {
                     done = i + 1 - lo;
                     break;
