@@ -184,16 +184,21 @@ final class TableMaterial implements MagneticMaterial {
         double t = (y - b0) / db;
         double t2 = t * t, t3 = t2 * t;
         double x = (2 * t3 - 3 * t2 + 1) * h0 + (t3 - 2 * t2 + t) * db * d0 + (-2 * t3 + 3 * t2) * (h0 + dh) + (t3 - t2) * db * d1;
-        double lo = h[i], hi = h[i + 1];
+        // Newton on the interval's cubic in its own variable u = (H − H_i)/ΔH: no division but the step
+        double hi0 = h[i], dx = h[i + 1] - hi0;
+        double bi = b[i], bj = b[i + 1], mi = m[i] * dx, mj = m[i + 1] * dx;
+        double u = (x - hi0) / dx;
         for (int it = 0; it < 4; it++) {
-            double f = hermite(i, x) - y;
-            if (f == 0) return x;
-            double dx = f / slope(i, x);
-            double nx = x - dx;
-            if (!(nx >= lo && nx <= hi)) break;
+            double u2 = u * u, u3 = u2 * u;
+            double f = (2 * u3 - 3 * u2 + 1) * bi + (u3 - 2 * u2 + u) * mi + (-2 * u3 + 3 * u2) * bj + (u3 - u2) * mj - y;
+            if (f == 0) return hi0 + u * dx;
+            double dbdu = (6 * u2 - 6 * u) * (bi - bj) + (3 * u2 - 4 * u + 1) * mi + (3 * u2 - 2 * u) * mj;
+            double du = f / dbdu;
+            double nu = u - du;
+            if (!(nu >= 0 && nu <= 1)) break;
             // quadratic convergence: after a step this small the error is far below rounding
-            if (Math.abs(dx) <= STEP * nx && Math.abs(f) <= RESIDUAL) return nx;
-            x = nx;
+            if (Math.abs(du) <= STEP * nu && Math.abs(f) <= RESIDUAL) return hi0 + nu * dx;
+            u = nu;
         }
         return guardedInverse(y);
     }
