@@ -31,8 +31,8 @@ import org.ampturn.units.Require;
  *
  * <p>A run with no value of an output counts as the worst case, as in {@link MonteCarlo}: the
  * mean and σ skip it, min, max and percentiles count it as +∞ (−∞ when the limits bound the output
- * only from below), and it fails the limits on that output. Up to 16,777,216 runs the runs are
- * those of {@code monteCarlo(runs, seed)}. An output keeps the dimension of its first value; a
+ * only from below), and it fails the limits on that output. The runs are those of
+ * {@code monteCarlo(runs, seed)}; a study takes at most 100 million. An output keeps the dimension of its first value; a
  * later value of another kind counts as missing.
  */
 public final class StreamedMonteCarlo {

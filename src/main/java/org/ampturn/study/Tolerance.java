@@ -184,12 +184,13 @@ public final class Tolerance {
     public StreamedMonteCarlo monteCarloStreamed(int runs, long seed) {
         requireParameters();
         if (runs < 2) throw Require.fail("runs (" + runs + ") must be at least 2");
+        if (runs > Axis.MAX_POINTS) throw Require.fail(runs + " Monte Carlo runs are more than the " + Axis.MAX_POINTS + " a study takes; use fewer");
         return Runner.guarded(() -> runStreamed(runs, seed));
     }
 
     private StreamedMonteCarlo runStreamed(int runs, long seed) {
         int k = varied.size();
-        int block = runs <= (1 << 24) ? BLOCK : 16 * BLOCK;
+        int block = BLOCK;
         int blocks = (int) ((runs + (long) block - 1) / block);
         StreamedMonteCarlo.Part[] parts = new StreamedMonteCarlo.Part[blocks];
         Map<String, StreamedMonteCarlo.Histogram> histograms = new HashMap<>();
