@@ -229,7 +229,7 @@ public final class StreamedMonteCarlo {
         long n;
         double mean, m2;
         double min = Double.POSITIVE_INFINITY, max = Double.NEGATIVE_INFINITY;
-        double[] pending = new double[16]; // values not yet put into the histogram
+        double[] pending = new double[Tolerance.BLOCK]; // values not yet put into the histogram
         int pendingCount;
 
         Acc(Dimension dimension, boolean absolute) {

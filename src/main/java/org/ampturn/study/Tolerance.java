@@ -197,13 +197,13 @@ public final class Tolerance {
         Function<Object[], Object> fn = call();
         Runner.Outcome o = Runner.run("Monte Carlo of " + runs + " runs", runs, block, threads, progress, (b, lo, hi, c) -> {
             SplittableRandom r = new SplittableRandom(Runner.seedFor(seed, b));
-            double[][] drawn = new double[hi - lo][k];
-            for (double[] row : drawn) for (int j = 0; j < k; j++) row[j] = varied.get(j).sample(r);
+            double[] drawn = new double[(hi - lo) * k];
+            for (int q = 0; q < drawn.length; q++) drawn[q] = varied.get(q % k).sample(r);
             StreamedMonteCarlo.Part part = new StreamedMonteCarlo.Part(limits);
             int done = hi - lo;
             for (int i = lo; i < hi; i++) {
                 Object[] row = new Object[k];
-                for (int j = 0; j < k; j++) row[j] = varied.get(j).valueAt(drawn[i - lo][j]);
+                for (int j = 0; j < k; j++) row[j] = varied.get(j).valueAt(drawn[(i - lo) * k + j]);
                 Object out;
                 try {
                     Object result = fn.apply(row);
