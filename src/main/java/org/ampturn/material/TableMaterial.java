@@ -13,9 +13,16 @@ import org.ampturn.units.Quantity;
  * (1980): secant-mean tangents limited to the circle α² + β² ≤ 9, which keeps B strictly increasing
  * in H when the data are. The tangent at H = 0 is the first secant; the tangent at the last point is
  * μ0, and beyond the last point B = B_n + μ0·(H − H_n) (the material is fully saturated: only the
- * vacuum term grows). B(−H) = −B(H). The inverse H(B) is found in the one interval that brackets B
- * by a safeguarded Newton iteration (bisection whenever a Newton step leaves the bracket), so it
- * always converges.
+ * vacuum term grows). B(−H) = −B(H).
+ *
+ * <p>The inverse H(B): a dense inverse table, built once, holds {@value #SUB} sub-points in each
+ * table interval with their exact H, B and dH/dB; between two of them H is a cubic Hermite in B,
+ * which starts Newton steps on the interval's own cubic B(H); the last step is taken from a
+ * residual below {@value #RESIDUAL} T and moves H by less than {@value #STEP} of itself, so by
+ * quadratic convergence H is then within rounding of the root. Where a sub-interval is nearly flat (dB/dH almost 0 at an end, as on the
+ * flat stretches of the RPN 14 data) or Newton leaves the interval, the inverse falls back to a
+ * safeguarded Newton iteration in the one interval that brackets B (bisection whenever a Newton
+ * step leaves the bracket), which always converges. Both give the same H to rounding.
  */
 final class TableMaterial implements MagneticMaterial {
     private final String name;
@@ -23,6 +30,19 @@ final class TableMaterial implements MagneticMaterial {
     private final double[] b;
     private final double[] m; // dB/dH at the points
     private final double bsat;
+
+    /** Sub-points of the dense inverse table per table interval. */
+    static final int SUB = 8;
+    /** The fast inverse stops after a Newton step below this fraction of H taken from a residual |B(H) − B| below {@link #RESIDUAL}. */
+    static final double STEP = 1e-9;
+    /** The residual |B(H) − B| (tesla) below which the last Newton step is taken. */
+    static final double RESIDUAL = 1e-12;
+    /** Below this ratio of dB/dH at a sub-point to the interval's mean slope, a sub-interval takes the safeguarded path. */
+    private static final double FLAT = 1e-3;
+    private final double[] ib;  // B at the sub-points, increasing
+    private final double[] ih;  // H at the sub-points
+    private final double[] ds;  // dH/dB at the start of each sub-interval; NaN where the sub-interval is nearly flat
+    private final double[] de;  // dH/dB at the end of each sub-interval
 
     TableMaterial(String name, double[] hIn, double[] bIn, double bsat) {
         int n = hIn.length;
@@ -59,6 +79,28 @@ final class TableMaterial implements MagneticMaterial {
         this.b = bb;
         this.bsat = bsat;
         this.m = tangents(hh, bb);
+        int cells = (hh.length - 1) * SUB;
+        ib = new double[cells + 1];
+        ih = new double[cells + 1];
+        ds = new double[cells];
+        de = new double[cells];
+        for (int i = 0; i < hh.length - 1; i++) {
+            double mean = (bb[i + 1] - bb[i]) / (hh[i + 1] - hh[i]);
+            for (int k = 0; k < SUB; k++) {
+                int j = i * SUB + k;
+                double x0 = k == 0 ? hh[i] : hh[i] + (hh[i + 1] - hh[i]) * k / SUB;
+                double x1 = k == SUB - 1 ? hh[i + 1] : hh[i] + (hh[i + 1] - hh[i]) * (k + 1) / SUB;
+                ih[j] = x0;
+                ib[j] = k == 0 ? bb[i] : hermite(i, x0);
+                double s0 = slope(i, x0), s1 = slope(i, x1);
+                boolean flat = !(s0 > FLAT * mean && s1 > FLAT * mean);
+                ds[j] = flat ? Double.NaN : 1 / s0;
+                de[j] = 1 / s1;
+            }
+        }
+        ih[cells] = hh[hh.length - 1];
+        ib[cells] = bb[bb.length - 1];
+        for (int j = 0; j < cells; j++) if (!((j + 1 < cells ? ib[j + 1] : ib[cells]) > ib[j])) ds[j] = Double.NaN;
         // a first point at a vanishing H gives an initial slope no material has (and ∞ in a double)
         Require.between("initial relative permeability of the B-H table", m[0] / MU0, 1e-3, 1e8);
     }
@@ -126,6 +168,45 @@ final class TableMaterial implements MagneticMaterial {
         if (y >= b[n - 1]) {
             r = h[n - 1] + (y - b[n - 1]) / MU0;
         } else {
+            r = fastInverse(y);
+        }
+        return Require.result("field", bIn < 0 ? -r : r);
+    }
+
+    /** H at 0 ≤ y < B_n: a Hermite start from the dense inverse table, then Newton on the interval's cubic. */
+    private double fastInverse(double y) {
+        int j = interval(ib, y);
+        double d0 = ds[j], d1 = de[j];
+        if (d0 != d0) return guardedInverse(y); // nearly flat: the safeguarded path
+        int i = j / SUB;
+        double b0 = ib[j], db = ib[j + 1] - b0;
+        double h0 = ih[j], dh = ih[j + 1] - h0;
+        double t = (y - b0) / db;
+        double t2 = t * t, t3 = t2 * t;
+        double x = (2 * t3 - 3 * t2 + 1) * h0 + (t3 - 2 * t2 + t) * db * d0 + (-2 * t3 + 3 * t2) * (h0 + dh) + (t3 - t2) * db * d1;
+        // Newton on the interval's cubic in its own variable u = (H − H_i)/ΔH: no division but the step
+        double hi0 = h[i], dx = h[i + 1] - hi0;
+        double bi = b[i], bj = b[i + 1], mi = m[i] * dx, mj = m[i + 1] * dx;
+        double u = (x - hi0) / dx;
+        for (int it = 0; it < 4; it++) {
+            double u2 = u * u, u3 = u2 * u;
+            double f = (2 * u3 - 3 * u2 + 1) * bi + (u3 - 2 * u2 + u) * mi + (-2 * u3 + 3 * u2) * bj + (u3 - u2) * mj - y;
+            if (f == 0) return hi0 + u * dx;
+            double dbdu = (6 * u2 - 6 * u) * (bi - bj) + (3 * u2 - 4 * u + 1) * mi + (3 * u2 - 2 * u) * mj;
+            double du = f / dbdu;
+            double nu = u - du;
+            if (!(nu >= 0 && nu <= 1)) break;
+            // quadratic convergence: after a step this small the error is far below rounding
+            if (Math.abs(du) <= STEP * nu && Math.abs(f) <= RESIDUAL) return hi0 + nu * dx;
+            u = nu;
+        }
+        return guardedInverse(y);
+    }
+
+    /** H at 0 ≤ y < B_n by the safeguarded Newton iteration in the interval that brackets y. */
+    double guardedInverse(double y) {
+        double r;
+        {
             int i = interval(b, y);
             double lo = h[i], hi = h[i + 1];
             // start from the linear interpolate
@@ -142,7 +223,7 @@ final class TableMaterial implements MagneticMaterial {
             }
             r = x;
         }
-        return Require.result("field", bIn < 0 ? -r : r);
+        return r;
     }
 
     /** Index i with a[i] <= v < a[i+1]; v is within [a[0], a[n-1]). */

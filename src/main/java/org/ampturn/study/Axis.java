@@ -96,6 +96,8 @@ public final class Axis<T> {
     public static final int MAX_POINTS = 100_000_000;
     /** Memory a point of a general study takes with its parameters and results (bytes, measured roughly). */
     static final int BYTES_PER_POINT = 400;
+    /** Memory a Monte Carlo run takes besides its drawn parameters (bytes): a few numeric outputs and the error slot. */
+    static final int BYTES_PER_RUN = 36;
     /** Memory a point of the fast double path takes (bytes): parameter, result, error slot. */
     static final int BYTES_PER_DOUBLE_POINT = 32;
 

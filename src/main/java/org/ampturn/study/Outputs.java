@@ -107,6 +107,17 @@ public final class Outputs {
         return m;
     }
 
+    /** True when a function's result is one value rather than several named ones. */
+    static boolean isSingle(Object result) {
+        return result != null && !(result instanceof Outputs) && !(result instanceof Map);
+    }
+
+    /** A single result checked as {@link #from} checks it (a NaN or an infinity is the row's error). */
+    static Object single(Object result, String name) {
+        if (!isFinite(result)) throw new IllegalStateException("output " + Require.quote(name) + " is " + result + ", not a finite number");
+        return result;
+    }
+
     private static boolean isFinite(Object v) {
         if (v instanceof Quantity) return Double.isFinite(((Quantity) v).si());
         if (v instanceof Double || v instanceof Float) return Double.isFinite(((Number) v).doubleValue());

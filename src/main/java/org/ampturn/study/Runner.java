@@ -126,7 +126,7 @@ final class Runner {
     /** Shared by the workers of one run: the stop flag and the progress count. */
     static final class Control {
         private volatile boolean stop;
-        private final AtomicLong done = new AtomicLong();
+        private final java.util.concurrent.atomic.LongAdder done = new java.util.concurrent.atomic.LongAdder(); // cheap from many threads at once
         private final AtomicLong lastReport;
         private final long start;
         private final long total;
@@ -179,11 +179,11 @@ final class Runner {
 
         /** Counts {@code k} finished points, reports progress when due, and tells whether to stop. */
         boolean tick(int k) {
-            long d = done.addAndGet(k);
+            done.add(k);
             if (progress != Progress.NONE) {
                 long now = System.nanoTime();
                 long last = lastReport.get();
-                if (now - last >= 100_000_000L && lastReport.compareAndSet(last, now)) report(d, now, false);
+                if (now - last >= 100_000_000L && lastReport.compareAndSet(last, now)) report(done.sum(), now, false);
             }
             return stopped();
         }
@@ -198,7 +198,7 @@ final class Runner {
         }
 
         void finish() {
-            if (progress != Progress.NONE) report(done.get(), System.nanoTime(), true);
+            if (progress != Progress.NONE) report(done.sum(), System.nanoTime(), true);
         }
     }
 

@@ -8,6 +8,7 @@ import java.util.Objects;
 import java.util.function.BiFunction;
 import java.util.function.DoubleUnaryOperator;
 import java.util.function.Function;
+import java.util.function.IntFunction;
 import org.ampturn.units.Require;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
@@ -175,15 +176,29 @@ public final class Sweep {
     /** Evaluates {@code f} at every row of {@code params} on the runner and assembles the table. */
     static Table points(String title, List<String> names, Object[][] params, Function<Object[], Object> f, int threads,
                         Progress progress, int blockSize, BlockStart start, String what) {
-        int n = params.length;
-        Object[] results = new Object[n]; // Map<String,Object> or String (an error)
+        return gathered(title, names, params.length, i -> params[i], params, null, null, f, threads, progress, blockSize, start, what);
+    }
+
+    /**
+     * Evaluates {@code f} at rows 0 to n − 1 and gathers the outputs into primitive columns
+     * ({@link Gather}). The parameters of row i come from {@code rowParams} when the row is run;
+     * the table keeps {@code keptParams} when given (its parameter columns are then built from
+     * them), else {@code paramColumns}, whose objects {@code source} rebuilds from the SI values.
+     */
+    static Table gathered(String title, List<String> names, int n, IntFunction<Object[]> rowParams, Object[][] keptParams,
+                          List<Column> paramColumns, Table.ParamSource source, Function<Object[], Object> f, int threads,
+                          Progress progress, int blockSize, BlockStart start, String what) {
+        String[] errors = new String[n];
+        Gather gather = new Gather(n, names);
         Runner.Outcome o = Runner.run(title, n, blockSize, threads, progress, (block, lo, hi, c) -> {
             if (start != null) start.prepare(block, lo, hi);
             for (int i = lo; i < hi; i++) {
                 try {
-                    results[i] = Outputs.from(f.apply(params[i]), RESULT);
+                    Object r = f.apply(rowParams.apply(i));
+                    if (Outputs.isSingle(r)) gather.putOne(i, RESULT, Outputs.single(r, RESULT));
+                    else gather.put(i, Outputs.from(r, RESULT));
                 } catch (RuntimeException e) {
-                    results[i] = Runner.describe(e);
+                    errors[i] = Runner.describe(e);
                 }
                 if (c.tick(1) && i + 1 < hi) return i + 1 - lo;
             }
@@ -192,9 +207,22 @@ public final class Sweep {
         String note = null;
         if (!o.complete()) {
             note = "stopped after " + o.computed() + " of " + n + " points";
-            for (int i = 0; i < n; i++) if (!o.isDone(i)) results[i] = "not computed: the " + what + " was stopped";
+            for (int i = 0; i < n; i++) if (!o.isDone(i)) errors[i] = "not computed: the " + what + " was stopped";
         }
-        return assemble(title, names, params, results, note);
+        List<Column> cols = new ArrayList<>();
+        if (keptParams != null) {
+            for (int k = 0; k < names.size(); k++) {
+                Object[] vs = new Object[n];
+                for (int i = 0; i < n; i++) vs[i] = keptParams[i] == null ? null : keptParams[i][k];
+                cols.add(columnOf(names.get(k), vs, null));
+            }
+        } else {
+            cols.addAll(paramColumns);
+        }
+        cols.addAll(gather.columns(errors));
+        boolean anyError = false;
+        for (String e : errors) if (e != null) { anyError = true; break; }
+        return new Table(title, cols, names.size(), n, anyError ? errors : null, keptParams, note, source);
     }
 
     /** Builds the columns: the parameters, then the union of output names in the order first seen. */
@@ -226,7 +254,7 @@ public final class Sweep {
         }
         for (Map.Entry<String, Object[]> e : outs.entrySet()) cols.add(columnOf(e.getKey(), e.getValue(), errors));
         for (String e : errors) if (e != null) { anyError = true; break; }
-        return new Table(title, cols, names.size(), n, anyError ? errors : null, params, note);
+        return new Table(title, cols, names.size(), n, anyError ? errors : null, params, note, null);
     }
 
     /**

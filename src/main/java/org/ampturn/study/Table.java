@@ -36,8 +36,20 @@ public final class Table {
     private final String[] errors;      // null entries where the row is fine; array may be null
     private final Object[][] parameters; // the parameter objects of each row, or null
     private final String incomplete;    // null when every point was computed
+    private final ParamSource source;   // rebuilds parameter objects from their SI values when parameters is null; may be null
+
+    /** Rebuilds the object a function received for parameter k from its SI value (a Monte Carlo keeps no object per run). */
+    @FunctionalInterface
+    interface ParamSource {
+        Object value(int k, double si);
+    }
 
     Table(String title, List<Column> columns, int parameterCount, int size, String[] errors, Object[][] parameters, String incomplete) {
+        this(title, columns, parameterCount, size, errors, parameters, incomplete, null);
+    }
+
+    Table(String title, List<Column> columns, int parameterCount, int size, String[] errors, Object[][] parameters, String incomplete,
+          ParamSource source) {
         this.title = title;
         this.columns = List.copyOf(columns);
         this.parameterCount = parameterCount;
@@ -45,6 +57,7 @@ public final class Table {
         this.errors = errors;
         this.parameters = parameters;
         this.incomplete = incomplete;
+        this.source = source;
         LinkedHashMap<String, Column> m = new LinkedHashMap<>();
         for (Column c : columns) m.put(c.name, c);
         this.byName = m;
@@ -233,7 +246,7 @@ public final class Table {
             ps = new Object[order.length][];
             for (int i = 0; i < order.length; i++) ps[i] = parameters[order[i]];
         }
-        return new Table(newTitle, cs, parameterCount, order.length, es, ps, incomplete);
+        return new Table(newTitle, cs, parameterCount, order.length, es, ps, incomplete, source);
     }
 
     Column column(String name) {
@@ -248,6 +261,7 @@ public final class Table {
         if (k < 0) throw new IllegalArgumentException("no parameter named " + Require.quote(name) + "; the parameters are " + Require.names(parameterNames()));
         if (parameters == null) {
             Column c = columns.get(k);
+            if (source != null && c.numeric()) return Double.isNaN(c.values[row]) ? null : source.value(k, c.values[row]);
             return c.numeric() ? (Object) c.values[row] : c.labels[row];
         }
         return parameters[row] == null ? null : parameters[row][k];

@@ -8,6 +8,8 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.SplittableRandom;
 import java.util.function.Function;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
 
 /**
  * Tolerance analysis of a design: parameters with tolerances ({@link Varied}), a function giving
@@ -153,28 +155,105 @@ public final class Tolerance {
     public MonteCarlo monteCarlo(int runs, long seed) {
         requireParameters();
         if (runs < 2) throw Require.fail("runs (" + runs + ") must be at least 2");
-        Axis.checkSize("Monte Carlo runs", runs, Axis.BYTES_PER_POINT + 8 * varied.size());
+        Axis.checkSize("Monte Carlo runs", runs, Axis.BYTES_PER_RUN + 8 * varied.size());
         return Runner.guarded(() -> runMonteCarlo(runs, seed));
     }
 
     private MonteCarlo runMonteCarlo(int runs, long seed) {
         int k = varied.size();
-        Object[][] params = new Object[runs][];
         double[][] inputs = new double[k][runs];
         for (double[] col : inputs) java.util.Arrays.fill(col, Double.NaN);
-        Table t = Sweep.points("Monte Carlo of " + runs + " runs", names(), params, call(), threads, progress, BLOCK, (block, lo, hi) -> {
+        List<Column> paramColumns = new ArrayList<>(k);
+        for (int j = 0; j < k; j++) paramColumns.add(parameterColumn(varied.get(j), inputs[j]));
+        Table t = Sweep.gathered("Monte Carlo of " + runs + " runs", names(), runs, i -> {
+            Object[] row = new Object[k];
+            for (int j = 0; j < k; j++) row[j] = varied.get(j).valueAt(inputs[j][i]);
+            return row;
+        }, null, paramColumns, (j, si) -> varied.get(j).valueAt(si), call(), threads, progress, BLOCK, (block, lo, hi) -> {
             SplittableRandom r = new SplittableRandom(Runner.seedFor(seed, block));
-            for (int i = lo; i < hi; i++) {
-                Object[] row = new Object[k];
-                for (int j = 0; j < k; j++) {
-                    double x = varied.get(j).sample(r);
-                    inputs[j][i] = x;
-                    row[j] = varied.get(j).valueAt(x);
-                }
-                params[i] = row;
-            }
+            for (int i = lo; i < hi; i++) for (int j = 0; j < k; j++) inputs[j][i] = varied.get(j).sample(r);
         }, "Monte Carlo run");
         return new MonteCarlo(t, varied, limits, seed, inputs);
+    }
+
+    /**
+     * {@code runs} random designs drawn from {@code seed}, keeping no run: exact mean, σ, min, max
+     * and fractions failing, and percentiles within a stated error ({@link StreamedMonteCarlo}).
+     * Memory does not grow with the runs, so very long studies fit a small heap.
+     */
+    public StreamedMonteCarlo monteCarloStreamed(int runs, long seed) {
+        requireParameters();
+        if (runs < 2) throw Require.fail("runs (" + runs + ") must be at least 2");
+        if (runs > Axis.MAX_POINTS) throw Require.fail(runs + " Monte Carlo runs are more than the " + Axis.MAX_POINTS + " a study takes; use fewer");
+        return Runner.guarded(() -> runStreamed(runs, seed));
+    }
+
+    private StreamedMonteCarlo runStreamed(int runs, long seed) {
+        int k = varied.size();
+        int block = BLOCK;
+        int blocks = (int) ((runs + (long) block - 1) / block);
+        StreamedMonteCarlo.Part[] parts = new StreamedMonteCarlo.Part[blocks];
+        Map<String, StreamedMonteCarlo.Histogram> histograms = new HashMap<>();
+        Function<Object[], Object> fn = call();
+        Runner.Outcome o = Runner.run("Monte Carlo of " + runs + " runs", runs, block, threads, progress, (b, lo, hi, c) -> {
+            SplittableRandom r = new SplittableRandom(Runner.seedFor(seed, b));
+            double[] drawn = new double[(hi - lo) * k];
+            for (int q = 0; q < drawn.length; q++) drawn[q] = varied.get(q % k).sample(r);
+            StreamedMonteCarlo.Part part = new StreamedMonteCarlo.Part(limits);
+            int done = hi - lo;
+            for (int i = lo; i < hi; i++) {
+                Object[] row = new Object[k];
+                for (int j = 0; j < k; j++) row[j] = varied.get(j).valueAt(drawn[(i - lo) * k + j]);
+                Object out;
+                try {
+                    Object result = fn.apply(row);
+                    out = Outputs.isSingle(result) ? Outputs.single(result, Sweep.RESULT) : Outputs.from(result, Sweep.RESULT);
+                } catch (RuntimeException e) {
+                    out = null;
+                }
+                if (out == null) part.fail();
+                else if (out instanceof Map) {
+                    @SuppressWarnings("unchecked") Map<String, Object> m = (Map<String, Object>) out;
+                    part.add(m);
+                } else part.addOne(Sweep.RESULT, out);
+                if (c.tick(1) && i + 1 < hi) {
+                    done = i + 1 - lo;
+                    break;
+                }
+            }
+            synchronized (histograms) {
+                for (Map.Entry<String, StreamedMonteCarlo.Acc> e : part.outputs.entrySet()) {
+                    StreamedMonteCarlo.Acc a = e.getValue();
+                    histograms.computeIfAbsent(kindKey(e.getKey(), a), x -> new StreamedMonteCarlo.Histogram()).add(a.pending, a.pendingCount);
+                    a.pending = null;
+                }
+            }
+            parts[b] = part;
+            return done;
+        });
+        StreamedMonteCarlo.Part total = new StreamedMonteCarlo.Part(limits);
+        for (StreamedMonteCarlo.Part p : parts) if (p != null) total.merge(p);
+        Map<String, StreamedMonteCarlo.Histogram> chosen = new HashMap<>();
+        for (Map.Entry<String, StreamedMonteCarlo.Acc> e : total.outputs.entrySet()) {
+            StreamedMonteCarlo.Histogram h = histograms.get(kindKey(e.getKey(), e.getValue()));
+            chosen.put(e.getKey(), h);
+        }
+        String note = o.complete() ? null : "stopped after " + o.computed() + " of " + runs + " runs";
+        return new StreamedMonteCarlo(runs, seed, varied, limits, total, chosen, note);
+    }
+
+    private static String kindKey(String output, StreamedMonteCarlo.Acc a) {
+        return output + '\u0000' + a.dimension + '\u0000' + a.absolute;
+    }
+
+    /** The column of a drawn parameter over its SI values, of the kind the function receives. */
+    static Column parameterColumn(Varied v, double[] values) {
+        Object probe = v.valueAt(v.nominal.si());
+        if (probe instanceof Quantity) {
+            Quantity q = (Quantity) probe;
+            return Column.numbers(v.name, q.dimension(), q.isAbsoluteTemperature(), values);
+        }
+        return Column.numbers(v.name, Dimension.NONE, false, values);
     }
 
     @Override

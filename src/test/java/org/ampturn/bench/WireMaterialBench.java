@@ -50,6 +50,53 @@ public class WireMaterialBench {
         return steel.fieldAt(x);
     }
 
+    /**
+     * The inverse inside the table (B from 0.05 to 1.95 T), and the same B through the safeguarded
+     * Newton iteration alone (the inverse before the dense inverse table; reached by reflection),
+     * measured side by side so a loaded machine still gives their ratio.
+     */
+    @Benchmark
+    public double bhTableInverseInTable() {
+        y = y > 1.95 ? 0.05 : y + 0.037;
+        return steel.fieldAt(y);
+    }
+
+    @Benchmark
+    public double bhTableInverseSafeguarded() throws Throwable {
+        y = y > 1.95 ? 0.05 : y + 0.037;
+        return (double) GUARDED.invokeExact(steelTable, y);
+    }
+
+    private double y = 0.05;
+    private static final java.lang.invoke.MethodHandle GUARDED = guarded();
+    private final MagneticMaterial steelTable = tableOf(steel);
+
+    /** The B-H table under the catalogue's silicon steel (which adds a core-loss model around it). */
+    private static MagneticMaterial tableOf(MagneticMaterial m) {
+        try {
+            Class<?> lossy = Class.forName("org.ampturn.material.LossyMaterial");
+            while (lossy.isInstance(m)) {
+                java.lang.reflect.Field f = lossy.getDeclaredField("base");
+                f.setAccessible(true);
+                m = (MagneticMaterial) f.get(m);
+            }
+            return m;
+        } catch (ReflectiveOperationException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    private static java.lang.invoke.MethodHandle guarded() {
+        try {
+            java.lang.reflect.Method m = Class.forName("org.ampturn.material.TableMaterial").getDeclaredMethod("guardedInverse", double.class);
+            m.setAccessible(true);
+            return java.lang.invoke.MethodHandles.lookup().unreflect(m)
+                    .asType(java.lang.invoke.MethodType.methodType(double.class, MagneticMaterial.class, double.class));
+        } catch (ReflectiveOperationException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
     @Benchmark
     public double igseTriangle() {
         x = x > 0.9 ? 0.05 : x + 0.037;

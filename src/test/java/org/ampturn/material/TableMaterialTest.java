@@ -2,6 +2,10 @@ package org.ampturn.material;
 
 import static org.junit.jupiter.api.Assertions.*;
 
+import java.lang.reflect.Field;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.SplittableRandom;
 import org.ampturn.units.Quantity;
 import org.junit.jupiter.api.Test;
 
@@ -41,6 +45,49 @@ class TableMaterialTest {
             for (double b = -2.3; b <= 2.3; b += 0.0137) {
                 double h = m.fieldAt(b);
                 assertEquals(b, m.fluxDensityAt(h), 1e-12, m.name() + " at B = " + b);
+            }
+        }
+    }
+
+    /** Every B-H table: the catalogue's (read by reflection, so a new one is covered), a roll-off material's, and RPN 14. */
+    static List<TableMaterial> tables() throws ReflectiveOperationException {
+        List<TableMaterial> out = new ArrayList<>();
+        out.add((TableMaterial) rpn14());
+        for (Field f : Materials.class.getFields()) {
+            Object v = f.get(null);
+            while (v instanceof LossyMaterial) { // a material with a core-loss model wraps its B-H curve
+                Field base = LossyMaterial.class.getDeclaredField("base");
+                base.setAccessible(true);
+                v = base.get(v);
+            }
+            if (v instanceof TableMaterial) out.add((TableMaterial) v);
+            if (v instanceof RollOffMaterial) out.add(tableOf((RollOffMaterial) v));
+        }
+        out.add(tableOf((RollOffMaterial) MagneticMaterial.rollOff("roll-off", 3000, Quantity.of(400, "A/m"), 2,
+                Quantity.of(1.6, "T"))));
+        assertTrue(out.size() >= 5, "tables found: " + out.size());
+        return out;
+    }
+
+    private static TableMaterial tableOf(RollOffMaterial r) throws ReflectiveOperationException {
+        Field f = RollOffMaterial.class.getDeclaredField("table");
+        f.setAccessible(true);
+        return (TableMaterial) f.get(r);
+    }
+
+    @Test
+    void fastInverseAgreesWithTheSafeguardedNewtonAndRoundTrips() throws ReflectiveOperationException {
+        // the safeguarded Newton iteration (bisection when a step leaves the bracket) converges to rounding: the reference
+        SplittableRandom r = new SplittableRandom(17);
+        for (TableMaterial t : tables()) {
+            double[][] p = t.points();
+            double top = p[1][p[1].length - 1];
+            for (int k = 0; k < 40_000; k++) {
+                double b = k < p[1].length ? p[1][k] : k % 3 == 0 ? top * Math.pow(10, -6 * r.nextDouble()) : top * r.nextDouble();
+                if (!(b > 0 && b < top)) continue;
+                double fast = t.fieldAt(b), reference = t.guardedInverse(b);
+                assertEquals(reference, fast, 1e-11 * reference, t.name() + " at B = " + b);
+                assertEquals(b, t.fluxDensityAt(fast), 1e-14 * Math.max(b, 1), t.name() + " round trip at B = " + b);
             }
         }
     }
