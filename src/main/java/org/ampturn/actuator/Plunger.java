@@ -451,8 +451,6 @@ public final class Plunger implements Armature {
         return Require.result("current", (phi * gapReluctance(metres) + ironLength * ironField(phi / area) + pathMmf) / turns);
     }
 
-    private static final double[] GX = {0, -0.5384693101056831, 0.5384693101056831, -0.9061798459386640, 0.9061798459386640};
-    private static final double[] GW = {0.5688888888888889, 0.4786286704993665, 0.4786286704993665, 0.2369268850561891, 0.2369268850561891};
 
     @Override
     public double fieldEnergyAt(double weberTurns, double metres) {
@@ -470,7 +468,7 @@ public final class Plunger implements Armature {
                 double h = b / panels, sum = 0;
                 for (int p = 0; p < panels; p++) {
                     double mid = (p + 0.5) * h;
-                    for (int k = 0; k < 5; k++) sum += GW[k] * iron.fieldAt(mid + 0.5 * h * GX[k]);
+                    for (int k = 0; k < 5; k++) sum += MagneticCircuit.GAUSS_W[k] * iron.fieldAt(mid + 0.5 * h * MagneticCircuit.GAUSS_X[k]);
                 }
                 ironEnergyDensity = sum * 0.5 * h;
             }
@@ -478,17 +476,7 @@ public final class Plunger implements Armature {
         }
         if (ex.path() != null) {
             MagneticCircuit c = ex.path();
-            if (c.isLinear()) {
-                w += 0.5 * phi * phi * c.reluctanceSI();
-            } else {
-                int panels = 8;
-                double h = phi / panels, sum = 0;
-                for (int p = 0; p < panels; p++) {
-                    double mid = (p + 0.5) * h;
-                    for (int k = 0; k < 5; k++) sum += GW[k] * c.mmfAt(mid + 0.5 * h * GX[k]);
-                }
-                w += sum * 0.5 * h;
-            }
+            w += c.energyAt(phi);
         }
         return Require.result("field energy", w);
     }

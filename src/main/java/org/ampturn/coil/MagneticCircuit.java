@@ -103,6 +103,26 @@ public sealed interface MagneticCircuit permits Core, AirGap, MagneticCircuit.Se
         return Quantity.of(Require.result("effective area C1/C2", c1() / c2()), Dimension.AREA);
     }
 
+    /**
+     * Magnetic energy ∫0^φ F dφ' (J) held in the circuit at flux φ (Wb): ½φ²ℛ when linear, else
+     * 5-point Gauss–Legendre on 8 panels of the circuit's own F(φ).
+     */
+    default double energyAt(double weber) {
+        org.ampturn.units.Require.finite("flux (Wb)", weber);
+        if (isLinear()) return org.ampturn.units.Require.result("energy", 0.5 * weber * weber * reluctanceSI());
+        int panels = 8;
+        double h = weber / panels, sum = 0;
+        for (int p = 0; p < panels; p++) {
+            double mid = (p + 0.5) * h;
+            for (int k = 0; k < 5; k++) sum += GAUSS_W[k] * mmfAt(mid + 0.5 * h * GAUSS_X[k]);
+        }
+        return org.ampturn.units.Require.result("energy", sum * 0.5 * h);
+    }
+
+    /** 5-point Gauss–Legendre nodes and weights on [−1, 1]. */
+    double[] GAUSS_X = {0, -0.5384693101056831, 0.5384693101056831, -0.9061798459386640, 0.9061798459386640};
+    double[] GAUSS_W = {0.5688888888888889, 0.4786286704993665, 0.4786286704993665, 0.2369268850561891, 0.2369268850561891};
+
     /** Effective (relative) permeability μ<sub>e</sub> = C1/(μ0·R): what a uniform core of l<sub>e</sub>, A<sub>e</sub> would need. */
     default double effectivePermeability() {
         return c1() / (MU0 * reluctanceSI());
