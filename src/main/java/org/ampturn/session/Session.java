@@ -80,10 +80,12 @@ public final class Session implements AutoCloseable {
     private volatile long generation;
 
     private volatile SessionEngine engine;
-    /** Past this many snippets the session renews itself (see {@link #renew()}). */
+    /** The fewest snippets between renewals (see {@link #renew()}). */
     private int renewAt = RENEW_AT;
-    /** The snippet count at which renewal was last tried. */
-    private long renewTriedAt;
+    /** The snippet count of the engine just after its last renewal (0 for the first engine). */
+    private long renewedAt;
+    /** The snippet count at which renewal is next considered. */
+    private long nextRenewal = RENEW_AT;
     private int renewals;
 
     private Session(JShell shell, SessionImports library, SessionEngine engine) {
@@ -148,16 +150,29 @@ public final class Session implements AutoCloseable {
         return builder.build();
     }
 
-    /** Snippets after which a session renews itself: past about a thousand, JShell's cost per entry grows with their number. */
+    /** The fewest snippets between renewals: past about a thousand, JShell's cost per entry grows with their number. */
     static final int RENEW_AT = 1000;
 
-    /** The most declarations a renewal moves (each is compiled again, so a renewal pauses for a few seconds at most). */
-    static final int MAX_MOVED = 150;
+    /**
+     * Snippets between renewals per declaration a renewal moves. Each moved declaration is compiled
+     * again (5-15 ms, more the more are already moved: every compile imports each live name), while
+     * each snippet held adds a few microseconds to every later entry; four snippets per declaration
+     * keeps the pauses a small share of the session's time.
+     */
+    static final int SNIPPETS_PER_MOVED = 4;
+
+    /**
+     * The most declarations a renewal moves: moving them is quadratic in their number (a few seconds
+     * for 300 on an idle machine), and past that many live names the per-entry cost is set by the
+     * names themselves, which a renewal cannot reduce.
+     */
+    static final int MAX_MOVED = 300;
 
     /** Another renewal threshold (tests). */
     void renewAt(int snippets) {
         synchronized (lock) {
             renewAt = snippets;
+            nextRenewal = renewedAt + snippets;
         }
     }
 
@@ -168,16 +183,44 @@ public final class Session implements AutoCloseable {
         }
     }
 
-    /** Renews the session when it holds enough snippets, and retries a refused renewal only after half as many again. Under the lock. */
+    /**
+     * Renews the session when it holds enough snippets for the declarations it would move: at least
+     * {@link #renewAt} since the last renewal, and {@value #SNIPPETS_PER_MOVED} per declaration. A
+     * refused renewal is tried again only after half as many snippets again. Under the lock.
+     */
     private void maybeRenew() {
         long count = shell.snippets().count();
-        if (count < renewAt || count < renewTriedAt + renewAt / 2) return;
-        renewTriedAt = count;
+        if (count < nextRenewal) return;
+        long due = renewedAt + Math.max(renewAt, SNIPPETS_PER_MOVED * (long) movable().size());
+        if (count < due) {
+            nextRenewal = due;
+            return;
+        }
         try {
-            if (renew()) renewTriedAt = 0;
+            if (renew()) {
+                renewedAt = shell.snippets().count();
+                nextRenewal = renewedAt + renewAt;
+                return;
+            }
         } catch (RuntimeException | LinkageError e) {
             Carry.clear(); // the old session goes on as it was
         }
+        nextRenewal = count + renewAt / 2;
+    }
+
+    /**
+     * The active declarations a renewal would move: imports, methods, variables and declared types
+     * (which refuse the renewal); not the session's own imports, nor an expression's value
+     * ({@code $1}); statements and expressions have nothing to move. Under the lock.
+     */
+    private List<Snippet> movable() {
+        return shell.snippets()
+                .filter(sn -> sn.kind() == Snippet.Kind.IMPORT || sn.kind() == Snippet.Kind.METHOD
+                        || sn.kind() == Snippet.Kind.VAR || sn.kind() == Snippet.Kind.TYPE_DECL)
+                .filter(sn -> shell.status(sn).isActive())
+                .filter(sn -> !preloaded.contains(sn))
+                .filter(sn -> !(sn instanceof VarSnippet v && v.name().startsWith("$")))
+                .collect(Collectors.toList());
     }
 
     /**
@@ -188,26 +231,25 @@ public final class Session implements AutoCloseable {
      * twice. It is refused, and the old session goes on, when the session holds something that could
      * not move unchanged: a class or record declared in it (its statics and its instances belong to
      * the old engine), or a value made by the old engine (a lambda, or one inside an array, collection
-     * or map); and when it holds more than {@value #MAX_MOVED} declarations. Each entry keeps the new
+     * or map); and when it holds more than {@value #MAX_MOVED} declarations. The values of expressions
+     * ({@code $1}, {@code $2}, names the console never shows) are not moved. Each entry keeps the new
      * snippets of what it declared, so {@link #undoLast()} works as before. Under the lock.
      *
      * @return true when the session was renewed
      */
     private boolean renew() {
-        List<Snippet> active = shell.snippets().filter(sn -> shell.status(sn).isActive()).collect(Collectors.toList());
-        // each moved declaration is compiled again (tens of ms): a session of very many names keeps its engine
-        if (active.size() - preloaded.size() > MAX_MOVED) return false;
+        List<Snippet> active = movable();
+        // each moved declaration is compiled again (about 5 ms): a session of very many names keeps its engine
+        if (active.size() > MAX_MOVED) return false;
         List<String> replay = new ArrayList<>();
         List<Snippet> replayed = new ArrayList<>(); // the old snippet of each line of replay
         Map<String, Object> carried = new java.util.HashMap<>();
         for (Snippet sn : active) {
-            if (preloaded.contains(sn)) continue; // the session's own imports: added again below
             if (sn instanceof TypeDeclSnippet) return false;
             if (sn instanceof ImportSnippet || sn instanceof MethodSnippet) {
                 replay.add(sn.source());
                 replayed.add(sn);
             } else if (sn instanceof VarSnippet v) {
-                if (v.name().startsWith("$")) continue; // an expression's value, already shown
                 if (failedVariables.contains(v.name())) {
                     replay.add(v.typeName() + " " + v.name() + ";");
                     replayed.add(sn);

@@ -75,4 +75,21 @@ class SessionRenewalTest {
         assertEquals(0, session.renewals(), "a lambda made by the session keeps the session as it is");
         assertEquals(List.of("  = 6.000"), eval("twice.applyAsDouble(3)"));
     }
+
+    @Test
+    void expressionValuesDoNotHoldTheSessionBackAndManyNamesWaitLonger() {
+        // 300 expressions leave 300 unnamed values ($1, $2, ...): they are not moved, so they do not count
+        for (int i = 0; i < 300; i++) eval("mm(" + i + ")");
+        assertTrue(session.renewals() >= 5, "renewed every 30 or so snippets: " + session.renewals());
+
+        session.close();
+        session = Session.start();
+        session.renewAt(30);
+        // 30 names to move: the session waits for four snippets per name (120) before it renews
+        for (int i = 0; i < 30; i++) eval("double v" + i + " = " + i + ";");
+        int more = 0;
+        while (session.renewals() == 0 && more < 300) eval("v1 + " + more++);
+        assertTrue(more >= 90 && more < 200, "renewed once past four snippets per name, after " + more + " more entries");
+        assertEquals(List.of("  = 29.00"), eval("v29"));
+    }
 }
