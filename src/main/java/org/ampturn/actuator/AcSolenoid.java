@@ -192,11 +192,16 @@ public final class AcSolenoid {
      * voltage (0 a rising zero crossing, 90 the peak) for {@code duration}. At a zero crossing the flux
      * is driven towards twice its steady peak; with a closed iron path that saturates, the first peaks
      * of current are many times the steady ones. {@link Transient#peakCurrent()} reads the inrush.
+     * The duration is at most 10 s and {@value #MAX_CYCLES} cycles.
      */
     public Transient switchOn(Quantity rmsVoltage, Quantity frequency, double phaseDegrees, Quantity gap, Quantity duration) {
         double v = volts(rmsVoltage), f = hertz(frequency);
         double g = Require.lengthOrZero("gap", gap);
         double d = Require.positive("duration", duration, Dimension.TIME, 10);
+        if (!(d * f <= MAX_CYCLES)) {
+            throw Require.fail("switch-on duration " + duration + " is " + Require.show(d * f) + " cycles of the supply; at most " + MAX_CYCLES
+                    + " cycles are run");
+        }
         int samples = (int) Math.min(2_000_001, Math.max(2001, Math.ceil(d * f * SAMPLES_PER_CYCLE) + 1));
         return Drive.sine(Quantity.of(v, Dimension.VOLTAGE), Quantity.of(f, Dimension.FREQUENCY)).withSwitchOnPhase(phaseDegrees)
                 .into(coilAt(g)).samples(samples).simulate(Quantity.of(d, Dimension.TIME));

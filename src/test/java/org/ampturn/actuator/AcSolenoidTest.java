@@ -168,6 +168,7 @@ class AcSolenoidTest {
         assertMessage("shaded fraction", () -> s.withShadingRing(1.2, mohm(1)));
         assertMessage("ring resistance", () -> s.withShadingRing(0.6, ohm(0)));
         assertMessage("leakage permeance", () -> s.withLeakage(nH(-1)));
+        assertMessage("switch-on duration", () -> s.switchOn(V(230), Hz(50_000), 0, s.closedGap(), ms(1000)));
         assertMessage("iron path", () -> AcSolenoid.of(TURNS, ohm(R), (MagneticCircuit) null, mm2(150), mm(3)));
         assertMessage("residual gap", () -> AcSolenoid.of(TURNS, ohm(R), Core.of("frame", mm(100), mm2(150), LINEAR), mm2(150), mm(3))
                 .holding(V(230), Hz(50)));
