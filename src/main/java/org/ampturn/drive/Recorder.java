@@ -7,8 +7,18 @@ final class Recorder {
     final double[] time, current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp,
             eSup, eDiss, eClamp, eStored;
     final double[] pMech, eMech, x, v, force, capV; // null unless the armature moves / there is a snubber
+    final double[] pCore, eCore; // null unless the circuit draws core loss
+    private final int coreIndex;
 
     Recorder(int n, boolean moves, boolean snub) {
+        this(n, moves, snub, -1);
+    }
+
+    /** coreIndex: the state index of the core-loss energy integral, or −1 without one. */
+    Recorder(int n, boolean moves, boolean snub, int coreIndex) {
+        this.coreIndex = coreIndex;
+        pCore = coreIndex >= 0 ? new double[n] : null;
+        eCore = coreIndex >= 0 ? new double[n] : null;
         time = new double[n];
         current = new double[n];
         lambda = new double[n];
@@ -55,5 +65,9 @@ final class Recorder {
             force[k] = o[O_F];
         }
         if (capV != null) capV[k] = s[VC];
+        if (eCore != null) {
+            pCore[k] = o[O_PCORE];
+            eCore[k] = s[coreIndex];
+        }
     }
 }

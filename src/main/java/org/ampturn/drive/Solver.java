@@ -28,7 +28,7 @@ final class Solver {
 
     // outputs of eval()
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
-            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_N = 12;
+            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_PCORE = 12, O_N = 13;
 
     /** Most switching segments (each PWM edge, comparator edge or event starts one) a run may take. */
     static final long MAX_SEGMENTS = 20_000_000L;
@@ -70,6 +70,9 @@ final class Solver {
     double t;
     final EddyLadder ladder;
     final int loops;   // loops of the ladder
+    /** Core loss drawn by the circuit (null without loss data), and the index of its energy integral in the state. */
+    final CoreLossBranch core;
+    final int ecore;
     final int dim;     // state size
     final double restitution;
     final double[] y;
@@ -87,6 +90,7 @@ final class Solver {
     final List<String> notes = new ArrayList<>();
     final List<Marker> markers = new ArrayList<>();
     final double[] scratch = new double[O_N];
+    private final double[] probeScratch = new double[O_N];
 
     // metrics
     double t63 = Double.NaN, t90 = Double.NaN, t99 = Double.NaN;
@@ -133,14 +137,17 @@ final class Solver {
         this.moves = load.moves();
         this.ladder = load.ladder();
         this.loops = ladder.sections();
-        this.dim = loops > 0 ? LAD + loops : DIM;
+        this.core = c.coil != null && c.coreLoss ? CoreLossBranch.of(c.coil, load.inductance() * Math.max(1e-9, Math.abs(c.drive.volts)
+                / Math.max(c.drive.sourceOhms + c.drive.switchOhms + load.resistance(), 1e-9))) : null;
+        this.ecore = core != null ? (loops > 0 ? LAD + loops : DIM) : -1;
+        this.dim = (loops > 0 ? LAD + loops : DIM) + (core != null ? 1 : 0);
         this.y = new double[dim];
         this.ladRate = new double[loops];
         this.restitution = load.restitution();
         this.sine = drive.scheme == Drive.Scheme.SINE;
         this.lastCycleFrom = sine && tEnd * drive.frequency >= 1 ? tEnd - 1 / drive.frequency : Double.NaN;
-        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0 && !sine;
-        this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0;
+        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0 && !sine && core == null;
+        this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0 && core == null;
         double rTot = rs + ron + rc;
         // a sine supply: the scale of the current is the inrush bound, twice the peak of the steady current of the small-signal L
         this.finalCurrent = sine ? 2 * Math.sqrt(2) * vs / Math.hypot(rTot, 2 * Math.PI * drive.frequency * load.inductance())
@@ -148,7 +155,8 @@ final class Solver {
         validate();
         // the recorder's arrays and the transient's copies of them
         org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0)));
-        this.rec = new Recorder(n, moves, snub);
+        this.rec = new Recorder(n, moves, snub, ecore);
+        if (core != null) notes.add(core.describe(c.coil.temperature().si()));
     }
 
     private static String q(double v, Dimension d) { return Quantity.of(v, d).toString(); }
@@ -211,6 +219,48 @@ final class Solver {
             nonFiniteLambda = lam;
             i = Math.copySign(1e150, lam);
         }
+        double pcore = 0, dl;
+        if (core != null) {
+            // the core-loss branch in parallel: the terminal current is i_m + i_c(λ̇), with λ̇ = a − b·i in every mode
+            core.coefficients(lam);
+            if (e == Elec.IDLE) {
+                branch(e, s, 0, o);
+                double im = load.currentAt(lam, x);
+                dl = Double.isFinite(im) ? core.idleRate(im) : 0;
+                pcore = -im * dl;
+            } else {
+                double a = branch(e, s, 0, o), b = a - branch(e, s, 1, o);
+                double im = i;
+                double rate = core.rate(a - b * im, b);
+                double ic = core.current(rate);
+                i = im + ic;
+                dl = branch(e, s, i, o);
+                pcore = ic * dl;
+            }
+        } else {
+            dl = branch(e, s, i, o);
+        }
+        if (e == Elec.IDLE) i = 0;
+        double pEddy = loops > 0 ? ladderRates(s, i, ladRate) : 0;
+        if (loops > 0 && e == Elec.IDLE) dl = ladRate[0]; // the open coil carries no current: λ follows the first loop
+        double f = moves ? magnetForce(s) : 0;
+        double acc = 0, pm = 0;
+        if (m == Mech.FREE) {
+            acc = (f - load.restoringForceAt(x, v)) / load.mass();
+            pm = f * v;
+        }
+        o[O_I] = i;
+        o[O_DLAM] = dl;
+        o[O_PCOIL] = i * i * rc;
+        o[O_PMECH] = pm;
+        o[O_F] = f;
+        o[O_ACC] = acc;
+        o[O_PEDDY] = pEddy;
+        o[O_PCORE] = pcore;
+    }
+
+    /** The mode's circuit at terminal current i: writes the switch voltage and the supply, drive, clamp and capacitor terms into o; returns dλ/dt. */
+    private double branch(Elec e, double[] s, double i, double[] o) {
         double vsw, dl, psup = 0, pdrv = 0, pcl = 0, dvc = 0;
         switch (e) {
             case ON:
@@ -258,28 +308,13 @@ final class Solver {
             default:
                 dl = 0;
                 vsw = vs;
-                i = 0;
         }
-        double pEddy = loops > 0 ? ladderRates(s, i, ladRate) : 0;
-        if (loops > 0 && e == Elec.IDLE) dl = ladRate[0]; // the open coil carries no current: λ follows the first loop
-        double f = moves ? magnetForce(s) : 0;
-        double acc = 0, pm = 0;
-        if (m == Mech.FREE) {
-            acc = (f - load.restoringForceAt(x, v)) / load.mass();
-            pm = f * v;
-        }
-        o[O_I] = i;
         o[O_VSW] = vsw;
-        o[O_DLAM] = dl;
         o[O_PSUP] = psup;
-        o[O_PCOIL] = i * i * rc;
         o[O_PDRV] = pdrv;
         o[O_PCL] = pcl;
-        o[O_PMECH] = pm;
-        o[O_F] = f;
         o[O_DVC] = dvc;
-        o[O_ACC] = acc;
-        o[O_PEDDY] = pEddy;
+        return dl;
     }
 
     /** The pull of the magnet: the actuator's, or the sum over the ladder's flux tubes. */
@@ -305,6 +340,10 @@ final class Solver {
 
     /** The coil current of a state (zero with the coil open and idle). */
     double coilCurrent(double[] s) {
+        if (core != null) {
+            eval(elec, mech, s, probeScratch);
+            return probeScratch[O_I];
+        }
         if (loops > 0) return elec == Elec.IDLE ? 0 : (s[LAM] - s[LAD]) / ladder.leakage;
         if (elec == Elec.IDLE && !moves) return 0;
         return load.currentAt(s[LAM], s[X]);
@@ -350,6 +389,7 @@ final class Solver {
             d[EEDDY] = scratch[O_PEDDY];
             System.arraycopy(ladRate, 0, d, LAD, loops);
         }
+        if (core != null) d[ecore] = scratch[O_PCORE];
     }
 
     double storedAt(double[] s) {
@@ -417,6 +457,7 @@ final class Solver {
             throw new TransientException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
                     + q(s[LAM], Dimension.FLUX) + "): the solution diverges (check the resistance and the core's saturation)");
         }
+        if (core != null) core.accept(tt, s[LAM], o[O_DLAM]);
         if (vsw > peakSw) { peakSw = vsw; peakSwT = tt; }
         if (inLastCycle) lastCyclePeak = Math.max(lastCyclePeak, Math.abs(i));
         if (i > peakI) { peakI = i; peakIT = tt; }
@@ -542,6 +583,7 @@ final class Solver {
     }
 
     private double currentNow() {
+        evalT = t;
         return coilCurrent(y);
     }
 
@@ -553,8 +595,9 @@ final class Solver {
         } else if (snub) {
             elec = Elec.CLAMP;
         } else {
-            elec = currentNow() > 0 ? Elec.CLAMP : Elec.IDLE;
-            if (elec == Elec.IDLE) y[LAM] = loops > 0 ? y[LAD] : 0;
+            elec = Elec.CLAMP; // the clamp conducts if the coil's current is above zero with it conducting
+            if (!(currentNow() > 0)) elec = Elec.IDLE;
+            if (elec == Elec.IDLE && core == null) y[LAM] = loops > 0 ? y[LAD] : 0;
         }
     }
 
@@ -638,7 +681,7 @@ final class Solver {
                 break;
             case CLAMP_ZERO:
                 elec = Elec.IDLE;
-                y[LAM] = loops > 0 ? y[LAD] : 0;
+                if (core == null) y[LAM] = loops > 0 ? y[LAD] : 0;
                 if (finalOff && Double.isNaN(decayZero)) {
                     decayZero = t - offAt;
                     markers.add(new Marker("current zero", tq(t), Quantity.of(0, Dimension.CURRENT), "current"));
