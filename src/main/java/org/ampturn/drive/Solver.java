@@ -85,6 +85,8 @@ final class Solver {
     boolean finalOff;
     boolean firstOn = true;
     double offCurrent = Double.NaN;
+    /** Direction of the current the clamp carries: +1, or −1 for a sine supply switched off at a negative current. */
+    double clampSign = 1;
 
     final Recorder rec;
     final List<String> notes = new ArrayList<>();
@@ -144,13 +146,15 @@ final class Solver {
         this.y = new double[dim];
         this.ladRate = new double[loops];
         this.restitution = load.restitution();
-        this.sine = drive.scheme == Drive.Scheme.SINE;
+        this.sine = drive.isAc();
         this.lastCycleFrom = sine && tEnd * drive.frequency >= 1 ? tEnd - 1 / drive.frequency : Double.NaN;
         this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0 && !sine && core == null;
         this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0 && core == null;
         double rTot = rs + ron + rc;
         // a sine supply: the scale of the current is the inrush bound, twice the peak of the steady current of the small-signal L
-        this.finalCurrent = sine ? 2 * Math.sqrt(2) * vs / Math.hypot(rTot, 2 * Math.PI * drive.frequency * load.inductance())
+        // (a rectified one: at least the DC bound √2·V/R)
+        double acBound = 2 * Math.sqrt(2) * vs / Math.hypot(rTot, 2 * Math.PI * drive.frequency * load.inductance());
+        this.finalCurrent = sine ? (drive.scheme != Drive.Scheme.SINE && rTot > 0 ? Math.max(acBound, Math.sqrt(2) * vs / rTot) : acBound)
                 : rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
         validate();
         // the recorder's arrays and the transient's copies of them
@@ -174,11 +178,18 @@ final class Solver {
             throw Require.fail("off time (" + sec(offAt) + ") is after the end of the run (" + sec(tEnd)
                     + "); simulate for longer or switch off earlier");
         }
-        if (drive.scheme == Drive.Scheme.SINE && (clamp != null || !Double.isNaN(offAt) || moves || loops > 0)) {
-            throw Require.fail("a sine supply drives a fixed coil with the switch closed for the whole run: "
-                    + "switching it off, clamps, moving armatures and eddy ladders are not modelled with it");
+        if (sine && (moves || loops > 0)) {
+            throw Require.fail("a sine supply drives a fixed coil: moving armatures and eddy ladders are not modelled with it");
         }
-        boolean opens = !Double.isNaN(offAt) || (drive.scheme != Drive.Scheme.DC && drive.scheme != Drive.Scheme.SINE);
+        if (sine && clamp != null && !acrossCoil) {
+            throw Require.fail("with a sine supply the clamp must sit across the coil (Clamp.diode(), zener(..), resistor(..)), not the "
+                    + clamp + ": a clamp across the switch would see the supply's changing voltage, which is not modelled");
+        }
+        if (drive.scheme == Drive.Scheme.HALF_WAVE && clamp == null) {
+            throw Require.fail("a half-wave rectified supply needs the coil's freewheel path in the negative half cycles: "
+                    + "add .clamp(Clamp.diode()) (or a zener or resistor clamp across the coil)");
+        }
+        boolean opens = !Double.isNaN(offAt) || (drive.scheme != Drive.Scheme.DC && !sine);
         if (opens && clamp == null) {
             throw Require.fail("the switch opens during this run but no clamp was given: add .clamp(Clamp.diode()), "
                     + "or Clamp.none(V(..)) to let the switch avalanche");
@@ -292,9 +303,10 @@ final class Solver {
                     pdrv = i * i * rs;
                     pcl = i * i * rcl;
                 } else if (acrossCoil) {
-                    double vcl = v0 + rcl * i;
+                    // clampSign −1: a sine supply switched off at a negative current, the clamp taken as bidirectional
+                    double vcl = clampSign * v0 + rcl * i;
                     dl = -vcl - i * rc;
-                    vsw = vs + vcl;
+                    vsw = (sine ? drive.voltsAt(evalT) : vs) + vcl;
                     pcl = vcl * i;
                 } else {
                     double vcl = v0 + rcl * i;
@@ -501,6 +513,10 @@ final class Solver {
         if (finalOff) return next;
         if (sine && !inLastCycle && lastCycleFrom > t) next = Math.min(next, lastCycleFrom);
         if (timedPeak() && drive.peakSeconds > t) next = Math.min(next, drive.peakSeconds);
+        if (drive.scheme == Drive.Scheme.HALF_WAVE) { // the series diode commutates at the supply's zero crossings
+            double edge = ((drive.halfCycleAt(t) + 1) / 2.0 - drive.phaseDegrees / 360) / drive.frequency;
+            if (edge > t) next = Math.min(next, edge);
+        }
         double f = drive.frequency;
         if (drive.scheme == Drive.Scheme.PWM || (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && (holdPhase || peakLimited)
                 && drive.regulation == Drive.Regulation.PWM)) {
@@ -541,6 +557,10 @@ final class Solver {
             return;
         }
         if (timedPeak() && Math.abs(t - drive.peakSeconds) <= 1e-12 * Math.max(tEnd, 1e-300)) beginHold();
+        if (drive.scheme == Drive.Scheme.HALF_WAVE) {
+            if (!finalOff) setSwitch(drive.halfCycleAt(t) % 2 == 0);
+            return;
+        }
         double f = drive.frequency;
         double phase = t * f - Math.floor(t * f + 1e-9);
         boolean periodStart = Math.abs(phase) < 1e-6;
@@ -596,7 +616,13 @@ final class Solver {
             elec = Elec.CLAMP;
         } else {
             elec = Elec.CLAMP; // the clamp conducts if the coil's current is above zero with it conducting
-            if (!(currentNow() > 0)) elec = Elec.IDLE;
+            clampSign = 1;
+            double i = currentNow();
+            if (drive.scheme == Drive.Scheme.SINE && i < 0) { // a bidirectional clamp carries a negative current on
+                clampSign = -1;
+                i = currentNow();
+            }
+            if (!(clampSign * i > 0)) elec = Elec.IDLE;
             if (elec == Elec.IDLE && core == null) y[LAM] = loops > 0 ? y[LAD] : 0;
         }
     }
@@ -626,10 +652,10 @@ final class Solver {
             if (ph && holdPhase && drive.regulation == Drive.Regulation.HYSTERETIC) {
                 ev.add(new Ev(Ev.Kind.CURRENT, drive.holdAmps - drive.band / 2, -1, Ev.Act.HOLD_LOW));
             }
-            if (elec == Elec.CLAMP && !snub) ev.add(new Ev(Ev.Kind.CURRENT, 0, -1, Ev.Act.CLAMP_ZERO));
+            if (elec == Elec.CLAMP && !snub) ev.add(new Ev(Ev.Kind.CURRENT, 0, clampSign > 0 ? -1 : 1, Ev.Act.CLAMP_ZERO));
             if (finalOff && snub && Double.isNaN(decayZero)) ev.add(new Ev(Ev.Kind.CURRENT, 0, -1, Ev.Act.SNUBBER_ZERO));
-            if (finalOff && elec != Elec.IDLE && Double.isNaN(decay1pct) && offCurrent > 0) {
-                ev.add(new Ev(Ev.Kind.CURRENT, 0.01 * offCurrent, -1, Ev.Act.DECAY_1PCT));
+            if (finalOff && elec != Elec.IDLE && Double.isNaN(decay1pct) && offCurrent != 0 && !Double.isNaN(offCurrent)) {
+                ev.add(new Ev(Ev.Kind.CURRENT, 0.01 * offCurrent, offCurrent > 0 ? -1 : 1, Ev.Act.DECAY_1PCT));
             }
         }
         if (!Double.isNaN(probe) && Double.isNaN(probeTime) && elec != Elec.IDLE) {
@@ -794,6 +820,7 @@ final class Solver {
         elec = Elec.ON;
         switchOn = true;
         if (drive.scheme == Drive.Scheme.PWM) startCycle();
+        if (drive.scheme == Drive.Scheme.HALF_WAVE && drive.halfCycleAt(0) % 2 != 0) setSwitch(false); // switched on in a negative half
         if (!Double.isNaN(offAt) && offAt == 0) scheduledEdge();
         Stepper stepper = closedForm ? new ClosedFormStepper(this)
                 : snubberClosedForm ? new SnubberStepper(this) : new OdeStepper(this, circuit.relTol);

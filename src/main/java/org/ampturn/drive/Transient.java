@@ -90,7 +90,7 @@ public final class Transient {
         markers = Collections.unmodifiableList(mk);
 
         List<String> nt = new ArrayList<>(sv.notes);
-        if (sv.finalOff && Double.isNaN(sv.decayZero) && sv.offCurrent > 0) {
+        if (sv.finalOff && Double.isNaN(sv.decayZero) && Math.abs(sv.offCurrent) > 0) {
             nt.add(Double.isNaN(sv.decay1pct) ? "the current had not decayed to 1 % of its turn-off value by the end of the run"
                     : "the current only approaches zero; the decay time is the time to 1 % of the turn-off current");
         }
