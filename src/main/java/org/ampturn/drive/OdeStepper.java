@@ -79,6 +79,10 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
             for (int k = 0; k < sv.loops; k++) scale[LAD + k] = lamRef;
         }
         if (sv.core != null) scale[sv.ecore] = 1e-6 * eRef;
+        if (sv.cp != null) {
+            scale[sv.lam2] = lamRef * Math.sqrt(sv.cp.l2 / sv.cp.l1);
+            scale[sv.esec] = 1e-6 * eRef;
+        }
         double[] abs = new double[sv.dim];
         double[] rel = new double[sv.dim];
         for (int k = 0; k < sv.dim; k++) {
@@ -122,7 +126,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     @Override
     public double advance(double t0, double t1, double[] y, List<Ev> evs, int[] fired) {
         fired[0] = -1;
-        boolean still = sv.elec == Elec.IDLE && sv.mech != Mech.FREE && sv.loops == 0 && sv.core == null;
+        boolean still = sv.elec == Elec.IDLE && sv.mech != Mech.FREE && sv.loops == 0 && sv.core == null && sv.cp == null;
         if (still || t1 - t0 <= 1e-12 * Math.max(Math.abs(t1), sv.tEnd)) {
             for (int k = sv.nextSample(); k < sv.n && sv.sampleTime(k) <= t1; k++) sv.record(k, y);
             return t1;

@@ -8,15 +8,17 @@ final class Recorder {
             eSup, eDiss, eClamp, eStored;
     final double[] pMech, eMech, x, v, force, capV; // null unless the armature moves / there is a snubber
     final double[] pCore, eCore; // null unless the circuit draws core loss
+    final double[] i2; // null unless there is a coupled secondary winding
     private final int coreIndex;
 
     Recorder(int n, boolean moves, boolean snub) {
-        this(n, moves, snub, -1);
+        this(n, moves, snub, -1, false);
     }
 
-    /** coreIndex: the state index of the core-loss energy integral, or −1 without one. */
-    Recorder(int n, boolean moves, boolean snub, int coreIndex) {
+    /** coreIndex: the state index of the core-loss energy integral, or −1 without one; secondary: record its current. */
+    Recorder(int n, boolean moves, boolean snub, int coreIndex, boolean secondary) {
         this.coreIndex = coreIndex;
+        i2 = secondary ? new double[n] : null;
         pCore = coreIndex >= 0 ? new double[n] : null;
         eCore = coreIndex >= 0 ? new double[n] : null;
         time = new double[n];
@@ -65,6 +67,7 @@ final class Recorder {
             force[k] = o[O_F];
         }
         if (capV != null) capV[k] = s[VC];
+        if (i2 != null) i2[k] = o[O_I2];
         if (eCore != null) {
             pCore[k] = o[O_PCORE];
             eCore[k] = s[coreIndex];

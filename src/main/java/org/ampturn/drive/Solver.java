@@ -28,7 +28,7 @@ final class Solver {
 
     // outputs of eval()
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
-            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_PCORE = 12, O_N = 13;
+            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_PCORE = 12, O_I2 = 13, O_DLAM2 = 14, O_PSEC = 15, O_N = 16;
 
     /** Most switching segments (each PWM edge, comparator edge or event starts one) a run may take. */
     static final long MAX_SEGMENTS = 20_000_000L;
@@ -73,6 +73,9 @@ final class Solver {
     /** Core loss drawn by the circuit (null without loss data), and the index of its energy integral in the state. */
     final CoreLossBranch core;
     final int ecore;
+    /** A coupled secondary winding (null without), and the indices of its flux linkage and loss integral in the state. */
+    final Coupling cp;
+    final int lam2, esec;
     final int dim;     // state size
     final double restitution;
     final double[] y;
@@ -139,17 +142,21 @@ final class Solver {
         this.moves = load.moves();
         this.ladder = load.ladder();
         this.loops = ladder.sections();
-        this.core = c.coil != null && c.coreLoss ? CoreLossBranch.of(c.coil, load.inductance() * Math.max(1e-9, Math.abs(c.drive.volts)
+        this.core = c.coil != null && c.coreLoss && c.secondary == null ? CoreLossBranch.of(c.coil, load.inductance() * Math.max(1e-9, Math.abs(c.drive.volts)
                 / Math.max(c.drive.sourceOhms + c.drive.switchOhms + load.resistance(), 1e-9))) : null;
         this.ecore = core != null ? (loops > 0 ? LAD + loops : DIM) : -1;
-        this.dim = (loops > 0 ? LAD + loops : DIM) + (core != null ? 1 : 0);
+        this.cp = c.secondary != null ? new Coupling(c.secondary, load.inductance()) : null;
+        int base = (loops > 0 ? LAD + loops : DIM) + (core != null ? 1 : 0);
+        this.lam2 = cp != null ? base : -1;
+        this.esec = cp != null ? base + 1 : -1;
+        this.dim = base + (cp != null ? 2 : 0);
         this.y = new double[dim];
         this.ladRate = new double[loops];
         this.restitution = load.restitution();
         this.sine = drive.isAc();
         this.lastCycleFrom = sine && tEnd * drive.frequency >= 1 ? tEnd - 1 / drive.frequency : Double.NaN;
-        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0 && !sine && core == null;
-        this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0 && core == null;
+        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0 && !sine && core == null && cp == null;
+        this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0 && core == null && cp == null;
         double rTot = rs + ron + rc;
         // a sine supply: the scale of the current is the inrush bound, twice the peak of the steady current of the small-signal L
         // (a rectified one: at least the DC bound √2·V/R)
@@ -159,7 +166,7 @@ final class Solver {
         validate();
         // the recorder's arrays and the transient's copies of them
         org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0)));
-        this.rec = new Recorder(n, moves, snub, ecore);
+        this.rec = new Recorder(n, moves, snub, ecore, cp != null);
         if (core != null) notes.add(core.describe(c.coil.temperature().si()));
     }
 
@@ -177,6 +184,9 @@ final class Solver {
         if (!Double.isNaN(offAt) && offAt > tEnd) {
             throw Require.fail("off time (" + sec(offAt) + ") is after the end of the run (" + sec(tEnd)
                     + "); simulate for longer or switch off earlier");
+        }
+        if (cp != null && !load.linear()) {
+            throw Require.fail("a coupled secondary winding needs a linear coil: " + load.describe() + " is not (its core saturates)");
         }
         if (sine && (moves || loops > 0)) {
             throw Require.fail("a sine supply drives a fixed coil: moving armatures and eddy ladders are not modelled with it");
@@ -222,6 +232,10 @@ final class Solver {
 
     /** Current, switch voltage, dλ/dt, powers, force and acceleration in a mode. */
     void eval(Elec e, Mech m, double[] s, double[] o) {
+        if (cp != null) {
+            evalCoupled(e, s, o);
+            return;
+        }
         double lam = s[LAM], x = s[X], v = s[V];
         double i = loops > 0 ? (e == Elec.IDLE ? 0 : (lam - s[LAD]) / ladder.leakage)
                 : e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
@@ -329,6 +343,47 @@ final class Solver {
         return dl;
     }
 
+    /** eval() with a coupled secondary winding (fixed linear coil): both windings' currents from their flux linkages. */
+    private void evalCoupled(Elec e, double[] s, double[] o) {
+        boolean idle = e == Elec.IDLE;
+        double l1 = s[LAM], l2 = s[lam2];
+        double i1 = cp.i1(l1, l2, idle), i2 = cp.i2(l1, l2, idle);
+        double dl2on = -cp.diodeVolts - cp.loopOhms * i2, dl1, dl2;
+        if (!idle) {
+            dl1 = branch(e, s, i1, o);
+            dl2 = cp.on ? dl2on : cp.m / cp.l1 * dl1;
+        } else {
+            branch(e, s, 0, o);
+            dl2 = cp.on ? dl2on : 0;
+            dl1 = cp.on ? cp.m / cp.l2 * dl2 : 0;
+            o[O_VSW] = vs - dl1; // the open coil shows the secondary's voltage, reflected
+        }
+        o[O_I] = i1;
+        o[O_DLAM] = dl1;
+        o[O_PCOIL] = i1 * i1 * rc;
+        o[O_PMECH] = 0;
+        o[O_F] = 0;
+        o[O_ACC] = 0;
+        o[O_PEDDY] = 0;
+        o[O_PCORE] = 0;
+        o[O_I2] = i2;
+        o[O_DLAM2] = dl2;
+        o[O_PSEC] = cp.on ? i2 * (cp.diodeVolts + cp.loopOhms * i2) : 0;
+    }
+
+    /** A diode-loaded secondary starts or stops conducting where the state says so (after a switching edge). */
+    private void settleSecondary() {
+        if (cp == null || !cp.diode) return;
+        evalT = t;
+        if (!cp.on) {
+            eval(elec, mech, y, probeScratch);
+            if (probeScratch[O_DLAM2] < -cp.diodeVolts) cp.on = true;
+        } else {
+            eval(elec, mech, y, probeScratch);
+            if (!(probeScratch[O_I2] > 0) && !(probeScratch[O_DLAM2] > 0)) cp.on = false;
+        }
+    }
+
     /** The pull of the magnet: the actuator's, or the sum over the ladder's flux tubes. */
     double magnetForce(double[] s) {
         if (loops == 0) return load.forceAt(s[LAM], s[X]);
@@ -352,7 +407,7 @@ final class Solver {
 
     /** The coil current of a state (zero with the coil open and idle). */
     double coilCurrent(double[] s) {
-        if (core != null) {
+        if (core != null || cp != null) {
             eval(elec, mech, s, probeScratch);
             return probeScratch[O_I];
         }
@@ -402,11 +457,18 @@ final class Solver {
             System.arraycopy(ladRate, 0, d, LAD, loops);
         }
         if (core != null) d[ecore] = scratch[O_PCORE];
+        if (cp != null) {
+            d[lam2] = scratch[O_DLAM2];
+            d[esec] = scratch[O_PSEC];
+        }
     }
 
     double storedAt(double[] s) {
         double w;
-        if (loops == 0) {
+        if (cp != null) {
+            boolean idle = elec == Elec.IDLE;
+            w = 0.5 * (cp.i1(s[LAM], s[lam2], idle) * s[LAM] + cp.i2(s[LAM], s[lam2], idle) * s[lam2]);
+        } else if (loops == 0) {
             w = load.fieldEnergyAt(s[LAM], s[X]);
         } else {
             double i = elec == Elec.IDLE ? 0 : (s[LAM] - s[LAD]) / ladder.leakage;
@@ -425,6 +487,12 @@ final class Solver {
         switch (ev.kind) {
             case CURRENT: return coilCurrent(s) - ev.level;
             case POSITION: return s[X] - ev.level;
+            case SECONDARY_CURRENT:
+                eval(elec, mech, s, probeScratch);
+                return probeScratch[O_I2] - ev.level;
+            case SECONDARY_VOLTAGE:
+                eval(elec, mech, s, probeScratch);
+                return probeScratch[O_DLAM2] - ev.level;
             default:
                 // the magnetic force grows as λ², so F − Fr can dip below zero and back within one step as λ
                 // swings through zero; ±√F − √Fr changes sign once, where F − Fr does
@@ -623,7 +691,7 @@ final class Solver {
                 i = currentNow();
             }
             if (!(clampSign * i > 0)) elec = Elec.IDLE;
-            if (elec == Elec.IDLE && core == null) y[LAM] = loops > 0 ? y[LAD] : 0;
+            if (elec == Elec.IDLE && core == null && cp == null) y[LAM] = loops > 0 ? y[LAD] : 0;
         }
     }
 
@@ -657,6 +725,10 @@ final class Solver {
             if (finalOff && elec != Elec.IDLE && Double.isNaN(decay1pct) && offCurrent != 0 && !Double.isNaN(offCurrent)) {
                 ev.add(new Ev(Ev.Kind.CURRENT, 0.01 * offCurrent, offCurrent > 0 ? -1 : 1, Ev.Act.DECAY_1PCT));
             }
+        }
+        if (cp != null && cp.diode) {
+            ev.add(cp.on ? new Ev(Ev.Kind.SECONDARY_CURRENT, 0, -1, Ev.Act.SECONDARY_OFF)
+                    : new Ev(Ev.Kind.SECONDARY_VOLTAGE, -cp.diodeVolts, -1, Ev.Act.SECONDARY_ON));
         }
         if (!Double.isNaN(probe) && Double.isNaN(probeTime) && elec != Elec.IDLE) {
             ev.add(new Ev(Ev.Kind.CURRENT, probe, 1, Ev.Act.PROBE));
@@ -707,7 +779,7 @@ final class Solver {
                 break;
             case CLAMP_ZERO:
                 elec = Elec.IDLE;
-                if (core == null) y[LAM] = loops > 0 ? y[LAD] : 0;
+                if (core == null && cp == null) y[LAM] = loops > 0 ? y[LAD] : 0;
                 if (finalOff && Double.isNaN(decayZero)) {
                     decayZero = t - offAt;
                     markers.add(new Marker("current zero", tq(t), Quantity.of(0, Dimension.CURRENT), "current"));
@@ -734,6 +806,12 @@ final class Solver {
                 break;
             case PROBE:
                 probeTime = t;
+                break;
+            case SECONDARY_ON:
+                cp.on = true;
+                break;
+            case SECONDARY_OFF:
+                cp.on = false;
                 break;
             case HIT_OPEN: {
                 double impact = Math.abs(y[V]);
@@ -848,6 +926,7 @@ final class Solver {
             observe(t, y);
             if (fired[0] >= 0) fire(evs.get(fired[0]));
             if (atEdge) scheduledEdge();
+            settleSecondary();
             observe(t, y);
             if (t == lastT) {
                 if (++stuck > 200) {

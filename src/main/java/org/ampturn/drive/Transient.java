@@ -28,7 +28,7 @@ public final class Transient {
     private final Circuit source;
     private final List<Signal> signals;
     private final Signal current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp, pMech,
-            eSup, eDiss, eClamp, eStored, eMech, position, speed, force, capV, pCore, eCore;
+            eSup, eDiss, eClamp, eStored, eMech, position, speed, force, capV, pCore, eCore, i2;
     private final Metrics metrics;
     private final EnergyLedger energy;
     private final List<Marker> markers;
@@ -63,6 +63,7 @@ public final class Transient {
         speed = sv.moves ? add(all, "speed", Dimension.VELOCITY, t, r.v) : null;
         force = sv.moves ? add(all, "magnetic force", Dimension.FORCE, t, r.force) : null;
         capV = sv.snub ? add(all, "snubber capacitor voltage", Dimension.VOLTAGE, t, r.capV) : null;
+        i2 = r.i2 != null ? add(all, "secondary current", Dimension.CURRENT, t, r.i2) : null;
         pCore = r.pCore != null ? add(all, "core loss power", Dimension.POWER, t, r.pCore) : null;
         eCore = r.eCore != null ? add(all, "core loss energy", Dimension.ENERGY, t, r.eCore) : null;
         signals = Collections.unmodifiableList(all);
@@ -70,9 +71,9 @@ public final class Transient {
         double[] y = sv.y;
         double stored = sv.storedAt(y) - sv.initialStored;
         energy = new EnergyLedger(y[Solver.ESUP], y[Solver.ECOIL], y[Solver.EDRV], y[Solver.ECL], stored, y[Solver.EMECH],
-                sv.loops > 0 ? y[Solver.EEDDY] : 0, sv.core != null ? y[sv.ecore] : 0);
+                sv.loops > 0 ? y[Solver.EEDDY] : 0, sv.core != null ? y[sv.ecore] : 0, sv.cp != null ? y[sv.esec] : 0);
 
-        double tau = sv.load.linear() && !sv.moves ? sv.load.inductance() / (sv.rs + sv.ron + sv.rc) : sv.t63;
+        double tau = sv.load.linear() && !sv.moves && sv.cp == null ? sv.load.inductance() / (sv.rs + sv.ron + sv.rc) : sv.t63;
         metrics = new Metrics(tq(tau), tq(sv.t63), tq(sv.t90), tq(sv.t99),
                 Quantity.of(sv.finalCurrent, Dimension.CURRENT), Quantity.of(sv.peakI, Dimension.CURRENT),
                 Quantity.of(sv.peakSw, Dimension.VOLTAGE), Quantity.of(sv.peakStored, Dimension.ENERGY),
@@ -160,6 +161,8 @@ public final class Transient {
     public Signal dissipatedEnergy() { return eDiss; }
     /** Cumulative clamp energy over time (the total is {@code metrics().clampEnergy()}). */
     public Signal clampEnergy() { return eClamp; }
+    /** Current of the coupled secondary winding, into its dotted end; only with {@code Circuit.withSecondary}. */
+    public Signal secondaryCurrent() { return require(i2, "a coupled secondary winding"); }
     /** Core-loss power drawn by the coil's core-loss branch; only for a coil whose core has loss data. */
     public Signal coreLossPower() { return require(pCore, "a core with loss data"); }
     /** Cumulative core-loss energy (the total is {@code energy().core()}); only for a coil whose core has loss data. */
