@@ -51,6 +51,11 @@ final class CoreLossBranch {
     private final double[] bLast, bPrev, bNow, gNow;
     private double prevT = Double.NaN, prevLam, prevRate;
     private int dir;
+    /** Each piece's dB/dλ when the circuit's flux split is linear (series parts, or linear materials); null otherwise. */
+    private final double[] linearG;
+    private final double[] gPowAlpha;
+    /** The last rate solved, to start the next solve from. */
+    private double lastRate;
 
     private CoreLossBranch(WoundCoil coil, int[] piece, double[] vol, double[] ki, double[] alpha, double[] beta, double lamRef) {
         this.circuit = coil.circuit();
@@ -71,6 +76,29 @@ final class CoreLossBranch {
         this.gNow = new double[p];
         this.lamRef = lamRef;
         this.tpLast = 0; // the run starts from rest: λ = 0 is the first turning point
+        this.linearG = linearSplit();
+        this.gPowAlpha = new double[p];
+        if (linearG != null) for (int k = 0; k < p; k++) gPowAlpha[k] = Math.pow(Math.abs(linearG[k]), alpha[k]);
+    }
+
+    /** dB_k/dλ of each piece if B_k/λ is the same at flux linkages over twelve decades up to 1e3·lamRef (a linear split); else null. */
+    private double[] linearSplit() {
+        double[] g = new double[piece.length], b = new double[piece.length];
+        try {
+            for (int j = 0; j <= 12; j++) {
+                double lam = lamRef * Math.pow(10, 3 - j);
+                densities(lam, b);
+                for (int k = 0; k < piece.length; k++) {
+                    double gk = b[k] / lam;
+                    if (!Double.isFinite(gk)) return null;
+                    if (j == 0) g[k] = gk;
+                    else if (!(Math.abs(gk - g[k]) <= 1e-12 * Math.abs(g[k]))) return null;
+                }
+            }
+        } catch (RuntimeException outsideTheModel) {
+            return null;
+        }
+        return g;
     }
 
     /** The branch of a coil wound on a core with loss data, at the coil's temperature; null for any other coil. */
@@ -109,6 +137,18 @@ final class CoreLossBranch {
 
     /** Sets the coefficients of |λ̇|^(α−1) for the state λ (B_k, dB_k/dλ by a central difference, the causal swing). */
     void coefficients(double lambda) {
+        if (linearG != null) {
+            cSum = 0;
+            for (int k = 0; k < piece.length; k++) {
+                double b = linearG[k] * lambda;
+                double swing = Math.abs(b - bLast[k]);
+                if (hasPrev) swing = Math.max(swing, Math.abs(bLast[k] - bPrev[k]));
+                double ck = swing == 0 ? 0 : vol[k] * ki[k] * Math.pow(swing, beta[k] - alpha[k]) * gPowAlpha[k];
+                c[k] = Double.isFinite(ck) ? ck : 0;
+                cSum += c[k];
+            }
+            return;
+        }
         double h = 1e-6 * Math.abs(lambda) + 1e-9 * lamRef;
         next[0] = 0;
         circuit.fluxDensities((lambda + h) / turns, outHi, next);
@@ -143,23 +183,35 @@ final class CoreLossBranch {
         return s;
     }
 
-    /** λ̇ that solves λ̇ + r·i_c(λ̇) = e (a mode with λ̇ = a − r·i and e = a − r·i_m). */
+    /**
+     * λ̇ that solves λ̇ + r·i_c(λ̇) = e (a mode with λ̇ = a − r·i and e = a − r·i_m), to 1e-12 of e: the circuit
+     * takes its voltage from the current this gives, so the ledger holds exactly whatever the solve's error.
+     */
     double rate(double e, double r) {
         if (e == 0 || !(r > 0) || cSum == 0) return e;
         double lo = Math.min(0, e), hi = Math.max(0, e);
-        double x = e;
+        double x = lastRate > lo && lastRate < hi ? lastRate : e;
         for (int it = 0; it < 100; it++) {
-            double f = x + r * current(x) - e;
-            if (f == 0) return x;
+            double ic, di;
+            if (c.length == 1) { // one piece: i_c and its slope from one power
+                double a = Math.abs(x), pw = Math.pow(a, alpha[0] - 1);
+                ic = Math.copySign(c[0] * pw, x);
+                di = a > 0 ? c[0] * (alpha[0] - 1) * pw / a : Double.POSITIVE_INFINITY;
+            } else {
+                ic = current(x);
+                di = slope(x);
+            }
+            double f = x + r * ic - e;
+            if (f == 0) return lastRate = x;
             if (f > 0) hi = x;
             else lo = x;
-            double d = 1 + r * slope(x);
+            double d = 1 + r * di;
             double xn = x - f / d;
             if (!(xn > lo && xn < hi)) xn = 0.5 * (lo + hi);
-            if (Math.abs(xn - x) <= 1e-15 * Math.abs(e) || hi - lo <= 1e-15 * Math.abs(e)) return xn;
+            if (Math.abs(xn - x) <= 1e-12 * Math.abs(e) || hi - lo <= 1e-12 * Math.abs(e)) return lastRate = xn;
             x = xn;
         }
-        return x;
+        return lastRate = x;
     }
 
     /** λ̇ with the coil open: i_c(λ̇) = −i_m (0 when the core has no loss coefficient at this state). */
