@@ -168,6 +168,9 @@ final class Solver {
         org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0)));
         this.rec = new Recorder(n, moves, snub, ecore, cp != null);
         if (core != null) notes.add(core.describe(c.coil.temperature().si()));
+        if (cp != null && c.coil != null && c.coreLoss && CoreLossBranch.of(c.coil, 1) != null) {
+            notes.add("the core's loss is left out of the circuit with a coupled secondary winding (the ledger has no core-loss entry)");
+        }
     }
 
     private static String q(double v, Dimension d) { return Quantity.of(v, d).toString(); }
