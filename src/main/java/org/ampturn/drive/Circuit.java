@@ -18,6 +18,8 @@ public final class Circuit {
     final int samples;
     final double relTol;
     final boolean numeric;
+    final boolean coreLoss;     // draw the core's loss through a core-loss branch when the coil has loss data
+    final Secondary secondary;  // a coupled second winding, or null
 
     /** Output samples unless {@link #samples(int)} says otherwise. */
     public static final int DEFAULT_SAMPLES = 2001;
@@ -25,6 +27,13 @@ public final class Circuit {
     public static final double DEFAULT_TOLERANCE = 1e-9;
 
     private Circuit(Drive drive, Coil coil, Armature armature, Clamp clamp, double offAt, int samples, double relTol, boolean numeric) {
+        this(drive, coil, armature, clamp, offAt, samples, relTol, numeric, true, null);
+    }
+
+    private Circuit(Drive drive, Coil coil, Armature armature, Clamp clamp, double offAt, int samples, double relTol, boolean numeric,
+                    boolean coreLoss, Secondary secondary) {
+        this.coreLoss = coreLoss;
+        this.secondary = secondary;
         this.drive = drive;
         this.coil = coil;
         this.armature = armature;
@@ -51,13 +60,13 @@ public final class Circuit {
     /** The switch opens for good at {@code time}, into the clamp given by {@link #clamp(Clamp)}. */
     public Circuit offAt(Quantity time) {
         double t = Require.inRange("off time", time, Dimension.TIME, 0, MAX_DURATION);
-        return new Circuit(drive, coil, armature, clamp, t, samples, relTol, numeric);
+        return new Circuit(drive, coil, armature, clamp, t, samples, relTol, numeric, coreLoss, secondary);
     }
 
     /** The clamp that carries the current whenever the switch is open. */
     public Circuit clamp(Clamp c) {
         if (c == null) throw Require.fail("clamp is missing (null); use Clamp.none(V(..)) for none");
-        return new Circuit(drive, coil, armature, c, offAt, samples, relTol, numeric);
+        return new Circuit(drive, coil, armature, c, offAt, samples, relTol, numeric, coreLoss, secondary);
     }
 
     /** The same circuit with the coil at a temperature (its resistance changes). */
@@ -67,8 +76,8 @@ public final class Circuit {
             throw Require.fail("coil temperature must be an absolute temperature such as degC(80), got " + temperature);
         }
         return coil != null
-                ? new Circuit(drive, coil.atTemperature(temperature), null, clamp, offAt, samples, relTol, numeric)
-                : new Circuit(drive, null, armature.atTemperature(temperature), clamp, offAt, samples, relTol, numeric);
+                ? new Circuit(drive, coil.atTemperature(temperature), null, clamp, offAt, samples, relTol, numeric, coreLoss, secondary)
+                : new Circuit(drive, null, armature.atTemperature(temperature), clamp, offAt, samples, relTol, numeric, coreLoss, secondary);
     }
 
     /** Longest run solved (s): a day. */
@@ -77,18 +86,38 @@ public final class Circuit {
     /** Number of evenly spaced output samples, from t = 0 to the end (at least 2). */
     public Circuit samples(int n) {
         Require.between("samples", n, 2, 20_000_000);
-        return new Circuit(drive, coil, armature, clamp, offAt, n, relTol, numeric);
+        return new Circuit(drive, coil, armature, clamp, offAt, n, relTol, numeric, coreLoss, secondary);
     }
 
     /** Relative tolerance of the adaptive integrator (1e-12 to 1e-3). */
     public Circuit tolerance(double rtol) {
         Require.between("tolerance", rtol, 1e-12, 1e-3);
-        return new Circuit(drive, coil, armature, clamp, offAt, samples, rtol, numeric);
+        return new Circuit(drive, coil, armature, clamp, offAt, samples, rtol, numeric, coreLoss, secondary);
     }
 
     /** Integrate numerically even where closed forms apply (for cross-checks). */
     public Circuit numeric() {
-        return new Circuit(drive, coil, armature, clamp, offAt, samples, relTol, true);
+        return new Circuit(drive, coil, armature, clamp, offAt, samples, relTol, true, coreLoss, secondary);
+    }
+
+    /**
+     * The same circuit with the coil's core loss left out of the circuit: no core-loss branch, the
+     * ledger without core loss (as for a coil without loss data). {@code Transient.coreLossEnergy()}
+     * still gives the iGSE of the run's flux beside the ledger.
+     */
+    public Circuit withoutCoreLoss() {
+        return new Circuit(drive, coil, armature, clamp, offAt, samples, relTol, numeric, false, secondary);
+    }
+
+    /**
+     * The same circuit with a second winding coupled to the coil ({@link Secondary}): a shorted turn,
+     * a winding into a resistor, or a clamp winding through a diode. The coil must be linear and fixed;
+     * its core loss is then left out.
+     */
+    public Circuit withSecondary(Secondary s) {
+        if (s == null) throw Require.fail("secondary winding is missing (null)");
+        if (armature != null) throw Require.fail("a coupled secondary winding works with a fixed coil, not with a moving armature (use its eddy ladder)");
+        return new Circuit(drive, coil, armature, clamp, offAt, samples, relTol, numeric, coreLoss, s);
     }
 
     public Drive drive() { return drive; }
@@ -106,7 +135,7 @@ public final class Circuit {
      * seconds, located by the solver's event search (NaN when not reached).
      */
     double timeToCurrent(double amps, double duration) {
-        Solver s = new Solver(new Circuit(drive, coil, armature, clamp, offAt, 2, relTol, numeric), duration, amps);
+        Solver s = new Solver(new Circuit(drive, coil, armature, clamp, offAt, 2, relTol, numeric, coreLoss, secondary), duration, amps);
         s.run();
         return s.probeTime;
     }
@@ -117,6 +146,8 @@ public final class Circuit {
         String s = drive + " into " + (coil != null ? coil.describe() : armature.describe());
         if (!Double.isNaN(offAt)) s += ", off at " + Quantity.of(offAt, Dimension.TIME);
         if (clamp != null) s += ", " + clamp;
+        if (!coreLoss) s += ", core loss left out";
+        if (secondary != null) s += ", " + secondary;
         return s;
     }
 }

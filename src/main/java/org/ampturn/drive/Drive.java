@@ -18,7 +18,7 @@ import org.ampturn.units.Require;
  */
 public final class Drive {
     /** How the switch is operated. */
-    public enum Scheme { DC, PWM, PEAK_AND_HOLD, SINE }
+    public enum Scheme { DC, PWM, PEAK_AND_HOLD, SINE, FULL_WAVE, HALF_WAVE }
 
     /** How peak-and-hold regulates the hold current. */
     public enum Regulation { HYSTERETIC, PWM }
@@ -108,14 +108,42 @@ public final class Drive {
      * state and reports the RMS and peak current of its last cycle.
      */
     public static Drive sine(Quantity rmsVoltage, Quantity frequency) {
+        return ac(Scheme.SINE, rmsVoltage, frequency);
+    }
+
+    private static Drive ac(Scheme scheme, Quantity rmsVoltage, Quantity frequency) {
         double v = Require.inRange("RMS supply voltage", positive(rmsVoltage), Dimension.VOLTAGE, 1e-6, MAX_VOLTS);
         double f = Require.inRange("supply frequency", frequency, Dimension.FREQUENCY, 1e-3, MAX_SINE_HZ);
-        return new Drive(Scheme.SINE, v, 0, 0, f, 1, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN, 0);
+        return new Drive(scheme, v, 0, 0, f, 1, 0, 0, 0, Regulation.HYSTERETIC, Double.NaN, 0);
+    }
+
+    /**
+     * A full-wave rectified sine: a bridge of ideal diodes between a sine supply of RMS voltage V and
+     * the coil, which sees {@code v(t) = √2·V·|sin(2π·f·t + φ)|} (the current never reverses). The
+     * diodes' drops and the supply's own impedance are left out; add them as a source resistance.
+     */
+    public static Drive rectifiedSine(Quantity rmsVoltage, Quantity frequency) {
+        return ac(Scheme.FULL_WAVE, rmsVoltage, frequency);
+    }
+
+    /**
+     * A half-wave rectified sine: one ideal diode in series with the coil conducts while
+     * {@code √2·V·sin(2π·f·t + φ)} is positive; in the negative half cycles the coil's current goes
+     * on through its freewheel path, the clamp across the coil ({@code .clamp(Clamp.diode())}), which
+     * is required. The series diode is taken to commutate at the supply's zero crossings.
+     */
+    public static Drive halfWaveSine(Quantity rmsVoltage, Quantity frequency) {
+        return ac(Scheme.HALF_WAVE, rmsVoltage, frequency);
+    }
+
+    /** True for a sine supply, rectified or not. */
+    boolean isAc() {
+        return scheme == Scheme.SINE || scheme == Scheme.FULL_WAVE || scheme == Scheme.HALF_WAVE;
     }
 
     /** A sine supply switched on at the given phase of its voltage, in degrees: 0 a rising zero crossing, 90 the positive peak. */
     public Drive withSwitchOnPhase(double degrees) {
-        if (scheme != Scheme.SINE) throw new IllegalStateException("withSwitchOnPhase applies to a sine drive, not to a " + this);
+        if (!isAc()) throw new IllegalStateException("withSwitchOnPhase applies to a sine drive, not to a " + this);
         if (!(degrees >= 0 && degrees < 360)) {
             throw Require.fail("switch-on phase must be from 0° up to (not including) 360°, got " + degrees + "°");
         }
@@ -127,8 +155,14 @@ public final class Drive {
 
     /** Supply voltage at time t (s): constant for DC schemes, the sine for a sine supply. */
     double voltsAt(double t) {
-        if (scheme != Scheme.SINE) return volts;
-        return Math.sqrt(2) * volts * Math.sin(2 * Math.PI * frequency * t + Math.toRadians(phaseDegrees));
+        if (!isAc()) return volts;
+        double v = Math.sqrt(2) * volts * Math.sin(2 * Math.PI * frequency * t + Math.toRadians(phaseDegrees));
+        return scheme == Scheme.FULL_WAVE ? Math.abs(v) : v;
+    }
+
+    /** Half-wave supply: the supply's phase at time t, in whole half cycles from its first rising zero crossing (even: conducting). */
+    long halfCycleAt(double t) {
+        return (long) Math.floor(2 * (frequency * t + phaseDegrees / 360) + 1e-9);
     }
 
     /** The same drive with a source (supply and wiring) resistance. */
@@ -211,8 +245,10 @@ public final class Drive {
         String s;
         switch (scheme) {
             case DC: s = "DC drive " + supply(); break;
-            case SINE: s = "sine drive " + supply() + " RMS, " + Quantity.of(frequency, Dimension.FREQUENCY)
-                    + String.format(java.util.Locale.ROOT, ", switched on at %.4g°", phaseDegrees); break;
+            case SINE: case FULL_WAVE: case HALF_WAVE:
+                s = (scheme == Scheme.SINE ? "sine drive " : scheme == Scheme.FULL_WAVE ? "full-wave rectified sine drive " : "half-wave rectified sine drive ")
+                        + supply() + " RMS, " + Quantity.of(frequency, Dimension.FREQUENCY)
+                        + String.format(java.util.Locale.ROOT, ", switched on at %.4g°", phaseDegrees); break;
             case PWM: s = "PWM drive " + supply() + ", " + Quantity.of(frequency, Dimension.FREQUENCY)
                     + String.format(java.util.Locale.ROOT, ", duty %.3g", duty); break;
             default:

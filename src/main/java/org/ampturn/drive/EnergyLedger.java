@@ -9,23 +9,35 @@ import org.ampturn.units.Quantity;
  * closed form on linear pieces), except {@link #stored()}, which is computed from the final state
  * (flux linkage, capacitor voltage, position), so the balance is a real check of the solution:
  *
- * <pre>supplied = resistive + driveLoss + clamp + eddy + stored + mechanical + balanceError</pre>
+ * <pre>supplied = resistive + driveLoss + clamp + eddy + core + secondary + stored + mechanical + balanceError</pre>
  *
  * <p>{@code resistive} is the loss in the coil's own winding resistance; {@code driveLoss} the loss
  * in the source resistance and the switch's on-resistance; {@code clamp} the energy taken by the
  * clamp (or by the switch in avalanche when there is no clamp); {@code stored} the change of stored
  * energy over the run (magnetic field plus snubber capacitor); {@code mechanical} the work the
  * magnetic force did on the armature; {@code eddy} the loss in eddy currents and shorted turns
- * ({@link EddyLadder}). Immutable.
+ * ({@link EddyLadder}); {@code core} the core loss drawn through the coil's core-loss branch. Immutable.
  */
 public final class EnergyLedger {
-    private final double supplied, resistive, driveLoss, clamp, stored, mechanical, eddy;
+    private final double supplied, resistive, driveLoss, clamp, stored, mechanical, eddy, core, secondary;
 
     EnergyLedger(double supplied, double resistive, double driveLoss, double clamp, double stored, double mechanical) {
         this(supplied, resistive, driveLoss, clamp, stored, mechanical, 0);
     }
 
     EnergyLedger(double supplied, double resistive, double driveLoss, double clamp, double stored, double mechanical, double eddy) {
+        this(supplied, resistive, driveLoss, clamp, stored, mechanical, eddy, 0);
+    }
+
+    EnergyLedger(double supplied, double resistive, double driveLoss, double clamp, double stored, double mechanical, double eddy,
+                 double core) {
+        this(supplied, resistive, driveLoss, clamp, stored, mechanical, eddy, core, 0);
+    }
+
+    EnergyLedger(double supplied, double resistive, double driveLoss, double clamp, double stored, double mechanical, double eddy,
+                 double core, double secondary) {
+        this.secondary = secondary;
+        this.core = core;
         this.eddy = eddy;
         this.supplied = supplied;
         this.resistive = resistive;
@@ -53,12 +65,22 @@ public final class EnergyLedger {
     public Quantity mechanical() { return j(mechanical); }
     /** Loss in eddy currents and shorted turns (zero without an {@link EddyLadder}). */
     public Quantity eddy() { return j(eddy); }
-    /** supplied − (resistive + driveLoss + clamp + eddy + stored + mechanical). */
+    /**
+     * Core loss drawn by the circuit through its core-loss branch (zero for a coil without core-loss
+     * data, or with {@code Circuit.withoutCoreLoss()}); see {@code CoreLossBranch}.
+     */
+    public Quantity core() { return j(core); }
+    /**
+     * Energy taken by a coupled secondary winding ({@link Secondary}): its resistance and load, and a
+     * diode load's voltage (with a clamp winding into the supply, the energy returned to it).
+     */
+    public Quantity secondary() { return j(secondary); }
+    /** supplied − (resistive + driveLoss + clamp + eddy + core + secondary + stored + mechanical). */
     public Quantity balanceError() { return j(balanceErrorJoules()); }
 
     /** SI kernel of {@link #balanceError()}. */
     public double balanceErrorJoules() {
-        return supplied - (resistive + driveLoss + clamp + eddy + stored + mechanical);
+        return supplied - (resistive + driveLoss + clamp + eddy + core + secondary + stored + mechanical);
     }
 
     /** |balance error| / supplied (or over the largest entry when nothing was supplied). */
@@ -75,6 +97,8 @@ public final class EnergyLedger {
         if (driveLoss != 0) s += " + drive loss " + j(driveLoss);
         s += " + clamp " + j(clamp);
         if (eddy != 0) s += " + eddy currents " + j(eddy);
+        if (core != 0) s += " + core loss " + j(core);
+        if (secondary != 0) s += " + secondary " + j(secondary);
         s += " + stored " + j(stored);
         if (mechanical != 0) s += " + mechanical " + j(mechanical);
         // the exact error is solver noise that changes with any solver detail; a worksheet records

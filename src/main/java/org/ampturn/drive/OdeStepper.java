@@ -78,6 +78,11 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
             scale[EEDDY] = 1e-6 * eRef;
             for (int k = 0; k < sv.loops; k++) scale[LAD + k] = lamRef;
         }
+        if (sv.core != null) scale[sv.ecore] = 1e-6 * eRef;
+        if (sv.cp != null) {
+            scale[sv.lam2] = lamRef * Math.sqrt(sv.cp.l2 / sv.cp.l1);
+            scale[sv.esec] = 1e-6 * eRef;
+        }
         double[] abs = new double[sv.dim];
         double[] rel = new double[sv.dim];
         for (int k = 0; k < sv.dim; k++) {
@@ -121,7 +126,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     @Override
     public double advance(double t0, double t1, double[] y, List<Ev> evs, int[] fired) {
         fired[0] = -1;
-        boolean still = sv.elec == Elec.IDLE && sv.mech != Mech.FREE && sv.loops == 0;
+        boolean still = sv.elec == Elec.IDLE && sv.mech != Mech.FREE && sv.loops == 0 && sv.core == null && sv.cp == null;
         if (still || t1 - t0 <= 1e-12 * Math.max(Math.abs(t1), sv.tEnd)) {
             for (int k = sv.nextSample(); k < sv.n && sv.sampleTime(k) <= t1; k++) sv.record(k, y);
             return t1;
@@ -198,6 +203,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
 
         @Override
         public double g(double t, double[] y) {
+            sv.evalT = t;
             return sv.g(ev, y);
         }
 

@@ -7,8 +7,20 @@ final class Recorder {
     final double[] time, current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp,
             eSup, eDiss, eClamp, eStored;
     final double[] pMech, eMech, x, v, force, capV; // null unless the armature moves / there is a snubber
+    final double[] pCore, eCore; // null unless the circuit draws core loss
+    final double[] i2; // null unless there is a coupled secondary winding
+    private final int coreIndex;
 
     Recorder(int n, boolean moves, boolean snub) {
+        this(n, moves, snub, -1, false);
+    }
+
+    /** coreIndex: the state index of the core-loss energy integral, or −1 without one; secondary: record its current. */
+    Recorder(int n, boolean moves, boolean snub, int coreIndex, boolean secondary) {
+        this.coreIndex = coreIndex;
+        i2 = secondary ? new double[n] : null;
+        pCore = coreIndex >= 0 ? new double[n] : null;
+        eCore = coreIndex >= 0 ? new double[n] : null;
         time = new double[n];
         current = new double[n];
         lambda = new double[n];
@@ -55,5 +67,10 @@ final class Recorder {
             force[k] = o[O_F];
         }
         if (capV != null) capV[k] = s[VC];
+        if (i2 != null) i2[k] = o[O_I2];
+        if (eCore != null) {
+            pCore[k] = o[O_PCORE];
+            eCore[k] = s[coreIndex];
+        }
     }
 }

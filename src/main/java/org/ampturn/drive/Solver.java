@@ -28,7 +28,7 @@ final class Solver {
 
     // outputs of eval()
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
-            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_N = 12;
+            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_PCORE = 12, O_I2 = 13, O_DLAM2 = 14, O_PSEC = 15, O_N = 16;
 
     /** Most switching segments (each PWM edge, comparator edge or event starts one) a run may take. */
     static final long MAX_SEGMENTS = 20_000_000L;
@@ -70,6 +70,12 @@ final class Solver {
     double t;
     final EddyLadder ladder;
     final int loops;   // loops of the ladder
+    /** Core loss drawn by the circuit (null without loss data), and the index of its energy integral in the state. */
+    final CoreLossBranch core;
+    final int ecore;
+    /** A coupled secondary winding (null without), and the indices of its flux linkage and loss integral in the state. */
+    final Coupling cp;
+    final int lam2, esec;
     final int dim;     // state size
     final double restitution;
     final double[] y;
@@ -82,11 +88,14 @@ final class Solver {
     boolean finalOff;
     boolean firstOn = true;
     double offCurrent = Double.NaN;
+    /** Direction of the current the clamp carries: +1, or −1 for a sine supply switched off at a negative current. */
+    double clampSign = 1;
 
     final Recorder rec;
     final List<String> notes = new ArrayList<>();
     final List<Marker> markers = new ArrayList<>();
     final double[] scratch = new double[O_N];
+    private final double[] probeScratch = new double[O_N];
 
     // metrics
     double t63 = Double.NaN, t90 = Double.NaN, t99 = Double.NaN;
@@ -133,22 +142,35 @@ final class Solver {
         this.moves = load.moves();
         this.ladder = load.ladder();
         this.loops = ladder.sections();
-        this.dim = loops > 0 ? LAD + loops : DIM;
+        this.core = c.coil != null && c.coreLoss && c.secondary == null ? CoreLossBranch.of(c.coil, load.inductance() * Math.max(1e-9, Math.abs(c.drive.volts)
+                / Math.max(c.drive.sourceOhms + c.drive.switchOhms + load.resistance(), 1e-9))) : null;
+        this.ecore = core != null ? (loops > 0 ? LAD + loops : DIM) : -1;
+        this.cp = c.secondary != null ? new Coupling(c.secondary, load.inductance()) : null;
+        int base = (loops > 0 ? LAD + loops : DIM) + (core != null ? 1 : 0);
+        this.lam2 = cp != null ? base : -1;
+        this.esec = cp != null ? base + 1 : -1;
+        this.dim = base + (cp != null ? 2 : 0);
         this.y = new double[dim];
         this.ladRate = new double[loops];
         this.restitution = load.restitution();
-        this.sine = drive.scheme == Drive.Scheme.SINE;
+        this.sine = drive.isAc();
         this.lastCycleFrom = sine && tEnd * drive.frequency >= 1 ? tEnd - 1 / drive.frequency : Double.NaN;
-        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0 && !sine;
-        this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0;
+        this.closedForm = load.linear() && !moves && !snub && !c.numeric && loops == 0 && !sine && core == null && cp == null;
+        this.snubberClosedForm = load.linear() && !moves && snub && !c.numeric && loops == 0 && core == null && cp == null;
         double rTot = rs + ron + rc;
         // a sine supply: the scale of the current is the inrush bound, twice the peak of the steady current of the small-signal L
-        this.finalCurrent = sine ? 2 * Math.sqrt(2) * vs / Math.hypot(rTot, 2 * Math.PI * drive.frequency * load.inductance())
+        // (a rectified one: at least the DC bound √2·V/R)
+        double acBound = 2 * Math.sqrt(2) * vs / Math.hypot(rTot, 2 * Math.PI * drive.frequency * load.inductance());
+        this.finalCurrent = sine ? (drive.scheme != Drive.Scheme.SINE && rTot > 0 ? Math.max(acBound, Math.sqrt(2) * vs / rTot) : acBound)
                 : rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
         validate();
         // the recorder's arrays and the transient's copies of them
         org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0)));
-        this.rec = new Recorder(n, moves, snub);
+        this.rec = new Recorder(n, moves, snub, ecore, cp != null);
+        if (core != null) notes.add(core.describe(c.coil.temperature().si()));
+        if (cp != null && c.coil != null && c.coreLoss && CoreLossBranch.of(c.coil, 1) != null) {
+            notes.add("the core's loss is left out of the circuit with a coupled secondary winding (the ledger has no core-loss entry)");
+        }
     }
 
     private static String q(double v, Dimension d) { return Quantity.of(v, d).toString(); }
@@ -166,11 +188,21 @@ final class Solver {
             throw Require.fail("off time (" + sec(offAt) + ") is after the end of the run (" + sec(tEnd)
                     + "); simulate for longer or switch off earlier");
         }
-        if (drive.scheme == Drive.Scheme.SINE && (clamp != null || !Double.isNaN(offAt) || moves || loops > 0)) {
-            throw Require.fail("a sine supply drives a fixed coil with the switch closed for the whole run: "
-                    + "switching it off, clamps, moving armatures and eddy ladders are not modelled with it");
+        if (cp != null && !load.linear()) {
+            throw Require.fail("a coupled secondary winding needs a linear coil: " + load.describe() + " is not (its core saturates)");
         }
-        boolean opens = !Double.isNaN(offAt) || (drive.scheme != Drive.Scheme.DC && drive.scheme != Drive.Scheme.SINE);
+        if (sine && (moves || loops > 0)) {
+            throw Require.fail("a sine supply drives a fixed coil: moving armatures and eddy ladders are not modelled with it");
+        }
+        if (sine && clamp != null && !acrossCoil) {
+            throw Require.fail("with a sine supply the clamp must sit across the coil (Clamp.diode(), zener(..), resistor(..)), not the "
+                    + clamp + ": a clamp across the switch would see the supply's changing voltage, which is not modelled");
+        }
+        if (drive.scheme == Drive.Scheme.HALF_WAVE && clamp == null) {
+            throw Require.fail("a half-wave rectified supply needs the coil's freewheel path in the negative half cycles: "
+                    + "add .clamp(Clamp.diode()) (or a zener or resistor clamp across the coil)");
+        }
+        boolean opens = !Double.isNaN(offAt) || (drive.scheme != Drive.Scheme.DC && !sine);
         if (opens && clamp == null) {
             throw Require.fail("the switch opens during this run but no clamp was given: add .clamp(Clamp.diode()), "
                     + "or Clamp.none(V(..)) to let the switch avalanche");
@@ -203,6 +235,10 @@ final class Solver {
 
     /** Current, switch voltage, dλ/dt, powers, force and acceleration in a mode. */
     void eval(Elec e, Mech m, double[] s, double[] o) {
+        if (cp != null) {
+            evalCoupled(e, s, o);
+            return;
+        }
         double lam = s[LAM], x = s[X], v = s[V];
         double i = loops > 0 ? (e == Elec.IDLE ? 0 : (lam - s[LAD]) / ladder.leakage)
                 : e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
@@ -211,6 +247,48 @@ final class Solver {
             nonFiniteLambda = lam;
             i = Math.copySign(1e150, lam);
         }
+        double pcore = 0, dl;
+        if (core != null) {
+            // the core-loss branch in parallel: the terminal current is i_m + i_c(λ̇), with λ̇ = a − b·i in every mode
+            core.coefficients(lam);
+            if (e == Elec.IDLE) {
+                branch(e, s, 0, o);
+                double im = load.currentAt(lam, x);
+                dl = Double.isFinite(im) ? core.idleRate(im) : 0;
+                pcore = -im * dl;
+            } else {
+                double a = branch(e, s, 0, o), b = a - branch(e, s, 1, o);
+                double im = i;
+                double rate = core.rate(a - b * im, b);
+                double ic = core.current(rate);
+                i = im + ic;
+                dl = branch(e, s, i, o);
+                pcore = ic * dl;
+            }
+        } else {
+            dl = branch(e, s, i, o);
+        }
+        if (e == Elec.IDLE) i = 0;
+        double pEddy = loops > 0 ? ladderRates(s, i, ladRate) : 0;
+        if (loops > 0 && e == Elec.IDLE) dl = ladRate[0]; // the open coil carries no current: λ follows the first loop
+        double f = moves ? magnetForce(s) : 0;
+        double acc = 0, pm = 0;
+        if (m == Mech.FREE) {
+            acc = (f - load.restoringForceAt(x, v)) / load.mass();
+            pm = f * v;
+        }
+        o[O_I] = i;
+        o[O_DLAM] = dl;
+        o[O_PCOIL] = i * i * rc;
+        o[O_PMECH] = pm;
+        o[O_F] = f;
+        o[O_ACC] = acc;
+        o[O_PEDDY] = pEddy;
+        o[O_PCORE] = pcore;
+    }
+
+    /** The mode's circuit at terminal current i: writes the switch voltage and the supply, drive, clamp and capacitor terms into o; returns dλ/dt. */
+    private double branch(Elec e, double[] s, double i, double[] o) {
         double vsw, dl, psup = 0, pdrv = 0, pcl = 0, dvc = 0;
         switch (e) {
             case ON:
@@ -242,9 +320,10 @@ final class Solver {
                     pdrv = i * i * rs;
                     pcl = i * i * rcl;
                 } else if (acrossCoil) {
-                    double vcl = v0 + rcl * i;
+                    // clampSign −1: a sine supply switched off at a negative current, the clamp taken as bidirectional
+                    double vcl = clampSign * v0 + rcl * i;
                     dl = -vcl - i * rc;
-                    vsw = vs + vcl;
+                    vsw = (sine ? drive.voltsAt(evalT) : vs) + vcl;
                     pcl = vcl * i;
                 } else {
                     double vcl = v0 + rcl * i;
@@ -258,28 +337,54 @@ final class Solver {
             default:
                 dl = 0;
                 vsw = vs;
-                i = 0;
         }
-        double pEddy = loops > 0 ? ladderRates(s, i, ladRate) : 0;
-        if (loops > 0 && e == Elec.IDLE) dl = ladRate[0]; // the open coil carries no current: λ follows the first loop
-        double f = moves ? magnetForce(s) : 0;
-        double acc = 0, pm = 0;
-        if (m == Mech.FREE) {
-            acc = (f - load.restoringForceAt(x, v)) / load.mass();
-            pm = f * v;
-        }
-        o[O_I] = i;
         o[O_VSW] = vsw;
-        o[O_DLAM] = dl;
         o[O_PSUP] = psup;
-        o[O_PCOIL] = i * i * rc;
         o[O_PDRV] = pdrv;
         o[O_PCL] = pcl;
-        o[O_PMECH] = pm;
-        o[O_F] = f;
         o[O_DVC] = dvc;
-        o[O_ACC] = acc;
-        o[O_PEDDY] = pEddy;
+        return dl;
+    }
+
+    /** eval() with a coupled secondary winding (fixed linear coil): both windings' currents from their flux linkages. */
+    private void evalCoupled(Elec e, double[] s, double[] o) {
+        boolean idle = e == Elec.IDLE;
+        double l1 = s[LAM], l2 = s[lam2];
+        double i1 = cp.i1(l1, l2, idle), i2 = cp.i2(l1, l2, idle);
+        double dl2on = -cp.diodeVolts - cp.loopOhms * i2, dl1, dl2;
+        if (!idle) {
+            dl1 = branch(e, s, i1, o);
+            dl2 = cp.on ? dl2on : cp.m / cp.l1 * dl1;
+        } else {
+            branch(e, s, 0, o);
+            dl2 = cp.on ? dl2on : 0;
+            dl1 = cp.on ? cp.m / cp.l2 * dl2 : 0;
+            o[O_VSW] = vs - dl1; // the open coil shows the secondary's voltage, reflected
+        }
+        o[O_I] = i1;
+        o[O_DLAM] = dl1;
+        o[O_PCOIL] = i1 * i1 * rc;
+        o[O_PMECH] = 0;
+        o[O_F] = 0;
+        o[O_ACC] = 0;
+        o[O_PEDDY] = 0;
+        o[O_PCORE] = 0;
+        o[O_I2] = i2;
+        o[O_DLAM2] = dl2;
+        o[O_PSEC] = cp.on ? i2 * (cp.diodeVolts + cp.loopOhms * i2) : 0;
+    }
+
+    /** A diode-loaded secondary starts or stops conducting where the state says so (after a switching edge). */
+    private void settleSecondary() {
+        if (cp == null || !cp.diode) return;
+        evalT = t;
+        if (!cp.on) {
+            eval(elec, mech, y, probeScratch);
+            if (probeScratch[O_DLAM2] < -cp.diodeVolts) cp.on = true;
+        } else {
+            eval(elec, mech, y, probeScratch);
+            if (!(probeScratch[O_I2] > 0) && !(probeScratch[O_DLAM2] > 0)) cp.on = false;
+        }
     }
 
     /** The pull of the magnet: the actuator's, or the sum over the ladder's flux tubes. */
@@ -305,6 +410,10 @@ final class Solver {
 
     /** The coil current of a state (zero with the coil open and idle). */
     double coilCurrent(double[] s) {
+        if (core != null || cp != null) {
+            eval(elec, mech, s, probeScratch);
+            return probeScratch[O_I];
+        }
         if (loops > 0) return elec == Elec.IDLE ? 0 : (s[LAM] - s[LAD]) / ladder.leakage;
         if (elec == Elec.IDLE && !moves) return 0;
         return load.currentAt(s[LAM], s[X]);
@@ -350,11 +459,19 @@ final class Solver {
             d[EEDDY] = scratch[O_PEDDY];
             System.arraycopy(ladRate, 0, d, LAD, loops);
         }
+        if (core != null) d[ecore] = scratch[O_PCORE];
+        if (cp != null) {
+            d[lam2] = scratch[O_DLAM2];
+            d[esec] = scratch[O_PSEC];
+        }
     }
 
     double storedAt(double[] s) {
         double w;
-        if (loops == 0) {
+        if (cp != null) {
+            boolean idle = elec == Elec.IDLE;
+            w = 0.5 * (cp.i1(s[LAM], s[lam2], idle) * s[LAM] + cp.i2(s[LAM], s[lam2], idle) * s[lam2]);
+        } else if (loops == 0) {
             w = load.fieldEnergyAt(s[LAM], s[X]);
         } else {
             double i = elec == Elec.IDLE ? 0 : (s[LAM] - s[LAD]) / ladder.leakage;
@@ -373,6 +490,12 @@ final class Solver {
         switch (ev.kind) {
             case CURRENT: return coilCurrent(s) - ev.level;
             case POSITION: return s[X] - ev.level;
+            case SECONDARY_CURRENT:
+                eval(elec, mech, s, probeScratch);
+                return probeScratch[O_I2] - ev.level;
+            case SECONDARY_VOLTAGE:
+                eval(elec, mech, s, probeScratch);
+                return probeScratch[O_DLAM2] - ev.level;
             default:
                 // the magnetic force grows as λ², so F − Fr can dip below zero and back within one step as λ
                 // swings through zero; ±√F − √Fr changes sign once, where F − Fr does
@@ -417,6 +540,7 @@ final class Solver {
             throw new TransientException("the coil current reaches " + amp(i) + " at t = " + sec(tt) + " (flux linkage "
                     + q(s[LAM], Dimension.FLUX) + "): the solution diverges (check the resistance and the core's saturation)");
         }
+        if (core != null) core.accept(tt, s[LAM], o[O_DLAM]);
         if (vsw > peakSw) { peakSw = vsw; peakSwT = tt; }
         if (inLastCycle) lastCyclePeak = Math.max(lastCyclePeak, Math.abs(i));
         if (i > peakI) { peakI = i; peakIT = tt; }
@@ -460,6 +584,10 @@ final class Solver {
         if (finalOff) return next;
         if (sine && !inLastCycle && lastCycleFrom > t) next = Math.min(next, lastCycleFrom);
         if (timedPeak() && drive.peakSeconds > t) next = Math.min(next, drive.peakSeconds);
+        if (drive.scheme == Drive.Scheme.HALF_WAVE) { // the series diode commutates at the supply's zero crossings
+            double edge = ((drive.halfCycleAt(t) + 1) / 2.0 - drive.phaseDegrees / 360) / drive.frequency;
+            if (edge > t) next = Math.min(next, edge);
+        }
         double f = drive.frequency;
         if (drive.scheme == Drive.Scheme.PWM || (drive.scheme == Drive.Scheme.PEAK_AND_HOLD && (holdPhase || peakLimited)
                 && drive.regulation == Drive.Regulation.PWM)) {
@@ -500,6 +628,10 @@ final class Solver {
             return;
         }
         if (timedPeak() && Math.abs(t - drive.peakSeconds) <= 1e-12 * Math.max(tEnd, 1e-300)) beginHold();
+        if (drive.scheme == Drive.Scheme.HALF_WAVE) {
+            if (!finalOff) setSwitch(drive.halfCycleAt(t) % 2 == 0);
+            return;
+        }
         double f = drive.frequency;
         double phase = t * f - Math.floor(t * f + 1e-9);
         boolean periodStart = Math.abs(phase) < 1e-6;
@@ -542,6 +674,7 @@ final class Solver {
     }
 
     private double currentNow() {
+        evalT = t;
         return coilCurrent(y);
     }
 
@@ -553,8 +686,15 @@ final class Solver {
         } else if (snub) {
             elec = Elec.CLAMP;
         } else {
-            elec = currentNow() > 0 ? Elec.CLAMP : Elec.IDLE;
-            if (elec == Elec.IDLE) y[LAM] = loops > 0 ? y[LAD] : 0;
+            elec = Elec.CLAMP; // the clamp conducts if the coil's current is above zero with it conducting
+            clampSign = 1;
+            double i = currentNow();
+            if (drive.scheme == Drive.Scheme.SINE && i < 0) { // a bidirectional clamp carries a negative current on
+                clampSign = -1;
+                i = currentNow();
+            }
+            if (!(clampSign * i > 0)) elec = Elec.IDLE;
+            if (elec == Elec.IDLE && core == null && cp == null) y[LAM] = loops > 0 ? y[LAD] : 0;
         }
     }
 
@@ -583,11 +723,15 @@ final class Solver {
             if (ph && holdPhase && drive.regulation == Drive.Regulation.HYSTERETIC) {
                 ev.add(new Ev(Ev.Kind.CURRENT, drive.holdAmps - drive.band / 2, -1, Ev.Act.HOLD_LOW));
             }
-            if (elec == Elec.CLAMP && !snub) ev.add(new Ev(Ev.Kind.CURRENT, 0, -1, Ev.Act.CLAMP_ZERO));
+            if (elec == Elec.CLAMP && !snub) ev.add(new Ev(Ev.Kind.CURRENT, 0, clampSign > 0 ? -1 : 1, Ev.Act.CLAMP_ZERO));
             if (finalOff && snub && Double.isNaN(decayZero)) ev.add(new Ev(Ev.Kind.CURRENT, 0, -1, Ev.Act.SNUBBER_ZERO));
-            if (finalOff && elec != Elec.IDLE && Double.isNaN(decay1pct) && offCurrent > 0) {
-                ev.add(new Ev(Ev.Kind.CURRENT, 0.01 * offCurrent, -1, Ev.Act.DECAY_1PCT));
+            if (finalOff && elec != Elec.IDLE && Double.isNaN(decay1pct) && offCurrent != 0 && !Double.isNaN(offCurrent)) {
+                ev.add(new Ev(Ev.Kind.CURRENT, 0.01 * offCurrent, offCurrent > 0 ? -1 : 1, Ev.Act.DECAY_1PCT));
             }
+        }
+        if (cp != null && cp.diode) {
+            ev.add(cp.on ? new Ev(Ev.Kind.SECONDARY_CURRENT, 0, -1, Ev.Act.SECONDARY_OFF)
+                    : new Ev(Ev.Kind.SECONDARY_VOLTAGE, -cp.diodeVolts, -1, Ev.Act.SECONDARY_ON));
         }
         if (!Double.isNaN(probe) && Double.isNaN(probeTime) && elec != Elec.IDLE) {
             ev.add(new Ev(Ev.Kind.CURRENT, probe, 1, Ev.Act.PROBE));
@@ -638,7 +782,7 @@ final class Solver {
                 break;
             case CLAMP_ZERO:
                 elec = Elec.IDLE;
-                y[LAM] = loops > 0 ? y[LAD] : 0;
+                if (core == null && cp == null) y[LAM] = loops > 0 ? y[LAD] : 0;
                 if (finalOff && Double.isNaN(decayZero)) {
                     decayZero = t - offAt;
                     markers.add(new Marker("current zero", tq(t), Quantity.of(0, Dimension.CURRENT), "current"));
@@ -665,6 +809,12 @@ final class Solver {
                 break;
             case PROBE:
                 probeTime = t;
+                break;
+            case SECONDARY_ON:
+                cp.on = true;
+                break;
+            case SECONDARY_OFF:
+                cp.on = false;
                 break;
             case HIT_OPEN: {
                 double impact = Math.abs(y[V]);
@@ -751,6 +901,7 @@ final class Solver {
         elec = Elec.ON;
         switchOn = true;
         if (drive.scheme == Drive.Scheme.PWM) startCycle();
+        if (drive.scheme == Drive.Scheme.HALF_WAVE && drive.halfCycleAt(0) % 2 != 0) setSwitch(false); // switched on in a negative half
         if (!Double.isNaN(offAt) && offAt == 0) scheduledEdge();
         Stepper stepper = closedForm ? new ClosedFormStepper(this)
                 : snubberClosedForm ? new SnubberStepper(this) : new OdeStepper(this, circuit.relTol);
@@ -778,6 +929,7 @@ final class Solver {
             observe(t, y);
             if (fired[0] >= 0) fire(evs.get(fired[0]));
             if (atEdge) scheduledEdge();
+            settleSecondary();
             observe(t, y);
             if (t == lastT) {
                 if (++stuck > 200) {

@@ -28,7 +28,7 @@ public final class Transient {
     private final Circuit source;
     private final List<Signal> signals;
     private final Signal current, lambda, coilV, resV, switchV, pSup, pCoil, pDrive, pClamp, pMech,
-            eSup, eDiss, eClamp, eStored, eMech, position, speed, force, capV;
+            eSup, eDiss, eClamp, eStored, eMech, position, speed, force, capV, pCore, eCore, i2;
     private final Metrics metrics;
     private final EnergyLedger energy;
     private final List<Marker> markers;
@@ -63,14 +63,17 @@ public final class Transient {
         speed = sv.moves ? add(all, "speed", Dimension.VELOCITY, t, r.v) : null;
         force = sv.moves ? add(all, "magnetic force", Dimension.FORCE, t, r.force) : null;
         capV = sv.snub ? add(all, "snubber capacitor voltage", Dimension.VOLTAGE, t, r.capV) : null;
+        i2 = r.i2 != null ? add(all, "secondary current", Dimension.CURRENT, t, r.i2) : null;
+        pCore = r.pCore != null ? add(all, "core loss power", Dimension.POWER, t, r.pCore) : null;
+        eCore = r.eCore != null ? add(all, "core loss energy", Dimension.ENERGY, t, r.eCore) : null;
         signals = Collections.unmodifiableList(all);
 
         double[] y = sv.y;
         double stored = sv.storedAt(y) - sv.initialStored;
         energy = new EnergyLedger(y[Solver.ESUP], y[Solver.ECOIL], y[Solver.EDRV], y[Solver.ECL], stored, y[Solver.EMECH],
-                sv.loops > 0 ? y[Solver.EEDDY] : 0);
+                sv.loops > 0 ? y[Solver.EEDDY] : 0, sv.core != null ? y[sv.ecore] : 0, sv.cp != null ? y[sv.esec] : 0);
 
-        double tau = sv.load.linear() && !sv.moves ? sv.load.inductance() / (sv.rs + sv.ron + sv.rc) : sv.t63;
+        double tau = sv.load.linear() && !sv.moves && sv.cp == null ? sv.load.inductance() / (sv.rs + sv.ron + sv.rc) : sv.t63;
         metrics = new Metrics(tq(tau), tq(sv.t63), tq(sv.t90), tq(sv.t99),
                 Quantity.of(sv.finalCurrent, Dimension.CURRENT), Quantity.of(sv.peakI, Dimension.CURRENT),
                 Quantity.of(sv.peakSw, Dimension.VOLTAGE), Quantity.of(sv.peakStored, Dimension.ENERGY),
@@ -88,7 +91,7 @@ public final class Transient {
         markers = Collections.unmodifiableList(mk);
 
         List<String> nt = new ArrayList<>(sv.notes);
-        if (sv.finalOff && Double.isNaN(sv.decayZero) && sv.offCurrent > 0) {
+        if (sv.finalOff && Double.isNaN(sv.decayZero) && Math.abs(sv.offCurrent) > 0) {
             nt.add(Double.isNaN(sv.decay1pct) ? "the current had not decayed to 1 % of its turn-off value by the end of the run"
                     : "the current only approaches zero; the decay time is the time to 1 % of the turn-off current");
         }
@@ -104,9 +107,12 @@ public final class Transient {
         if (sv.sine) nt.add("the last cycle's peak current is the largest of the samples and solver steps in it");
 
         coreLoss = sv.circuit.coil != null ? CoreLossOfRun.energy(sv.circuit.coil, r.time, r.lambda) : Double.NaN;
-        if (!Double.isNaN(coreLoss)) {
+        if (!Double.isNaN(coreLoss) && sv.core == null) {
             nt.add("core loss " + Quantity.of(coreLoss, Dimension.ENERGY) + " by the iGSE of the run's flux density B = λ/(N·A) "
-                    + "(from the output samples); beside the energy ledger, not in it: the coil model has no core-loss path");
+                    + "(from the output samples); beside the energy ledger, not in it: the core loss is left out of this circuit");
+        } else if (!Double.isNaN(coreLoss)) {
+            nt.add("core loss " + Quantity.of(y[sv.ecore], Dimension.ENERGY) + " drawn by the circuit, in the ledger; the iGSE of the run's "
+                    + "flux afterwards (rainflow loops, output samples) gives " + Quantity.of(coreLoss, Dimension.ENERGY));
         }
 
         List<String> cs = new ArrayList<>();
@@ -155,6 +161,12 @@ public final class Transient {
     public Signal dissipatedEnergy() { return eDiss; }
     /** Cumulative clamp energy over time (the total is {@code metrics().clampEnergy()}). */
     public Signal clampEnergy() { return eClamp; }
+    /** Current of the coupled secondary winding, into its dotted end; only with {@code Circuit.withSecondary}. */
+    public Signal secondaryCurrent() { return require(i2, "a coupled secondary winding"); }
+    /** Core-loss power drawn by the coil's core-loss branch; only for a coil whose core has loss data. */
+    public Signal coreLossPower() { return require(pCore, "a core with loss data"); }
+    /** Cumulative core-loss energy (the total is {@code energy().core()}); only for a coil whose core has loss data. */
+    public Signal coreEnergy() { return require(eCore, "a core with loss data"); }
     /** Voltage on the snubber capacitor; only for an RC snubber. */
     public Signal capacitorVoltage() { return require(capV, "an RC snubber"); }
     /** Armature position from the open stop; only for a moving armature. */
@@ -176,6 +188,7 @@ public final class Transient {
             case "drive": case "switch": case "source": return pDrive;
             case "clamp": return pClamp;
             case "mechanical": return pMech;
+            case "core": return coreLossPower();
             default: throw new IllegalArgumentException("power (" + org.ampturn.units.Require.quote(which) + ") must be one of supply, coil, drive, clamp, mechanical");
         }
     }
@@ -210,10 +223,11 @@ public final class Transient {
     public Quantity lastCycleRmsCurrent() { return Quantity.of(acRms, Dimension.CURRENT); }
 
     /**
-     * Core-loss energy of the run (J): the iGSE of each core piece's flux density B(t) = λ(t)/(N·A)
-     * over the output samples, minor loops included, times the piece's volume, for a {@code WoundCoil}
-     * whose core material has a {@code CoreLoss}; NaN otherwise. Reported beside the energy ledger, not
-     * in it (the coil model has no core-loss path, so the ledger balances without it).
+     * Core-loss energy of the run (J) afterwards: the iGSE of each core piece's flux density
+     * B(t) = λ(t)/(N·A) over the output samples, split into loops by the rainflow count, times the
+     * piece's volume, for a {@code WoundCoil} whose core material has a {@code CoreLoss}; NaN otherwise.
+     * A check beside the ledger: the loss the circuit drew through its core-loss branch (causal swing)
+     * is {@code energy().core()}.
      */
     public Quantity coreLossEnergy() { return Quantity.of(coreLoss, Dimension.ENERGY); }
 

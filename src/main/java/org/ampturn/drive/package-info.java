@@ -14,7 +14,9 @@
  * {@link java.util.concurrent.CancellationException}. Levels are checked against the drive's range
  * (voltages to 1 MV, currents 1 nA to 1 MA, frequencies to 1 GHz, a hysteresis band of at least
  * 1/10 000 of the hold current), a run's samples against the memory left and its switching segments
- * against a cap of 20 000 000. Equations and assumptions: lib-docs/drives.md,
- * clamps.md, transients.md.
+ * against a cap of 20 000 000. A coil wound on a core with loss data draws its core loss through a
+ * core-loss branch (instantaneous iGSE, Venkatachalam et al., IEEE COMPEL 2002) that the ledger
+ * counts; a coupled secondary winding follows the two-coupled-inductor equations (Hayt et al. ch. 13).
+ * Equations and assumptions: lib-docs/drives.md, clamps.md, transients.md, core-loss.md.
  */
 package org.ampturn.drive;
