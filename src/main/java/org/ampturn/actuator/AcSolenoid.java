@@ -34,8 +34,9 @@ import org.ampturn.wire.Winding;
  * apparent impedance V/I, the copper loss I²·R, the core loss (the iGSE of each iron piece's B(t) over
  * that cycle, {@link CoreLoss#energyDensityAt}, times its volume, when the material has loss data), the
  * real power P = copper + core loss, and the power factor P/(V·I) (the definition for non-sinusoidal
- * current, IEEE Std 1459-2010, "power factor = P/S"). The supply in the run delivers only the copper
- * loss (the coil model has no core-loss path), so the core loss is added to it as an estimate.
+ * current, IEEE Std 1459-2010, "power factor = P/S"). The run draws the core loss through the drive's
+ * core-loss branch (a current beside the magnetising one), so its supply delivers copper and core loss
+ * and the current includes the loss current.
  *
  * <p>An AC solenoid draws several times its holding current while open (common practice): the open
  * gap's small inductance lets far more current through than the closed magnet's. {@link #inrushRatio}
@@ -382,7 +383,7 @@ public final class AcSolenoid {
                 nt.add(String.format(Locale.ROOT, "not settled after %d cycles: the mean square current may still change by %.1e", cycles, remaining));
             }
             if (!lossData) nt.add("the iron has no core-loss data: the real power is the copper loss alone");
-            else nt.add("core loss by the iGSE of the iron's B(t) over the last cycle, added to the copper loss (the run's supply delivers the copper loss only)");
+            else nt.add("core loss by the iGSE of the iron's B(t) over the last cycle; the run draws it through its core-loss branch, so the supply delivers copper and core loss");
             if (!Double.isNaN(s.ringOhms)) nt.add("the shading ring is not in this run: its loss and reflected current are in holding()");
             notes = Collections.unmodifiableList(nt);
         }
