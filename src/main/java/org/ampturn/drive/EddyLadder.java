@@ -83,10 +83,18 @@ public final class EddyLadder {
     public double leakageHenries() { return leakage; }
 
     /** Resistance of loop k + 1 referred to the coil (Ω). */
-    public double shuntOhms(int k) { return shunt[k]; }
+    public double shuntOhms(int k) { return shunt[loop(k)]; }
 
     /** Area share of tube k + 1. */
-    public double areaShare(int k) { return share[k]; }
+    public double areaShare(int k) { return share[loop(k)]; }
+
+    private int loop(int k) {
+        if (k < 0 || k >= shunt.length) {
+            throw Require.fail("loop index must be 0 to " + (shunt.length - 1) + " (" + shunt.length + " loops), got " + k
+                    + (shunt.length == 0 ? ": this ladder has no loops" : ""));
+        }
+        return k;
+    }
 
     @Override
     public String toString() {
