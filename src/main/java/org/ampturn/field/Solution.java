@@ -131,6 +131,22 @@ public final class Solution {
 
     public Quantity inductance() { return inductance(onlyWinding()); }
 
+    /**
+     * The factor by which the inductance of winding {@code name} exceeds N²/R for a gap reluctance
+     * {@code gapReluctance} (for a gap of length g and face area A, R = g/(μ0·A); for gaps in series,
+     * their sum): the fringing factor the field finds, with any leakage the winding sees. Secant
+     * inductance at the solved current.
+     */
+    public double fringingFactor(String name, Quantity gapReluctance) {
+        double r = Require.positive("gap reluctance", gapReluctance, Dimension.RELUCTANCE);
+        int w = winding(name);
+        double n = model.mesh.geometry.regions().get(model.windings[w]).turns();
+        return Require.result("fringing factor of " + Require.quote(name), inductance(name).si() * r / (n * n));
+    }
+
+    /** {@link #fringingFactor(String, Quantity)} of the only winding. */
+    public double fringingFactor(Quantity gapReluctance) { return fringingFactor(onlyWinding(), gapReluctance); }
+
     /** Incremental inductance dλ/dI of winding {@code name} at this operating point (the tangent system solved once more). */
     public Quantity incrementalInductance(String name) {
         return Quantity.of(incrementalAt(winding(name)), Dimension.INDUCTANCE);
