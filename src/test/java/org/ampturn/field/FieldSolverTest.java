@@ -143,6 +143,8 @@ class FieldSolverTest {
             double field = s.fringingFactor(rGap);
             assertEquals(s.inductance().si() * rGap.si() / 1e4, field, 1e-12 * field);
             double sc = schwarzChristoffelFringing(g, a, (hw - g) / 2), mcLyman = mcLymanFringing(g, area, hw);
+            // the lumped gap's fringing (AirGap.withFringing) is McLyman's factor as transcribed here
+            assertEquals(mcLyman, org.ampturn.coil.AirGap.mcLymanFactor(g, area, hw), 1e-12);
             String seen = String.format("g %.2f mm: field %.4f, Schwarz-Christoffel %.4f, McLyman %.4f", g * 1e3, field, sc, mcLyman);
             assertTrue(field > last, "the factor rises with the gap; " + seen);
             last = field;
