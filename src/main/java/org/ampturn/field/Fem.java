@@ -23,7 +23,8 @@ import org.ejml.sparse.csc.factory.LinearSolverFactory_DSCC;
  * of the truncated domain. Nonlinear iron: Newton-Raphson with ν(B²) at each quadrature point, the
  * tangent {@code Σ_q W_q[ν G_qᵀG_q + 2 dν/d(B²) (G_qᵀB_q)(G_qᵀB_q)ᵀ]} (B_q = G_q·A_e), and, when the
  * full step overshoots, a line search for the least energy along the step (the energy functional is
- * convex for a rising B-H curve, so its slope along the step has one root). The sparse symmetric systems go to EJML's sparse Cholesky; the
+ * convex for a rising B-H curve, so its slope along the step has one root). The sparse symmetric
+ * systems go to EJML's sparse Cholesky, its symbolic factorisation made once per solve; the
  * unknowns are numbered by nested dissection of the grid (George, SIAM J. Numer. Anal. 10, 1973,
  * from memory), which keeps the fill of the factor near n·log n.
  */
@@ -348,7 +349,7 @@ final class Fem {
                 double slope0 = 0, slope1 = dot(dx.data, res);
                 for (int q = 0; q < neq; q++) slope0 -= dx.data[q] * rhs.data[q];
                 if (slope1 > LINE_TOL * -slope0) {
-                    // the energy still rises at the full step: go back to where it is least along dx
+                    // the energy has passed its least along dx and rises again at the full step: go back to the least
                     lineSearch(psi, dx.data, slope0, slope1, f, res, trial);
                     newNorm = assemble(trial, f, res, true);
                 }
