@@ -311,6 +311,11 @@ public final class Ampturn {
         return org.ampturn.chart.Figures.show(org.ampturn.chart.Figure.of("flux", org.ampturn.chart.FieldFigures.fluxLines(solution)));
     }
 
+    /** The flux plot of a field solution: flux lines over the |B| colour map, regions outlined. */
+    public static org.ampturn.chart.Figure plotField(org.ampturn.field.Solution solution) {
+        return org.ampturn.chart.Figures.show(org.ampturn.chart.Figure.of("field", org.ampturn.chart.FieldFigures.fluxPlot(solution)));
+    }
+
     /** The flux density |B| of a field solution as a colour map. */
     public static org.ampturn.chart.Figure plotFluxDensity(org.ampturn.field.Solution solution) {
         return org.ampturn.chart.Figures.show(org.ampturn.chart.Figure.of("flux-density", org.ampturn.chart.FieldFigures.fluxDensity(solution)));

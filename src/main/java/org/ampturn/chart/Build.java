@@ -305,6 +305,7 @@ final class Build {
         area(plot);
         plot.setDomainGridlinesVisible(false);
         plot.setRangeGridlinesVisible(false);
+        overlay(plot, m, xu, yu);
         JFreeChart chart = new JFreeChart(null, Style.TITLE, plot, false);
         page(chart, m.title());
         NumberAxis zAxis = axis(zu.label(m.zQuantity()));
@@ -318,6 +319,43 @@ final class Build {
         chart.addSubtitle(legend);
         return chart;
     }
+
+    /**
+     * Lines over a heat map, drawn after it: the first overlay as outlines (a light line on a dark
+     * edge), the others as contours (a thin light line on a darker halo), so they read on both ends
+     * of the ramp. The axes keep the map's range.
+     */
+    private static void overlay(XYPlot plot, FigureData.HeatMap m, AxisUnit xu, AxisUnit yu) {
+        if (m.overlays().isEmpty()) return;
+        DefaultXYDataset ds = new DefaultXYDataset();
+        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
+        r.setDrawSeriesLineAsPath(false);
+        int k = 0;
+        for (int i = 0; i < m.overlays().size(); i++) {
+            Trace t = m.overlays().get(i);
+            double[][] xy = {xu.toDisplay(t.xs()), yu.toDisplay(t.ys())};
+            boolean outline = i == 0;
+            // the dark under-stroke, then the light line on top of it
+            ds.addSeries(t.name() + " (edge " + i + ")", xy);
+            r.setSeriesPaint(k, outline ? Style.OUTLINE_EDGE : Style.CONTOUR_HALO);
+            r.setSeriesStroke(k++, outline ? Style.OUTLINE_EDGE_LINE : Style.CONTOUR_HALO_LINE);
+            ds.addSeries(t.name() + " (" + i + ")", xy);
+            r.setSeriesPaint(k, outline ? Style.OUTLINE : Style.CONTOUR);
+            r.setSeriesStroke(k++, outline ? Style.OUTLINE_LINE : Style.CONTOUR_LINE);
+        }
+        plot.setDataset(1, ds);
+        plot.setRenderer(1, r);
+        plot.setDatasetRenderingOrder(org.jfree.chart.plot.DatasetRenderingOrder.FORWARD);
+        plot.setSeriesRenderingOrder(org.jfree.chart.plot.SeriesRenderingOrder.FORWARD);
+        ((NumberAxis) plot.getDomainAxis()).setAutoRange(false);
+        double[] xs = xu.toDisplay(m.xs()), ys = yu.toDisplay(m.ys());
+        double bx = xu.toDisplay(step(m.xs())) / 2, by = yu.toDisplay(step(m.ys())) / 2;
+        plot.getDomainAxis().setRange(min(xs) - bx, max(xs) + bx);
+        plot.getRangeAxis().setRange(min(ys) - by, max(ys) + by);
+    }
+
+    private static double min(double[] v) { return Arrays.stream(v).filter(Double::isFinite).min().orElse(0); }
+    private static double max(double[] v) { return Arrays.stream(v).filter(Double::isFinite).max().orElse(1); }
 
     /** The grid step of one parameter: the smallest gap between distinct finite values (1 when there is one value). */
     static double step(double[] v) {

@@ -11,8 +11,8 @@ import org.ampturn.units.Quantity;
 
 /**
  * Figures of field solutions: flux lines (contours of r·A, which carry equal flux between
- * neighbours) with the regions outlined; the flux density |B| as a colour map; force against
- * stroke at each mapped current. The view is the device with a margin of half its size.
+ * neighbours) with the regions outlined; the flux density |B| as a colour map; both in one flux
+ * plot; force against stroke at each mapped current. The view is the device with a margin of half its size.
  */
 public final class FieldFigures {
     static final int LEVELS = 24;
@@ -24,6 +24,58 @@ public final class FieldFigures {
     public static FigureData fluxLines(Solution s) {
         if (s == null) throw new IllegalArgumentException("no field solution to draw (null)");
         double[] view = view(s);
+        return new FigureData.Lines("flux lines, " + s.mesh().nodes() + " nodes", "r", Dimension.LENGTH,
+                List.of(new Panel("z", Dimension.LENGTH, List.of(outlines(s), lines(s, view)))), List.of());
+    }
+
+    /** |B| over the device as a colour map, on a uniform grid of samples. */
+    public static FigureData fluxDensity(Solution s) {
+        if (s == null) throw new IllegalArgumentException("no field solution to draw (null)");
+        return densityMap(s, "flux density |B|", List.of());
+    }
+
+    /**
+     * The flux plot: flux lines (contours of r·A) over the |B| colour map, with the regions
+     * outlined, r across and z up, over the view of {@link #fluxLines} and {@link #fluxDensity}.
+     */
+    public static FigureData fluxPlot(Solution s) {
+        if (s == null) throw new IllegalArgumentException("no field solution to draw (null)");
+        return densityMap(s, "flux lines over |B|, " + s.mesh().nodes() + " nodes", List.of(outlines(s), lines(s, view(s))));
+    }
+
+    private static FigureData densityMap(Solution s, String title, List<Trace> overlays) {
+        double[] view = view(s);
+        int n = PIXELS;
+        double[] x = new double[n * n], y = new double[n * n], b = new double[n * n];
+        for (int j = 0; j < n; j++) {
+            for (int i = 0; i < n; i++) {
+                double r = view[0] + (view[1] - view[0]) * (i + 0.5) / n, z = view[2] + (view[3] - view[2]) * (j + 0.5) / n;
+                int k = j * n + i;
+                x[k] = r;
+                y[k] = z;
+                b[k] = s.fluxDensityAt(r, z)[0];
+            }
+        }
+        return new FigureData.HeatMap(title, "r", Dimension.LENGTH, x, "z", Dimension.LENGTH, y, "|B|", Dimension.FLUX_DENSITY, b, overlays);
+    }
+
+    /** The regions' outlines, each closed and ended by a NaN break. */
+    private static Trace outlines(Solution s) {
+        List<Double> ox = new ArrayList<>(), oy = new ArrayList<>();
+        for (Region g : s.mesh().geometry().regions()) {
+            double[] cr = g.shape().rs(), cz = g.shape().zs();
+            for (int k = 0; k <= cr.length; k++) {
+                ox.add(cr[k % cr.length]);
+                oy.add(cz[k % cr.length]);
+            }
+            ox.add(Double.NaN);
+            oy.add(Double.NaN);
+        }
+        return Trace.of("regions", unbox(ox), unbox(oy));
+    }
+
+    /** {@link #LEVELS} − 1 evenly spaced contours of r·A over the view, joined into polylines. */
+    private static Trace lines(Solution s, double[] view) {
         double[] r = s.mesh().radii(), z = s.mesh().heights(), psi = s.fluxFunction();
         int nr = r.length;
         double lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
@@ -48,39 +100,8 @@ public final class FieldFigures {
                 }
             }
         }
-        List<Double> ox = new ArrayList<>(), oy = new ArrayList<>();
-        for (Region g : s.mesh().geometry().regions()) {
-            double[] cr = g.shape().rs(), cz = g.shape().zs();
-            for (int k = 0; k <= cr.length; k++) {
-                ox.add(cr[k % cr.length]);
-                oy.add(cz[k % cr.length]);
-            }
-            ox.add(Double.NaN);
-            oy.add(Double.NaN);
-        }
         double[][] chained = chain(unbox(xs), unbox(ys), 1e-9 * (view[1] - view[0] + view[3] - view[2]), Build.SAMPLING_ABOVE - 10);
-        Trace lines = Trace.of("flux lines", chained[0], chained[1]);
-        Trace outlines = Trace.of("regions", unbox(ox), unbox(oy));
-        return new FigureData.Lines("flux lines, " + s.mesh().nodes() + " nodes", "r", Dimension.LENGTH,
-                List.of(new Panel("z", Dimension.LENGTH, List.of(outlines, lines))), List.of());
-    }
-
-    /** |B| over the device as a colour map, on a uniform grid of samples. */
-    public static FigureData fluxDensity(Solution s) {
-        if (s == null) throw new IllegalArgumentException("no field solution to draw (null)");
-        double[] view = view(s);
-        int n = PIXELS;
-        double[] x = new double[n * n], y = new double[n * n], b = new double[n * n];
-        for (int j = 0; j < n; j++) {
-            for (int i = 0; i < n; i++) {
-                double r = view[0] + (view[1] - view[0]) * (i + 0.5) / n, z = view[2] + (view[3] - view[2]) * (j + 0.5) / n;
-                int k = j * n + i;
-                x[k] = r;
-                y[k] = z;
-                b[k] = s.fluxDensityAt(r, z)[0];
-            }
-        }
-        return new FigureData.HeatMap("flux density |B|", "r", Dimension.LENGTH, x, "z", Dimension.LENGTH, y, "|B|", Dimension.FLUX_DENSITY, b);
+        return Trace.of("flux lines", chained[0], chained[1]);
     }
 
     /** Force toward closing against stroke, one curve per mapped current (Maxwell stress). */

@@ -109,6 +109,7 @@ public final class Figure {
         }
         if (d instanceof FigureData.Histogram h) return "histogram of " + h.quantity() + ", " + h.raw().length + " runs";
         FigureData.HeatMap m = (FigureData.HeatMap) d;
-        return "map of " + m.zQuantity() + " over " + m.xQuantity() + " and " + m.yQuantity() + ", " + m.zs().length + " cells";
+        return "map of " + m.zQuantity() + " over " + m.xQuantity() + " and " + m.yQuantity() + ", " + m.zs().length + " cells"
+                + (m.overlays().isEmpty() ? "" : ", with " + String.join(" and ", m.overlays().stream().map(Trace::name).toList()));
     }
 }

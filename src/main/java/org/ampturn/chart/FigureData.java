@@ -72,11 +72,20 @@ public sealed interface FigureData {
 
     /**
      * A heat map of z over a two-parameter grid, one cell per (x, y) row; NaN z cells are left blank.
+     * Overlays are lines in the same x and y (NaN breaks a line) drawn over the map: the first as
+     * outlines, the others as contour lines (a flux plot: region outlines, then flux lines).
      */
     record HeatMap(String title, String xQuantity, Dimension xDimension, double[] x,
                    String yQuantity, Dimension yDimension, double[] y,
-                   String zQuantity, Dimension zDimension, double[] z) implements FigureData {
+                   String zQuantity, Dimension zDimension, double[] z, List<Trace> overlays) implements FigureData {
+        /** A map with no overlays. */
+        public HeatMap(String title, String xQuantity, Dimension xDimension, double[] x, String yQuantity, Dimension yDimension, double[] y,
+                       String zQuantity, Dimension zDimension, double[] z) {
+            this(title, xQuantity, xDimension, x, yQuantity, yDimension, y, zQuantity, zDimension, z, List.of());
+        }
+
         public HeatMap {
+            overlays = overlays == null ? List.of() : List.copyOf(overlays);
             if (title == null) title = "";
             if (x == null || y == null || z == null) throw new IllegalArgumentException("a heat map needs x, y and z values");
             if (x.length != y.length || y.length != z.length) {

@@ -81,6 +81,16 @@ final class Style {
     static final Stroke LIMIT_LINE = new BasicStroke(2.0f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10f,
             new float[] {8f, 4f}, 0f);
 
+    /** Lines over a heat map: region outlines and contours, each a light line on a dark under-stroke. */
+    static final Color OUTLINE = new Color(0xFF, 0x9E, 0x3D);
+    static final Color OUTLINE_EDGE = new Color(0x26, 0x2B, 0x33, 200);
+    static final Color CONTOUR = new Color(0xFF, 0xFF, 0xFF, 230);
+    static final Color CONTOUR_HALO = new Color(0x26, 0x2B, 0x33, 90);
+    static final Stroke OUTLINE_LINE = new BasicStroke(1.6f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+    static final Stroke OUTLINE_EDGE_LINE = new BasicStroke(3.4f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+    static final Stroke CONTOUR_LINE = new BasicStroke(0.9f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+    static final Stroke CONTOUR_HALO_LINE = new BasicStroke(1.9f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
+
     /** The heat-map ramp: deep ink blue through sea green to pale straw (our own stops). */
     private static final Color[] RAMP = {
         new Color(0x1A, 0x23, 0x4E), new Color(0x22, 0x5E, 0x96), new Color(0x2E, 0x9A, 0x9A),

@@ -21,14 +21,18 @@ import org.ejml.sparse.csc.factory.LinearSolverFactory_DSCC;
  * inside the triangle, so A/r is finite even next to the axis, where A = 0. A uniform field
  * (A = B·r/2) is represented exactly. Boundary conditions: A = 0 on the axis and on the outer edges
  * of the truncated domain. Nonlinear iron: Newton-Raphson with ν(B²) at each quadrature point, the
- * tangent {@code Σ_q W_q[ν G_qᵀG_q + 2 dν/d(B²) (G_qᵀB_q)(G_qᵀB_q)ᵀ]} (B_q = G_q·A_e), and a halving
- * line search on the residual. The sparse symmetric systems go to EJML's sparse Cholesky; the
+ * tangent {@code Σ_q W_q[ν G_qᵀG_q + 2 dν/d(B²) (G_qᵀB_q)(G_qᵀB_q)ᵀ]} (B_q = G_q·A_e), and, when the
+ * full step overshoots, a line search for the least energy along the step (the energy functional is
+ * convex for a rising B-H curve, so its slope along the step has one root). The sparse symmetric
+ * systems go to EJML's sparse Cholesky, its symbolic factorisation made once per solve; the
  * unknowns are numbered by nested dissection of the grid (George, SIAM J. Numer. Anal. 10, 1973,
  * from memory), which keeps the fill of the factor near n·log n.
  */
 final class Fem {
     static final int MAX_NEWTON = 40;
     static final double NEWTON_TOL = 1e-7;
+    /** The line search stops where the energy's slope along the step is below this fraction of its start. */
+    static final double LINE_TOL = 0.2;
 
     private Fem() {}
 
@@ -262,6 +266,42 @@ final class Fem {
             return Math.sqrt(sum);
         }
 
+        /**
+         * The step α in (0, 1) where the energy is least along {@code dx}: the root of its slope
+         * g(α) = dx·R(ψ + α·dx), rising from {@code g0} &lt; 0 to {@code g1} &gt; 0 (the energy is convex
+         * for a rising B-H curve), by regula falsi with the Illinois halving, to {@link #LINE_TOL} of
+         * |g0|. Leaves ψ + α·dx in {@code trial} and returns the residual norm there.
+         */
+        double lineSearch(double[] psi, double[] dx, double g0, double g1, double[] f, double[] res, double[] trial) {
+            double a = 0, ga = g0, b = 1, gb = g1, norm = 0;
+            int side = 0;
+            for (int ls = 0; ls < 8; ls++) {
+                double x = (a * gb - b * ga) / (gb - ga);
+                for (int n = 0; n < psi.length; n++) if (eq[n] >= 0) trial[n] = psi[n] + x * dx[eq[n]];
+                norm = assemble(trial, f, res, false);
+                double g = dot(dx, res);
+                if (Math.abs(g) < LINE_TOL * -g0) break;
+                if (g > 0) {
+                    b = x;
+                    gb = g;
+                    if (side == -1) ga /= 2;
+                    side = -1;
+                } else {
+                    a = x;
+                    ga = g;
+                    if (side == 1) gb /= 2;
+                    side = 1;
+                }
+            }
+            return norm;
+        }
+
+        static double dot(double[] a, double[] b) {
+            double s = 0;
+            for (int i = 0; i < a.length; i++) s += a[i] * b[i];
+            return s;
+        }
+
         boolean nonlinear() {
             for (MagneticMaterial m : mat) if (m != null) return true;
             return false;
@@ -297,25 +337,24 @@ final class Fem {
                 chol.solve(rhs, dx);
                 it++;
                 double[] trial = psi.clone();
-                double step = 1;
-                double newNorm = norm;
-                boolean tangentAtTrial = false;
-                for (int ls = 0; ls < 12; ls++) {
-                    for (int n = 0; n < psi.length; n++) if (eq[n] >= 0) trial[n] = psi[n] + step * dx.data[eq[n]];
-                    if (!nonlinear) break;
-                    // the full step is usually taken: assemble its tangent with its residual at once
-                    tangentAtTrial = ls == 0;
-                    newNorm = assemble(trial, f, res, tangentAtTrial);
-                    if (newNorm < norm || ls == 11) break;
-                    step /= 2;
-                }
-                psi = trial;
+                for (int n = 0; n < psi.length; n++) if (eq[n] >= 0) trial[n] = psi[n] + dx.data[eq[n]];
                 if (!nonlinear) {
+                    psi = trial;
                     norm = assemble(psi, f, res, false);
                     rel = norm / fnorm;
                     break;
                 }
-                norm = tangentAtTrial ? newNorm : assemble(psi, f, res, true);
+                // the full step is usually taken: assemble its tangent with its residual at once
+                double newNorm = assemble(trial, f, res, true);
+                double slope0 = 0, slope1 = dot(dx.data, res);
+                for (int q = 0; q < neq; q++) slope0 -= dx.data[q] * rhs.data[q];
+                if (slope1 > LINE_TOL * -slope0) {
+                    // the energy has passed its least along dx and rises again at the full step: go back to the least
+                    lineSearch(psi, dx.data, slope0, slope1, f, res, trial);
+                    newNorm = assemble(trial, f, res, true);
+                }
+                psi = trial;
+                norm = newNorm;
                 rel = norm / fnorm;
                 if (rel < NEWTON_TOL) break;
                 if (it >= MAX_NEWTON) {
@@ -323,11 +362,11 @@ final class Fem {
                     break;
                 }
             }
-            // the factor of the tangent at the solution, for incremental inductances
-            if (nonlinear) {
-                chol.setA(k);
-            }
-            return new Solution(this, psi, it, rel, chol, rel < NEWTON_TOL || !nonlinear);
+            // incremental inductances need the factor of the tangent at the solution: for a linear
+            // problem it is the one just used; otherwise the solution keeps the tangent and factors it
+            // only when asked (a map never asks)
+            if (nonlinear) return new Solution(this, psi, it, rel, k.copy(), rel < NEWTON_TOL);
+            return new Solution(this, psi, it, rel, chol, true);
         }
     }
 }

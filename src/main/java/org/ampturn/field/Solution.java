@@ -9,6 +9,8 @@ import org.ampturn.units.Require;
 import org.ejml.data.DMatrixRMaj;
 import org.ejml.data.DMatrixSparseCSC;
 import org.ejml.interfaces.linsol.LinearSolverSparse;
+import org.ejml.sparse.FillReducing;
+import org.ejml.sparse.csc.factory.LinearSolverFactory_DSCC;
 
 /**
  * A solved field: the vector potential A_φ at every node and what follows from it. Flux density
@@ -24,11 +26,23 @@ public final class Solution {
     private final int iterations;
     private final double residual;
     private final boolean converged;
-    private final LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> factor;
+    private LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> factor; // of the tangent, made on first use when null
+    private final DMatrixSparseCSC tangent; // the tangent at the solution while it is not factored
     private final double energy;
     private final double[] amps; // winding currents of this solve (the model may be reused at other currents)
 
     Solution(Fem.Model model, double[] psi, int iterations, double residual, LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> factor, boolean converged) {
+        this(model, psi, iterations, residual, factor, null, converged);
+    }
+
+    /** A solution whose tangent is factored when an incremental inductance is first asked for. */
+    Solution(Fem.Model model, double[] psi, int iterations, double residual, DMatrixSparseCSC tangent, boolean converged) {
+        this(model, psi, iterations, residual, null, tangent, converged);
+    }
+
+    private Solution(Fem.Model model, double[] psi, int iterations, double residual, LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> factor,
+                     DMatrixSparseCSC tangent, boolean converged) {
+        this.tangent = tangent;
         this.model = model;
         this.psi = psi;
         this.iterations = iterations;
@@ -131,12 +145,37 @@ public final class Solution {
 
     public Quantity inductance() { return inductance(onlyWinding()); }
 
+    /**
+     * The factor by which the inductance of winding {@code name} exceeds N²/R for a gap reluctance
+     * {@code gapReluctance} (for a gap of length g and face area A, R = g/(μ0·A); for gaps in series,
+     * their sum): the fringing factor the field finds, with any leakage the winding sees. Secant
+     * inductance at the solved current.
+     */
+    public double fringingFactor(String name, Quantity gapReluctance) {
+        double r = Require.positive("gap reluctance", gapReluctance, Dimension.RELUCTANCE);
+        int w = winding(name);
+        double n = model.mesh.geometry.regions().get(model.windings[w]).turns();
+        return Require.result("fringing factor of " + Require.quote(name), inductance(name).si() * r / (n * n));
+    }
+
+    /** {@link #fringingFactor(String, Quantity)} of the only winding. */
+    public double fringingFactor(Quantity gapReluctance) { return fringingFactor(onlyWinding(), gapReluctance); }
+
     /** Incremental inductance dλ/dI of winding {@code name} at this operating point (the tangent system solved once more). */
     public Quantity incrementalInductance(String name) {
         return Quantity.of(incrementalAt(winding(name)), Dimension.INDUCTANCE);
     }
 
     public Quantity incrementalInductance() { return incrementalInductance(onlyWinding()); }
+
+    private synchronized LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> factor() {
+        if (factor == null) {
+            LinearSolverSparse<DMatrixSparseCSC, DMatrixRMaj> chol = LinearSolverFactory_DSCC.cholesky(FillReducing.NONE);
+            if (!chol.setA(tangent.copy())) throw Require.fail("field solution: the tangent stiffness is not positive definite; no incremental inductance");
+            factor = chol;
+        }
+        return factor;
+    }
 
     double incrementalAt(int w) {
         int neq = model.neq;
@@ -145,7 +184,7 @@ public final class Solution {
         boolean any = false;
         for (int n = 0; n < wt.length; n++) if (model.eq[n] >= 0) { rhs.data[model.eq[n]] = wt[n]; any |= wt[n] != 0; }
         if (!any) return 0;
-        factor.solve(rhs, x);
+        factor().solve(rhs, x);
         double s = 0;
         for (int n = 0; n < wt.length; n++) if (model.eq[n] >= 0) s += wt[n] * x.data[model.eq[n]];
         return s;

@@ -25,6 +25,15 @@ class FieldBadInputTest {
     }
 
     @Test
+    void fringingFactorNeedsAPositiveGapReluctance() {
+        Solution s = Geometry.of().withCellsAcross(4).withWinding("coil", Shape.rectAt(0.01, 0, 0.012, 0.01), 10, Quantity.of(1, "A")).solve();
+        fails(() -> s.fringingFactor(Quantity.of(0, "A/Wb")), "gap reluctance");
+        fails(() -> s.fringingFactor(Quantity.of(-1, "A/Wb")), "gap reluctance");
+        fails(() -> s.fringingFactor(Quantity.of(1, "H")), "gap reluctance");
+        fails(() -> s.fringingFactor("rim", Quantity.of(1e6, "A/Wb")), "\"rim\"");
+    }
+
+    @Test
     void windingInsideIron() {
         fails(() -> base.withWinding("coil", Shape.rectAt(0.001, 0.005, 0.003, 0.01), 100, Quantity.of(1, "A")), "\"coil\"", "winding inside iron", "\"core\"");
     }
