@@ -56,7 +56,7 @@ public class SaturatingSpeedBench {
     private final Circuit tableRun = Drive.dc(V(VOLTS)).into(wound).offAt(ms(20), Clamp.zener(V(ZENER))).tolerance(RTOL);
     private final Circuit analyticRun = Drive.dc(V(12)).into(analytic).offAt(ms(20), Clamp.zener(V(24))).tolerance(RTOL);
     private final MagneticMaterial steel = Materials.SILICON_STEEL;
-    private final LoadProbe solverKernel = LoadProbe.of(wound);
+    final LoadProbe solverKernel = LoadProbe.of(wound);
     private final double lamMax = wound.fluxLinkageAt(VOLTS / OHMS);
     private double x = 0.01;
 
