@@ -97,7 +97,7 @@ abstract class Load {
      * gapped silicon-steel coil left to the exact curve), whereas the steps between samples are
      * short and the end currents come free. Against the old fixed panels (one 5-point
      * Gauss-Legendre panel a sample, 8 for a long stretch) the result is closer to a fine Gauss
-     * quadrature, not further: on a saturating run 2e-14 J against 2e-8 J.
+     * quadrature, not further: on a saturating run (0.061 J at its peak) 1.3e-12 J against 1.9e-8 J.
      */
     static final class CoilLoad extends Load {
         private final Coil coil;
@@ -167,7 +167,7 @@ abstract class Load {
         private static final double LOBATTO = 0.6546536707079771;
 
         /** Error allowed per step, relative to the energy so far plus the step's own (see {@link #lobatto}). */
-        static final double ENERGY_TOL = 1e-12;
+        static final double ENERGY_TOL = 1e-9;
         /** Halvings allowed per step. */
         static final int DEPTH = 10;
 
