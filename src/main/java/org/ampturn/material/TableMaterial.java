@@ -16,8 +16,7 @@ import org.ampturn.units.Quantity;
  * vacuum term grows). B(−H) = −B(H).
  *
  * <p>The inverse H(B): a dense inverse table, built once, holds {@value #SUB} sub-points in each
- * table interval with their exact H, B and dH/dB, found from B through an index of equal steps in B
- * ({@value #BUCKETS} a sub-interval on average) instead of a bisection; between two of them H is a cubic Hermite in B,
+ * table interval with their exact H, B and dH/dB; between two of them H is a cubic Hermite in B,
  * which starts Newton steps on the interval's own cubic B(H); the last step is taken from a
  * residual below {@value #RESIDUAL} T and moves H by less than {@value #STEP} of itself, so by
  * quadratic convergence H is then within rounding of the root. Where a sub-interval is nearly flat (dB/dH almost 0 at an end, as on the
@@ -44,11 +43,6 @@ final class TableMaterial implements MagneticMaterial {
     private final double[] ih;  // H at the sub-points
     private final double[] ds;  // dH/dB at the start of each sub-interval; NaN where the sub-interval is nearly flat
     private final double[] de;  // dH/dB at the end of each sub-interval
-    /** Sub-interval of the dense inverse table that holds B = q/{@link #bucketScale}, for q up to {@value #BUCKETS} per sub-interval. */
-    private final int[] bucket;
-    private final double bucketScale;
-    /** Index buckets per sub-interval of the dense inverse table: the search for B is a lookup and a step or two. */
-    static final int BUCKETS = 4;
 
     TableMaterial(String name, double[] hIn, double[] bIn, double bsat) {
         int n = hIn.length;
@@ -107,9 +101,6 @@ final class TableMaterial implements MagneticMaterial {
         ih[cells] = hh[hh.length - 1];
         ib[cells] = bb[bb.length - 1];
         for (int j = 0; j < cells; j++) if (!((j + 1 < cells ? ib[j + 1] : ib[cells]) > ib[j])) ds[j] = Double.NaN;
-        bucket = new int[BUCKETS * cells];
-        bucketScale = bucket.length / ib[cells];
-        for (int q = 0; q < bucket.length; q++) bucket[q] = Math.min(interval(ib, q / bucketScale), cells - 1);
         // a first point at a vanishing H gives an initial slope no material has (and ∞ in a double)
         Require.between("initial relative permeability of the B-H table", m[0] / MU0, 1e-3, 1e8);
     }
@@ -184,10 +175,7 @@ final class TableMaterial implements MagneticMaterial {
 
     /** H at 0 ≤ y < B_n: a Hermite start from the dense inverse table, then Newton on the interval's cubic. */
     private double fastInverse(double y) {
-        int j = bucket[Math.min((int) (y * bucketScale), bucket.length - 1)];
-        // the bucket's first sub-interval, then on to the one with ib[j] <= y < ib[j + 1] (as the bisection finds it)
-        while (ib[j] > y) j--;
-        while (ib[j + 1] <= y) j++;
+        int j = interval(ib, y);
         double d0 = ds[j], d1 = de[j];
         if (d0 != d0) return guardedInverse(y); // nearly flat: the safeguarded path
         int i = j / SUB;
