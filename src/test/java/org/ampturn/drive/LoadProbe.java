@@ -10,7 +10,7 @@ public final class LoadProbe {
         this.load = load;
     }
 
-    /** The load of a run of {@code coil} to its steady current {@code amps}, as the solver makes it. */
+    /** The load of a run of {@code coil}, as the solver makes it. */
     public static LoadProbe of(Coil coil) {
         return new LoadProbe(Load.of(coil));
     }
