@@ -260,8 +260,9 @@ public final class CoreLoss {
         int direction = 0;
         double energy = 0;
         for (int j = 1; j < n; j++) {
-            Require.finite("t[" + j + "] (s)", t[j]);
-            Require.finite("b[" + j + "] (T)", b[j]);
+            // the names are built only for a message: this loop runs once per output sample of a transient
+            if (!Double.isFinite(t[j])) Require.finite("t[" + j + "] (s)", t[j]);
+            if (!Double.isFinite(b[j])) Require.finite("b[" + j + "] (T)", b[j]);
             double dt = t[j] - t[j - 1];
             if (!(dt >= 0)) throw Require.fail("times must not decrease: t[" + j + "] = " + t[j] + " s after " + t[j - 1] + " s");
             double from = b[j - 1];
