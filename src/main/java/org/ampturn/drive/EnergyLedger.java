@@ -9,17 +9,19 @@ import org.ampturn.units.Quantity;
  * closed form on linear pieces), except {@link #stored()}, which is computed from the final state
  * (flux linkage, capacitor voltage, position), so the balance is a real check of the solution:
  *
- * <pre>supplied = resistive + driveLoss + clamp + eddy + stored + mechanical + balanceError</pre>
+ * <pre>supplied = resistive + driveLoss + clamp + eddy + armatureHysteresis + stored + mechanical + balanceError</pre>
  *
  * <p>{@code resistive} is the loss in the coil's own winding resistance; {@code driveLoss} the loss
  * in the source resistance and the switch's on-resistance; {@code clamp} the energy taken by the
  * clamp (or by the switch in avalanche when there is no clamp); {@code stored} the change of stored
  * energy over the run (magnetic field plus snubber capacitor); {@code mechanical} the work the
  * magnetic force did on the armature; {@code eddy} the loss in eddy currents and shorted turns
- * ({@link EddyLadder}). Immutable.
+ * ({@link EddyLadder}); {@code armatureHysteresis} the hysteresis loss in an armature's iron
+ * ({@link IronHysteresis}, zero without it). Immutable.
  */
 public final class EnergyLedger {
     private final double supplied, resistive, driveLoss, clamp, stored, mechanical, eddy;
+    private final double armatureHysteresis;
 
     EnergyLedger(double supplied, double resistive, double driveLoss, double clamp, double stored, double mechanical) {
         this(supplied, resistive, driveLoss, clamp, stored, mechanical, 0);
@@ -27,12 +29,29 @@ public final class EnergyLedger {
 
     EnergyLedger(double supplied, double resistive, double driveLoss, double clamp, double stored, double mechanical, double eddy) {
         this.eddy = eddy;
+        this.armatureHysteresis = 0;
         this.supplied = supplied;
         this.resistive = resistive;
         this.driveLoss = driveLoss;
         this.clamp = clamp;
         this.stored = stored;
         this.mechanical = mechanical;
+    }
+
+    /** This ledger with the hysteresis loss of an armature's iron (J) as an entry of its own. */
+    EnergyLedger withArmatureHysteresis(double joules) {
+        return new EnergyLedger(this, joules);
+    }
+
+    private EnergyLedger(EnergyLedger b, double armatureHysteresis) {
+        this.supplied = b.supplied;
+        this.resistive = b.resistive;
+        this.driveLoss = b.driveLoss;
+        this.clamp = b.clamp;
+        this.stored = b.stored;
+        this.mechanical = b.mechanical;
+        this.eddy = b.eddy;
+        this.armatureHysteresis = armatureHysteresis;
     }
 
     private static Quantity j(double v) { return Quantity.of(v, Dimension.ENERGY); }
@@ -53,12 +72,14 @@ public final class EnergyLedger {
     public Quantity mechanical() { return j(mechanical); }
     /** Loss in eddy currents and shorted turns (zero without an {@link EddyLadder}). */
     public Quantity eddy() { return j(eddy); }
-    /** supplied − (resistive + driveLoss + clamp + eddy + stored + mechanical). */
+    /** Hysteresis loss in an armature's iron, by its play operator (zero without {@link IronHysteresis}). */
+    public Quantity armatureHysteresis() { return j(armatureHysteresis); }
+    /** supplied − (resistive + driveLoss + clamp + eddy + armatureHysteresis + stored + mechanical). */
     public Quantity balanceError() { return j(balanceErrorJoules()); }
 
     /** SI kernel of {@link #balanceError()}. */
     public double balanceErrorJoules() {
-        return supplied - (resistive + driveLoss + clamp + eddy + stored + mechanical);
+        return supplied - (resistive + driveLoss + clamp + eddy + armatureHysteresis + stored + mechanical);
     }
 
     /** |balance error| / supplied (or over the largest entry when nothing was supplied). */
@@ -75,6 +96,7 @@ public final class EnergyLedger {
         if (driveLoss != 0) s += " + drive loss " + j(driveLoss);
         s += " + clamp " + j(clamp);
         if (eddy != 0) s += " + eddy currents " + j(eddy);
+        if (armatureHysteresis != 0) s += " + armature iron hysteresis " + j(armatureHysteresis);
         s += " + stored " + j(stored);
         if (mechanical != 0) s += " + mechanical " + j(mechanical);
         // the exact error is solver noise that changes with any solver detail; a worksheet records

@@ -28,7 +28,7 @@ final class Solver {
 
     // outputs of eval()
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
-            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_N = 12;
+            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_PHYST = 12, O_N = 13;
 
     /** Most switching segments (each PWM edge, comparator edge or event starts one) a run may take. */
     static final long MAX_SEGMENTS = 20_000_000L;
@@ -72,6 +72,12 @@ final class Solver {
     final int loops;   // loops of the ladder
     final int dim;     // state size
     final double restitution;
+    /** Iron hysteresis: the coercive current Hc·l/N (0: none), its branch (+1 rising, −1 falling) and the state of its loss integral (−1: none). */
+    final double hc;
+    final int eHyst;
+    double branch = 1;
+    /** With hysteresis, after a final switch-off with the coil open at the end: the magnetising flux linkage and the pull left. */
+    double residualLambda = Double.NaN, residualPull = Double.NaN;
     final double[] y;
     final double[] ladRate;
     Elec elec = Elec.ON;
@@ -133,7 +139,10 @@ final class Solver {
         this.moves = load.moves();
         this.ladder = load.ladder();
         this.loops = ladder.sections();
-        this.dim = loops > 0 ? LAD + loops : DIM;
+        this.hc = load.hysteresis().amps();
+        int base = loops > 0 ? LAD + loops : DIM;
+        this.eHyst = hc > 0 ? base : -1;
+        this.dim = base + (hc > 0 ? 1 : 0);
         this.y = new double[dim];
         this.ladRate = new double[loops];
         this.restitution = load.restitution();
@@ -205,7 +214,7 @@ final class Solver {
     void eval(Elec e, Mech m, double[] s, double[] o) {
         double lam = s[LAM], x = s[X], v = s[V];
         double i = loops > 0 ? (e == Elec.IDLE ? 0 : (lam - s[LAD]) / ladder.leakage)
-                : e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
+                : e == Elec.IDLE && (!moves || hc > 0) ? 0 : load.currentAt(lam, x) + branch * hc;
         if (!Double.isFinite(i)) {
             // a trial stage beyond the core model's range: a huge current makes the integrator reject the step
             nonFiniteLambda = lam;
@@ -256,7 +265,7 @@ final class Solver {
                 }
                 break;
             default:
-                dl = 0;
+                dl = hc > 0 && loops == 0 ? Remanence.idleFluxRate(this, s) : 0;
                 vsw = vs;
                 i = 0;
         }
@@ -280,6 +289,8 @@ final class Solver {
         o[O_DVC] = dvc;
         o[O_ACC] = acc;
         o[O_PEDDY] = pEddy;
+        // the play operator's loss Hc·l·|dφ|: the magnetising flux moves only along the branch the switch set
+        o[O_PHYST] = hc > 0 ? branch * hc * (loops > 0 ? ladRate[0] : dl) : 0;
     }
 
     /** The pull of the magnet: the actuator's, or the sum over the ladder's flux tubes. */
@@ -306,8 +317,8 @@ final class Solver {
     /** The coil current of a state (zero with the coil open and idle). */
     double coilCurrent(double[] s) {
         if (loops > 0) return elec == Elec.IDLE ? 0 : (s[LAM] - s[LAD]) / ladder.leakage;
-        if (elec == Elec.IDLE && !moves) return 0;
-        return load.currentAt(s[LAM], s[X]);
+        if (elec == Elec.IDLE && (!moves || hc > 0)) return 0;
+        return load.currentAt(s[LAM], s[X]) + branch * hc;
     }
 
     /**
@@ -319,7 +330,7 @@ final class Solver {
         for (int k = 0; k < loops; k++) {
             double fk = ladder.share[k];
             double lamTube = tubeLambda(s, k);
-            double next = load.currentAt(lamTube / fk, s[X]);
+            double next = load.currentAt(lamTube / fk, s[X]) + branch * hc;
             if (!Double.isFinite(next)) {
                 nonFiniteLambda = lamTube;
                 next = Math.copySign(1e150, lamTube);
@@ -350,6 +361,7 @@ final class Solver {
             d[EEDDY] = scratch[O_PEDDY];
             System.arraycopy(ladRate, 0, d, LAD, loops);
         }
+        if (eHyst >= 0) d[eHyst] = scratch[O_PHYST];
     }
 
     double storedAt(double[] s) {
@@ -548,13 +560,14 @@ final class Solver {
     private void setSwitch(boolean on) {
         if (!on && switchOn) firstOn = false;
         switchOn = on;
+        if (hc > 0) branch = on ? 1 : -1;
         if (on) {
             elec = Elec.ON;
         } else if (snub) {
             elec = Elec.CLAMP;
         } else {
             elec = currentNow() > 0 ? Elec.CLAMP : Elec.IDLE;
-            if (elec == Elec.IDLE) y[LAM] = loops > 0 ? y[LAD] : 0;
+            if (elec == Elec.IDLE) y[LAM] = loops > 0 ? y[LAD] : hc > 0 ? y[LAM] : 0;
         }
     }
 
@@ -638,7 +651,8 @@ final class Solver {
                 break;
             case CLAMP_ZERO:
                 elec = Elec.IDLE;
-                y[LAM] = loops > 0 ? y[LAD] : 0;
+                // with hysteresis the current reaches zero on the falling branch with the iron's residual flux left
+                y[LAM] = loops > 0 ? y[LAD] : hc > 0 ? y[LAM] : 0;
                 if (finalOff && Double.isNaN(decayZero)) {
                     decayZero = t - offAt;
                     markers.add(new Marker("current zero", tq(t), Quantity.of(0, Dimension.CURRENT), "current"));
@@ -790,6 +804,7 @@ final class Solver {
             }
         }
         while (nextSample < n) record(nextSample, y);
+        if (hc > 0) Remanence.atEnd(this);
         if (stepper instanceof OdeStepper) {
             OdeStepper o = (OdeStepper) stepper;
             notes.add(o.steps() + " accepted steps, " + o.evaluations() + " derivative evaluations");
