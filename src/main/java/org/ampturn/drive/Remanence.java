@@ -20,7 +20,10 @@ final class Remanence {
      * curve without hysteresis gives the coercive current, {@code i(λ, x) = c}. While the armature's
      * motion raises i at fixed λ (the gap opens) the flux follows that level down,
      * {@code dλ/dt = −(∂i/∂x)·v / (∂i/∂λ)}; otherwise the applied field is inside the play band and
-     * the flux stays. The slopes by central differences (10⁻⁶ of the stroke and of λ).
+     * the flux stays. The slopes by central differences (10⁻⁶ of the stroke and of λ). "On the
+     * level" means within 0.1 % of c: following keeps i at the level it started from, and a
+     * tighter test would let the integrator's own error switch the flux between following and
+     * staying from one stage to the next (a right-hand side that jumps, and tiny steps).
      */
     static double idleFluxRate(Solver sv, double[] s) {
         double v = s[V];
@@ -28,7 +31,7 @@ final class Remanence {
         double lam = s[LAM], x = s[X];
         Load load = sv.load;
         double i0 = load.currentAt(lam, x);
-        if (!(i0 >= sv.hc * (1 - 1e-9))) return 0;
+        if (!(i0 >= sv.hc * (1 - 1e-3))) return 0;
         double stroke = load.stroke(), hx = 1e-6 * stroke;
         double x1 = Math.max(0, x - hx), x2 = Math.min(stroke, x + hx);
         double pushX = (load.currentAt(lam, x2) - load.currentAt(lam, x1)) / (x2 - x1) * v;
