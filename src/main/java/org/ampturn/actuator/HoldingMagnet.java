@@ -2,6 +2,7 @@ package org.ampturn.actuator;
 
 import org.ampturn.coil.MagneticCircuit;
 import org.ampturn.drive.Armature;
+import org.ampturn.drive.IronHysteresis;
 import org.ampturn.drive.Marker;
 import org.ampturn.drive.Transient;
 import org.ampturn.material.Conductor;
@@ -33,10 +34,11 @@ import org.ampturn.wire.Winding;
  * {@code W = ∫F_iron dφ + ½φ²·n·g/(μ0·A)}; pull {@code −∂W/∂g = n·φ²/(2μ0·A)} (Maxwell's stress on
  * the n pole faces; Roters, Electromagnetic Devices, 1941, ch. 5; Fitzgerald, Kingsley and Umans,
  * Electric Machinery, 6th ed., ch. 3). Fringing and leakage are left out, as in
- * {@link Electromagnet}; valid while the gap is short against the pole's width. Remanence is not
- * carried by the run: the flux decays to zero with the current; {@link #withCoercivity} gives the
- * static recoil-line figures and keeps {@link #release} from reporting a release the residual flux
- * would prevent (see lib-docs/force.md).
+ * {@link Electromagnet}; valid while the gap is short against the pole's width. Without
+ * {@link #withCoercivity} the flux decays to zero with the current; with it the run carries the
+ * remanence ({@link #hysteresis()}): the flux falls to the residual, whose pull holds the armature
+ * until the load overcomes it, and {@link #release} refuses a run the residual flux would hold
+ * (see lib-docs/force.md).
  *
  * <p>Coil resistance follows annealed copper, α20 = 0.00393 /K (IEC 60028:1925), or the winding's
  * conductor.
@@ -124,14 +126,21 @@ public final class HoldingMagnet implements Armature {
      * iron acts as an MMF source Hc·l behind the iron path's own reluctance (its initial
      * permeability taken as the recoil permeability; the load-line method of permanent-magnet
      * circuits, e.g. Parker, Advances in Permanent Magnetism, Wiley 1990, ch. 4, from memory). Soft
-     * iron's Hc is of the order of 50 to 200 A/m (common practice). A static model: it gives the
+     * iron's Hc is of the order of 50 to 200 A/m (common practice). Statically it gives the
      * residual flux and pull and the drop-out current, and {@link #release} refuses a run when the
-     * residual pull alone holds the load. The transient run does not carry it.
+     * residual pull alone holds the load. The transient run carries it as a play operator of
+     * half-width Hc over that length ({@link #hysteresis()}).
      */
     public HoldingMagnet withCoercivity(Quantity coerciveField, Quantity ironLength) {
         double hc = Require.nonNegative("coercive field", coerciveField, Dimension.CURRENT.div(Dimension.LENGTH));
         double l = Require.length("iron length", ironLength);
         return new HoldingMagnet(magnet, travel, residual, mass, load, rate, preload, damping, r20, kelvin, conductor, hc, l).checked();
+    }
+
+    /** The iron's hysteresis for the run: a play operator of half-width Hc over the remanent length, none without {@link #withCoercivity}. */
+    @Override
+    public IronHysteresis hysteresis() {
+        return coercivity > 0 ? IronHysteresis.ofSI(coercivity * remanentLength, magnet.turns()) : IronHysteresis.NONE;
     }
 
     /** Gap left between armature and poles when held (plating, a non-magnetic shim), in each of the magnet's gaps. */
@@ -285,8 +294,8 @@ public final class HoldingMagnet implements Armature {
      * for what did not happen within the run). Fails when the current at switch-off was below the
      * {@link #holdingCurrent()}: the magnet never held the load, so no release time exists; and,
      * with {@link #withCoercivity}, when the residual pull alone holds the load. With a remanence
-     * that does release, the start is an early bound: the run leaves the remanence out, and the
-     * residual flux holds the armature down to the lower {@link #dropOutCurrent()}.
+     * that does release, the run carries it: the flux falls to the residual and the armature leaves
+     * once the falling pull meets the load.
      */
     public Release release(Transient run, Quantity switchOff) {
         if (run == null) throw Require.fail("run is missing (null)");

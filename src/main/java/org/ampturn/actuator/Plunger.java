@@ -6,6 +6,7 @@ import org.ampturn.drive.Drive;
 import org.ampturn.material.Conductor;
 import org.ampturn.wire.Winding;
 import org.ampturn.drive.EddyLadder;
+import org.ampturn.drive.IronHysteresis;
 import org.ampturn.material.MagneticMaterial;
 import org.ampturn.units.Dimension;
 import org.ampturn.units.Quantity;
@@ -584,14 +585,26 @@ public final class Plunger implements Armature {
      * its own reluctance l_fe/(μ0·μr·A), μr the material's initial relative permeability taken as
      * the recoil permeability (the load-line method of permanent-magnet circuits; e.g. Parker,
      * Advances in Permanent Magnetism, Wiley 1990, ch. 4, from memory). Soft iron's Hc is of the
-     * order of 50 to 200 A/m (common practice). A static model: it gives the residual flux and
-     * pull after switch-off, the drop-out current and voltage and the residual shim that ensures
-     * release; the transient run does not carry the remanence (it starts and ends unmagnetised).
+     * order of 50 to 200 A/m (common practice). Statically it gives the residual flux and pull
+     * after switch-off, the drop-out current and voltage and the residual shim that ensures release.
+     * The transient run carries it through {@link #hysteresis()}: a play operator of half-width Hc on
+     * the iron's curve, whose falling branch at zero current is this recoil line, so after
+     * switch-off the flux falls to {@link #residualFlux()} (not to zero), the residual pull holds or
+     * releases the plunger, and the loss Hc·l_fe·|dφ| enters the ledger.
      */
     public Plunger withCoercivity(Quantity coerciveField) {
         if (iron == null) throw Require.fail("remanence needs the iron path's length and material: give withIron(..) first");
         double hc = Require.nonNegative("coercive field", coerciveField, Dimension.CURRENT.div(Dimension.LENGTH));
         return with(ex.coercivity(hc));
+    }
+
+    /**
+     * The iron's hysteresis for the transient run: with {@link #withCoercivity}, a play operator of
+     * half-width Hc over the iron path's length (see {@link IronHysteresis}); none otherwise.
+     */
+    @Override
+    public IronHysteresis hysteresis() {
+        return ex.coercivity() > 0 ? IronHysteresis.ofSI(ex.coercivity() * ironLength, turns) : IronHysteresis.NONE;
     }
 
     private double closedReluctance(double residualGap) {

@@ -58,4 +58,12 @@ public interface Armature {
      * (it rebounds at its impact speed): rebound speed = e × impact speed (Newton's law of impact).
      */
     default double restitution() { return 0; }
+
+    /**
+     * Hysteresis of the iron ({@link IronHysteresis}): the run then carries the remanence, so after
+     * switch-off the flux falls to the iron's residual rather than to zero, and the residual pull
+     * takes part in drop-out and release. {@link IronHysteresis#NONE} (the default) unless the
+     * actuator models it; {@link #currentAt} is then the curve without hysteresis.
+     */
+    default IronHysteresis hysteresis() { return IronHysteresis.NONE; }
 }

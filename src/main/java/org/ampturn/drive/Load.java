@@ -66,6 +66,9 @@ abstract class Load {
     /** Coefficient of restitution at the stops (0: plastic). */
     double restitution() { return 0; }
 
+    /** Hysteresis of the armature's iron (none for a fixed coil). */
+    IronHysteresis hysteresis() { return IronHysteresis.NONE; }
+
     /** λ proportional to i and no motion: closed forms apply. */
     abstract boolean linear();
 
@@ -237,6 +240,7 @@ abstract class Load {
         @Override double inductance() { return a.inductanceAt(0); }
         @Override boolean moves() { return true; }
         @Override EddyLadder ladder() { return a.eddyLadder() == null ? EddyLadder.NONE : a.eddyLadder(); }
+        @Override IronHysteresis hysteresis() { return a.hysteresis() == null ? IronHysteresis.NONE : a.hysteresis(); }
         @Override double restitution() {
             double e = a.restitution();
             return e >= 0 && e <= 1 ? e : 0;

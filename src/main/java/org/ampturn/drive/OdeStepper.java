@@ -9,6 +9,7 @@ import org.apache.commons.math3.exception.NumberIsTooSmallException;
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.events.EventHandler;
 import org.apache.commons.math3.ode.nonstiff.AdaptiveStepsizeIntegrator;
+import org.apache.commons.math3.ode.nonstiff.DormandPrince54Integrator;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 import org.apache.commons.math3.ode.sampling.StepHandler;
 import org.apache.commons.math3.ode.sampling.StepInterpolator;
@@ -19,6 +20,14 @@ import org.ampturn.units.Quantity;
  * The one adapter to Commons Math: integrates a segment with the Dormand-Prince 8(5,3) embedded
  * Runge-Kutta method (Hairer, Nørsett and Wanner, Solving Ordinary Differential Equations I, 2nd ed.,
  * II.5), with dense output for the samples and event location for the solver's events.
+ *
+ * <p>With an eddy ladder the leakage mode L0/(R + R1) is far faster than the rest of the run, and
+ * an explicit method's step is held by its stability there, not by its accuracy. The Dormand-Prince
+ * 5(4) pair (same book, II.5; 6 evaluations a step) is left to its error control, which keeps it
+ * near its stability limit (4 to 5 of those time constants a step in the bench's shorted-turn run);
+ * the 8(5,3) pair costs 16 evaluations a step with its dense output and had to be held to 4 time
+ * constants, beyond which its dense output failed the shorted turn's closed form. So ladder runs
+ * use the 5(4) pair, at about a third of the evaluations. Neither is a stiff method.
  */
 final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquations {
     /** Derivative evaluations allowed for one run before it is declared too stiff to finish. */
@@ -27,8 +36,8 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     /** Longest step, in local time constants (dλ/di)/R at the final current. */
     static final double MAX_STEP_PER_TIME_CONSTANT = 2.0;
 
-    /** An eddy ladder's fastest mode may take this many of its time constants per step (stability holds there). */
-    static final double LADDER_STEPS = 2;
+
+    private final boolean ladderMethod;
 
     private final Solver sv;
     private final double rtol;
@@ -53,17 +62,10 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         double rOn = sv.rs + sv.ron + sv.rc;
         double tauInc = rOn > 0 ? lInc / rOn : Double.POSITIVE_INFINITY;
         if (sv.loops > 0) {
-            // the ladder's fast modes: L0/(R + R1) and each tube's share of dλ/di over the loops either side of it;
-            // the step must resolve them for the dense output between steps to hold them
-            EddyLadder lad = sv.ladder;
-            double fast = lad.leakage / (rOn + lad.shunt[0]);
-            for (int k = 0; k < sv.loops; k++) {
-                double rr = lad.shunt[k] + (k + 1 < sv.loops ? lad.shunt[k + 1] : 0);
-                fast = Math.min(fast, lad.share[k] * lInc / rr);
-            }
-            tauInc = Math.min(tauInc, LADDER_STEPS * fast);
-            // the coil current is (λ − λ1)/L0: the leakage sets how finely λ must be held
-            lInc = Math.min(lInc, lad.leakage);
+            // the ladder's fast modes (L0/(R + R1), the tubes' dλ/di over their loops) are left to the 5(4) pair's
+            // error control, which holds its step at its stability limit there; the coil current is (λ − λ1)/L0:
+            // the leakage sets how finely λ must be held
+            lInc = Math.min(lInc, sv.ladder.leakage);
         }
         double lamRef = Math.max(lInc * iRef, 1e-12);
         double eRef = Math.max(sv.vs * iRef * sv.tEnd, 1e-15);
@@ -83,6 +85,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
             scale[sv.lam2] = lamRef * Math.sqrt(sv.cp.l2 / sv.cp.l1);
             scale[sv.esec] = 1e-6 * eRef;
         }
+        if (sv.eHyst >= 0) scale[sv.eHyst] = 1e-6 * eRef;
         double[] abs = new double[sv.dim];
         double[] rel = new double[sv.dim];
         for (int k = 0; k < sv.dim; k++) {
@@ -95,7 +98,10 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
         // dense output wanders around V/R (above it too, which a first-order circuit cannot do)
         double maxStep = Math.min(sv.tEnd, MAX_STEP_PER_TIME_CONSTANT * tauInc);
         if (sv.sine) maxStep = Math.min(maxStep, 0.125 / sv.drive.frequency); // an eighth of the supply's period
-        this.integrator = new DormandPrince853Integrator(minStep, Math.max(maxStep, 1e3 * minStep), abs, rel);
+        // a ladder's run is held by the stability of its leakage mode: the cheaper 5(4) pair gets further per evaluation
+        this.ladderMethod = sv.loops > 0;
+        this.integrator = ladderMethod ? new DormandPrince54Integrator(minStep, Math.max(maxStep, 1e3 * minStep), abs, rel)
+                : new DormandPrince853Integrator(minStep, Math.max(maxStep, 1e3 * minStep), abs, rel);
     }
 
     private int mode() { return sv.elec.ordinal(); }
@@ -105,7 +111,7 @@ final class OdeStepper implements Solver.Stepper, FirstOrderDifferentialEquation
     long steps() { return steps; }
 
     String describe() {
-        return "Dormand-Prince 8(5,3), relative tolerance " + rtol;
+        return (ladderMethod ? "Dormand-Prince 5(4)" : "Dormand-Prince 8(5,3)") + ", relative tolerance " + rtol;
     }
 
     @Override

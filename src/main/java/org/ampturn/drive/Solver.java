@@ -28,7 +28,7 @@ final class Solver {
 
     // outputs of eval()
     static final int O_I = 0, O_VSW = 1, O_DLAM = 2, O_PSUP = 3, O_PCOIL = 4, O_PDRV = 5, O_PCL = 6, O_PMECH = 7,
-            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_PCORE = 12, O_I2 = 13, O_DLAM2 = 14, O_PSEC = 15, O_N = 16;
+            O_F = 8, O_DVC = 9, O_ACC = 10, O_PEDDY = 11, O_PCORE = 12, O_I2 = 13, O_DLAM2 = 14, O_PSEC = 15, O_PHYST = 16, O_N = 17;
 
     /** Most switching segments (each PWM edge, comparator edge or event starts one) a run may take. */
     static final long MAX_SEGMENTS = 20_000_000L;
@@ -78,6 +78,12 @@ final class Solver {
     final int lam2, esec;
     final int dim;     // state size
     final double restitution;
+    /** Iron hysteresis: the coercive current Hc·l/N (0: none), its branch (+1 rising, −1 falling) and the state of its loss integral (−1: none). */
+    final double hc;
+    final int eHyst;
+    double branch = 1;
+    /** With hysteresis, after a final switch-off with the coil open at the end: the magnetising flux linkage and the pull left. */
+    double residualLambda = Double.NaN, residualPull = Double.NaN;
     final double[] y;
     final double[] ladRate;
     Elec elec = Elec.ON;
@@ -149,7 +155,10 @@ final class Solver {
         int base = (loops > 0 ? LAD + loops : DIM) + (core != null ? 1 : 0);
         this.lam2 = cp != null ? base : -1;
         this.esec = cp != null ? base + 1 : -1;
-        this.dim = base + (cp != null ? 2 : 0);
+        base += cp != null ? 2 : 0;
+        this.hc = load.hysteresis().amps();
+        this.eHyst = hc > 0 ? base : -1;
+        this.dim = base + (hc > 0 ? 1 : 0);
         this.y = new double[dim];
         this.ladRate = new double[loops];
         this.restitution = load.restitution();
@@ -241,7 +250,7 @@ final class Solver {
         }
         double lam = s[LAM], x = s[X], v = s[V];
         double i = loops > 0 ? (e == Elec.IDLE ? 0 : (lam - s[LAD]) / ladder.leakage)
-                : e == Elec.IDLE && !moves ? 0 : load.currentAt(lam, x);
+                : e == Elec.IDLE && (!moves || hc > 0) ? 0 : load.currentAt(lam, x) + branch * hc;
         if (!Double.isFinite(i)) {
             // a trial stage beyond the core model's range: a huge current makes the integrator reject the step
             nonFiniteLambda = lam;
@@ -285,6 +294,8 @@ final class Solver {
         o[O_ACC] = acc;
         o[O_PEDDY] = pEddy;
         o[O_PCORE] = pcore;
+        // the play operator's loss Hc·l·|dφ|: the magnetising flux moves only along the branch the switch set
+        o[O_PHYST] = hc > 0 ? branch * hc * (loops > 0 ? ladRate[0] : dl) : 0;
     }
 
     /** The mode's circuit at terminal current i: writes the switch voltage and the supply, drive, clamp and capacitor terms into o; returns dλ/dt. */
@@ -335,7 +346,7 @@ final class Solver {
                 }
                 break;
             default:
-                dl = 0;
+                dl = hc > 0 && loops == 0 ? Remanence.idleFluxRate(this, s) : 0;
                 vsw = vs;
         }
         o[O_VSW] = vsw;
@@ -369,6 +380,7 @@ final class Solver {
         o[O_ACC] = 0;
         o[O_PEDDY] = 0;
         o[O_PCORE] = 0;
+        o[O_PHYST] = 0;
         o[O_I2] = i2;
         o[O_DLAM2] = dl2;
         o[O_PSEC] = cp.on ? i2 * (cp.diodeVolts + cp.loopOhms * i2) : 0;
@@ -415,8 +427,8 @@ final class Solver {
             return probeScratch[O_I];
         }
         if (loops > 0) return elec == Elec.IDLE ? 0 : (s[LAM] - s[LAD]) / ladder.leakage;
-        if (elec == Elec.IDLE && !moves) return 0;
-        return load.currentAt(s[LAM], s[X]);
+        if (elec == Elec.IDLE && (!moves || hc > 0)) return 0;
+        return load.currentAt(s[LAM], s[X]) + branch * hc;
     }
 
     /**
@@ -428,7 +440,7 @@ final class Solver {
         for (int k = 0; k < loops; k++) {
             double fk = ladder.share[k];
             double lamTube = tubeLambda(s, k);
-            double next = load.currentAt(lamTube / fk, s[X]);
+            double next = load.currentAt(lamTube / fk, s[X]) + branch * hc;
             if (!Double.isFinite(next)) {
                 nonFiniteLambda = lamTube;
                 next = Math.copySign(1e150, lamTube);
@@ -464,6 +476,7 @@ final class Solver {
             d[lam2] = scratch[O_DLAM2];
             d[esec] = scratch[O_PSEC];
         }
+        if (eHyst >= 0) d[eHyst] = scratch[O_PHYST];
     }
 
     double storedAt(double[] s) {
@@ -681,6 +694,7 @@ final class Solver {
     private void setSwitch(boolean on) {
         if (!on && switchOn) firstOn = false;
         switchOn = on;
+        if (hc > 0) branch = on ? 1 : -1;
         if (on) {
             elec = Elec.ON;
         } else if (snub) {
@@ -694,7 +708,7 @@ final class Solver {
                 i = currentNow();
             }
             if (!(clampSign * i > 0)) elec = Elec.IDLE;
-            if (elec == Elec.IDLE && core == null && cp == null) y[LAM] = loops > 0 ? y[LAD] : 0;
+            if (elec == Elec.IDLE && core == null && cp == null) y[LAM] = loops > 0 ? y[LAD] : hc > 0 ? y[LAM] : 0;
         }
     }
 
@@ -782,7 +796,8 @@ final class Solver {
                 break;
             case CLAMP_ZERO:
                 elec = Elec.IDLE;
-                if (core == null && cp == null) y[LAM] = loops > 0 ? y[LAD] : 0;
+                // with hysteresis the current reaches zero on the falling branch with the iron's residual flux left
+                if (core == null && cp == null) y[LAM] = loops > 0 ? y[LAD] : hc > 0 ? y[LAM] : 0;
                 if (finalOff && Double.isNaN(decayZero)) {
                     decayZero = t - offAt;
                     markers.add(new Marker("current zero", tq(t), Quantity.of(0, Dimension.CURRENT), "current"));
@@ -942,6 +957,7 @@ final class Solver {
             }
         }
         while (nextSample < n) record(nextSample, y);
+        if (hc > 0) Remanence.atEnd(this);
         if (stepper instanceof OdeStepper) {
             OdeStepper o = (OdeStepper) stepper;
             notes.add(o.steps() + " accepted steps, " + o.evaluations() + " derivative evaluations");

@@ -36,6 +36,7 @@ public final class Transient {
     private final List<String> cautions;
     private final double duration;
     private final double acRms, acPeak, coreLoss;
+    private final double residualLambda, residualPull;
 
     private Transient(Solver sv) {
         Recorder r = sv.rec;
@@ -71,7 +72,11 @@ public final class Transient {
         double[] y = sv.y;
         double stored = sv.storedAt(y) - sv.initialStored;
         energy = new EnergyLedger(y[Solver.ESUP], y[Solver.ECOIL], y[Solver.EDRV], y[Solver.ECL], stored, y[Solver.EMECH],
-                sv.loops > 0 ? y[Solver.EEDDY] : 0, sv.core != null ? y[sv.ecore] : 0, sv.cp != null ? y[sv.esec] : 0);
+                sv.loops > 0 ? y[Solver.EEDDY] : 0, sv.core != null ? y[sv.ecore] : 0, sv.cp != null ? y[sv.esec] : 0)
+                .withArmatureHysteresis(sv.eHyst >= 0 ? y[sv.eHyst] : 0);
+
+        residualLambda = sv.residualLambda;
+        residualPull = sv.residualPull;
 
         double tau = sv.load.linear() && !sv.moves && sv.cp == null ? sv.load.inductance() / (sv.rs + sv.ron + sv.rc) : sv.t63;
         metrics = new Metrics(tq(tau), tq(sv.t63), tq(sv.t90), tq(sv.t99),
@@ -305,6 +310,19 @@ public final class Transient {
     /** How the run was solved, and what to know about the result. */
     public List<String> notes() { return notes; }
 
+    /**
+     * With an armature whose iron has {@link IronHysteresis}: the magnetising flux linkage left at the
+     * end of the run, after a final switch-off with the current at zero (the iron's residual at the
+     * armature's last position); NaN without hysteresis or when the run did not end so.
+     */
+    public Quantity residualFluxLinkage() { return Quantity.of(residualLambda, Dimension.FLUX); }
+
+    /**
+     * The magnetic force of that residual flux on the armature at the end of the run, in the
+     * drive's sign (toward closing); NaN as for {@link #residualFluxLinkage()}.
+     */
+    public Quantity residualForce() { return Quantity.of(residualPull, Dimension.FORCE); }
+
     /** Safety cautions (switch voltage above 60 V, stored energy above 1 J, avalanche), deferring to local codes and licensed practice. */
     public List<String> cautions() { return cautions; }
 
@@ -312,6 +330,7 @@ public final class Transient {
     @Override
     public String toString() {
         String s = "transient " + tq(duration) + " of " + circuit + ": " + metrics;
+        if (!Double.isNaN(residualPull)) s += ", residual force " + Quantity.of(residualPull, Dimension.FORCE);
         if (!cautions.isEmpty()) s += "; CAUTION: " + String.join("; ", cautions);
         return s;
     }

@@ -436,7 +436,7 @@ public final class LibraryFuzz {
         }
         return c.equals("Transient") && List.of("timeTo", "timeConstant", "timeTo63", "timeTo90", "timeTo99", "decayTime", "ripple", "cycleMean",
                 "pullInCurrentTime", "pullInTime", "dropOutTime", "impactSpeed", "lastCycleRmsCurrent", "lastCyclePeakCurrent",
-                "coreLossEnergy").contains(m.getName());
+                "coreLossEnergy", "residualFluxLinkage", "residualForce").contains(m.getName());
     }
 
     /**
