@@ -143,7 +143,10 @@ public final class Drive {
 
     /** A sine supply switched on at the given phase of its voltage, in degrees: 0 a rising zero crossing, 90 the positive peak. */
     public Drive withSwitchOnPhase(double degrees) {
-        if (!isAc()) throw new IllegalStateException("withSwitchOnPhase applies to a sine drive, not to a " + this);
+        if (!isAc()) {
+            throw new IllegalStateException("withSwitchOnPhase applies to a sine or rectified-sine drive only; this is a "
+                    + (scheme == Scheme.PEAK_AND_HOLD ? "peak-and-hold" : scheme.name()) + " drive");
+        }
         if (!(degrees >= 0 && degrees < 360)) {
             throw Require.fail("switch-on phase must be from 0° up to (not including) 360°, got " + degrees + "°");
         }
