@@ -209,6 +209,8 @@ public final class CoreLoss {
      * {@code b} (T), with b[n−1] = b[0]. ΔB is max(b) − min(b) (one major loop per period).
      */
     public double densityPiecewiseLinearAt(double[] t, double[] b) {
+        Require.present("corner times", t);
+        Require.present("corner flux densities", b);
         int n = t.length;
         if (n != b.length || n < 3) {
             throw Require.fail("a piecewise-linear flux needs at least 3 corner points with one B per time, got "
