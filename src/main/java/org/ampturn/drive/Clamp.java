@@ -11,6 +11,7 @@ import org.ampturn.units.Require;
  *
  * <ul>
  * <li>across the coil (freewheel): {@link #diode()}, {@link #zener(Quantity)}, {@link #resistor(Quantity)};
+ * and, for a coil on a sine supply, {@link #bidirectional(Quantity)};
  *     the coil sees {@code −(V0 + R·i)}, the switch {@code Vs + V0 + R·i};
  * <li>across the switch: {@link #tvs(Quantity)} and {@link #none(Quantity)} (the switch itself avalanches);
  *     the switch sees {@code V0 + R·i} and the supply keeps feeding the coil during the decay;
@@ -26,7 +27,7 @@ public final class Clamp {
     public enum Placement { ACROSS_COIL, ACROSS_SWITCH, SNUBBER }
 
     /** The kind of clamp. */
-    public enum Kind { NONE, DIODE, ZENER, RESISTOR, TVS, SNUBBER }
+    public enum Kind { NONE, DIODE, ZENER, RESISTOR, TVS, SNUBBER, BIDIRECTIONAL }
 
     /** Typical silicon diode forward drop (common practice, from memory). */
     static final double DEFAULT_DROP = 0.7;
@@ -86,6 +87,23 @@ public final class Clamp {
         return new Clamp(Kind.RESISTOR, vf, rr, 0, vf);
     }
 
+    /**
+     * A clamp across the coil that conducts both ways at ±Vc (back-to-back zeners, a bidirectional
+     * TVS or a varistor, with zero dynamic resistance): the clamp of a coil on a sine supply, which
+     * may be switched off at a negative current. A one-way clamp there would conduct in every
+     * negative half cycle and short the supply (common practice).
+     */
+    public static Clamp bidirectional(Quantity clampVoltage) {
+        return bidirectional(clampVoltage, Quantity.of(0, Dimension.RESISTANCE));
+    }
+
+    /** A bidirectional clamp across the coil: the coil sees ∓(Vc + Rd·|i|) while it conducts. */
+    public static Clamp bidirectional(Quantity clampVoltage, Quantity dynamicResistance) {
+        double v = Require.positive("bidirectional clamp voltage", clampVoltage, Dimension.VOLTAGE, Drive.MAX_VOLTS);
+        double rd = Require.nonNegative("bidirectional clamp dynamic resistance", dynamicResistance, Dimension.RESISTANCE, Drive.MAX_OHMS);
+        return new Clamp(Kind.BIDIRECTIONAL, v, rd, 0, 0);
+    }
+
     /** A unidirectional TVS diode across the switch, with zero dynamic resistance. */
     public static Clamp tvs(Quantity clampVoltage) {
         return tvs(clampVoltage, Quantity.of(0, Dimension.RESISTANCE));
@@ -139,6 +157,7 @@ public final class Clamp {
             case ZENER: return "diode + zener across the coil, " + v(v0 - diodeDrop) + " + " + v(diodeDrop);
             case RESISTOR: return "resistor " + ohms(r) + " with blocking diode (" + v(diodeDrop) + ") across the coil";
             case TVS: return "TVS across the switch, " + v(v0) + (r > 0 ? " + " + ohms(r) + " dynamic" : "");
+            case BIDIRECTIONAL: return "bidirectional clamp across the coil, ±" + v(v0) + (r > 0 ? " + " + ohms(r) + " dynamic" : "");
             default: return "RC snubber across the switch, " + ohms(r) + " + " + Quantity.of(c, Dimension.CAPACITANCE);
         }
     }

@@ -207,6 +207,10 @@ final class Solver {
             throw Require.fail("with a sine supply the clamp must sit across the coil (Clamp.diode(), zener(..), resistor(..)), not the "
                     + clamp + ": a clamp across the switch would see the supply's changing voltage, which is not modelled");
         }
+        if (drive.scheme == Drive.Scheme.SINE && clamp != null && clamp.kind() != Clamp.Kind.BIDIRECTIONAL) {
+            throw Require.fail("a one-way clamp across a coil on a sine supply shorts it in the negative half cycles: use "
+                    + "Clamp.bidirectional(..) (back-to-back zeners, a bidirectional TVS or a varistor), not the " + clamp);
+        }
         if (drive.scheme == Drive.Scheme.HALF_WAVE && clamp == null) {
             throw Require.fail("a half-wave rectified supply needs the coil's freewheel path in the negative half cycles: "
                     + "add .clamp(Clamp.diode()) (or a zener or resistor clamp across the coil)");
@@ -265,6 +269,7 @@ final class Solver {
                 double im = load.currentAt(lam, x);
                 dl = Double.isFinite(im) ? core.idleRate(im) : 0;
                 pcore = -im * dl;
+                o[O_VSW] -= dl; // the open coil's voltage is its flux decaying through the core
             } else {
                 double a = branch(e, s, 0, o), b = a - branch(e, s, 1, o);
                 double im = i;
@@ -347,7 +352,7 @@ final class Solver {
                 break;
             default:
                 dl = hc > 0 && loops == 0 ? Remanence.idleFluxRate(this, s) : 0;
-                vsw = vs;
+                vsw = (sine ? drive.voltsAt(evalT) : vs) - dl; // the open coil's voltage is dλ/dt
         }
         o[O_VSW] = vsw;
         o[O_PSUP] = psup;
@@ -703,7 +708,7 @@ final class Solver {
             elec = Elec.CLAMP; // the clamp conducts if the coil's current is above zero with it conducting
             clampSign = 1;
             double i = currentNow();
-            if (drive.scheme == Drive.Scheme.SINE && i < 0) { // a bidirectional clamp carries a negative current on
+            if (clamp.kind() == Clamp.Kind.BIDIRECTIONAL && i < 0) { // a bidirectional clamp carries a negative current on
                 clampSign = -1;
                 i = currentNow();
             }

@@ -239,7 +239,7 @@ public final class Session implements AutoCloseable {
      */
     private boolean renew() {
         List<Snippet> active = movable();
-        // each moved declaration is compiled again (about 5 ms): a session of very many names keeps its engine
+        // each moved declaration is compiled again (5-15 ms): a session of very many names keeps its engine
         if (active.size() > MAX_MOVED) return false;
         List<String> replay = new ArrayList<>();
         List<Snippet> replayed = new ArrayList<>(); // the old snippet of each line of replay

@@ -8,6 +8,8 @@ import org.ampturn.coil.WoundCoil;
 import org.ampturn.material.CoreLoss;
 import org.ampturn.material.MagneticMaterial;
 import org.ampturn.material.Materials;
+import org.ampturn.units.Dimension;
+import org.ampturn.units.Quantity;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -85,6 +87,14 @@ class CoreLossInLedgerTest {
         assertTrue(run.energy().core().si() > 0);
         assertTrue(run.energy().relativeBalanceError() < 1e-6, run.energy().toString());
         assertEquals(0, run.current().values()[run.current().values().length - 1], 1e-12);
+        // the flux left at current zero does decay: the core-loss branch carries it down while the coil is open
+        double zeroAt = ms(20).si() + run.decayTime().si();
+        double atZero = run.fluxLinkage().at(Quantity.of(zeroAt, Dimension.TIME)).si();
+        double[] lam = run.fluxLinkage().values();
+        assertTrue(atZero > 0, "flux at current zero " + atZero);
+        assertTrue(lam[lam.length - 1] < 0.5 * atZero, "flux falls from " + atZero + " to " + lam[lam.length - 1]);
+        // and the open coil shows that decay as its voltage: the switch sees the supply minus dλ/dt, above the supply
+        assertTrue(run.switchVoltage().at(Quantity.of(zeroAt + 1e-4, Dimension.TIME)).si() > 1, "switch above the 1 V supply while the flux decays");
     }
 
     @Test
