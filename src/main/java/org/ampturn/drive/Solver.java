@@ -174,7 +174,7 @@ final class Solver {
                 : rTot > 0 ? vs / rTot : Double.POSITIVE_INFINITY;
         validate();
         // the recorder's arrays and the transient's copies of them
-        org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0)));
+        org.ampturn.units.Require.fitsInMemory("samples of a transient", n, 2 * 8 * (14 + (moves ? 5 : 0) + (snub ? 1 : 0) + (ecore >= 0 ? 2 : 0) + (cp != null ? 1 : 0)));
         this.rec = new Recorder(n, moves, snub, ecore, cp != null);
         if (core != null) notes.add(core.describe(c.coil.temperature().si()));
         if (cp != null && c.coil != null && c.coreLoss && CoreLossBranch.of(c.coil, 1) != null) {

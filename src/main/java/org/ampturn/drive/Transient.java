@@ -257,7 +257,19 @@ public final class Transient {
         if (fraction == 0.99) return metrics.timeTo99();
         double level = fraction * metrics.finalCurrent().si();
         if (!Double.isFinite(level)) return tq(Double.NaN);
-        return tq(source.timeToCurrent(level, duration));
+        return tq(timeToCurrent(level));
+    }
+
+    /**
+     * The exact crossing time of a level; a level below 1e-12 of the run's largest finite current (peak or final) is crossed
+     * within 1e-12 of a time constant of the start (a run starts at zero current), below what the
+     * solver's events resolve: 0 s.
+     */
+    private double timeToCurrent(double amps) {
+        double fin = Math.abs(metrics.finalCurrent().si()), peak = Math.abs(metrics.peakCurrent().si());
+        double scale = Math.max(Double.isFinite(fin) ? fin : 0, Double.isFinite(peak) ? peak : 0);
+        if (amps <= 1e-12 * scale) return 0;
+        return source.timeToCurrent(amps, duration);
     }
 
     /**
@@ -269,7 +281,7 @@ public final class Transient {
      */
     public Quantity timeTo(Quantity level) {
         double amps = Require.positive("current level", level, Dimension.CURRENT);
-        return tq(source.timeToCurrent(amps, duration));
+        return tq(timeToCurrent(amps));
     }
 
     /**
