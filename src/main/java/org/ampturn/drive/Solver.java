@@ -204,7 +204,8 @@ final class Solver {
             throw Require.fail("a sine supply drives a fixed coil: moving armatures and eddy ladders are not modelled with it");
         }
         if (sine && clamp != null && !acrossCoil) {
-            throw Require.fail("with a sine supply the clamp must sit across the coil (Clamp.diode(), zener(..), resistor(..)), not the "
+            throw Require.fail("with a sine supply the clamp must sit across the coil (Clamp.bidirectional(..) on a sine; diode(), zener(..) "
+                    + "or resistor(..) on a rectified sine), not the "
                     + clamp + ": a clamp across the switch would see the supply's changing voltage, which is not modelled");
         }
         if (drive.scheme == Drive.Scheme.SINE && clamp != null && clamp.kind() != Clamp.Kind.BIDIRECTIONAL) {
