@@ -80,7 +80,7 @@ public final class Session implements AutoCloseable {
     private volatile long generation;
 
     private volatile SessionEngine engine;
-    /** The fewest snippets between renewals (see {@link #renew()}). */
+    /** The fewest snippets between renewals (see {@link #renew(List)}). */
     private int renewAt = RENEW_AT;
     /** The snippet count of the engine just after its last renewal (0 for the first engine). */
     private long renewedAt;
@@ -191,13 +191,14 @@ public final class Session implements AutoCloseable {
     private void maybeRenew() {
         long count = shell.snippets().count();
         if (count < nextRenewal) return;
-        long due = renewedAt + Math.max(renewAt, SNIPPETS_PER_MOVED * (long) movable().size());
+        List<Snippet> moving = movable();
+        long due = renewedAt + Math.max(renewAt, SNIPPETS_PER_MOVED * (long) moving.size());
         if (count < due) {
             nextRenewal = due;
             return;
         }
         try {
-            if (renew()) {
+            if (renew(moving)) {
                 renewedAt = shell.snippets().count();
                 nextRenewal = renewedAt + renewAt;
                 return;
@@ -235,10 +236,10 @@ public final class Session implements AutoCloseable {
      * ({@code $1}, {@code $2}, names the console never shows) are not moved. Each entry keeps the new
      * snippets of what it declared, so {@link #undoLast()} works as before. Under the lock.
      *
+     * @param active the declarations to move ({@link #movable()})
      * @return true when the session was renewed
      */
-    private boolean renew() {
-        List<Snippet> active = movable();
+    private boolean renew(List<Snippet> active) {
         // each moved declaration is compiled again (5-15 ms): a session of very many names keeps its engine
         if (active.size() > MAX_MOVED) return false;
         List<String> replay = new ArrayList<>();
